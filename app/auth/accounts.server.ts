@@ -1,0 +1,76 @@
+import { and, eq, gt, isNull, or, sql } from "drizzle-orm";
+import { audit } from "~/audit.server";
+import type { Db } from "~/db/client.server";
+import { identities, invitations, members, users, workshops } from "~/db/schema";
+import type { ProviderProfile } from "./github.server";
+
+/**
+ * Finds the user behind a provider identity, creating it on first sign-in, and accepts a
+ * pending invitation (by login or e-mail) when the user is not yet a member anywhere.
+ */
+export async function signInFromProfile(db: Db, profile: ProviderProfile, now = new Date()) {
+  return db.transaction(async (tx) => {
+    const [known] = await tx
+      .select({ userId: identities.userId })
+      .from(identities)
+      .where(and(eq(identities.provider, "github"), eq(identities.providerUserId, profile.providerUserId)));
+    let userId = known?.userId;
+    if (!userId) {
+      const [created] = await tx.insert(users).values({ name: profile.name, email: profile.email }).returning({ id: users.id });
+      userId = created.id;
+      await tx.insert(identities).values({ userId, provider: "github", providerUserId: profile.providerUserId, login: profile.login });
+    } else {
+      await tx.update(identities).set({ login: profile.login }).where(and(eq(identities.provider, "github"), eq(identities.providerUserId, profile.providerUserId)));
+    }
+
+    const [membership] = await tx.select({ id: members.id, workshopId: members.workshopId }).from(members).where(eq(members.userId, userId));
+    if (!membership) {
+      const [invite] = await tx
+        .select()
+        .from(invitations)
+        .where(
+          and(
+            isNull(invitations.acceptedAt),
+            gt(invitations.expiresAt, now),
+            or(
+              sql`lower(${invitations.githubLogin}) = lower(${profile.login})`,
+              profile.email ? sql`lower(${invitations.email}) = lower(${profile.email})` : sql`false`,
+            ),
+          ),
+        )
+        .orderBy(invitations.createdAt)
+        .limit(1);
+      if (invite) {
+        const skill = invite.role === "apprentice" ? "apprentice" : invite.role === "senior" ? "senior" : "technician";
+        await tx.insert(members).values({ workshopId: invite.workshopId, userId, role: invite.role, skill });
+        await tx.update(invitations).set({ acceptedAt: now }).where(eq(invitations.id, invite.id));
+        await audit(tx, { workshopId: invite.workshopId, actorUserId: userId, action: "member.join", entity: "member", entityId: userId, after: { role: invite.role } });
+      }
+    }
+    return userId;
+  });
+}
+
+/** The signed-in person and, when they have one, their workshop membership. */
+export async function loadAccount(db: Db, userId: string) {
+  const [row] = await db
+    .select({
+      userId: users.id,
+      name: users.name,
+      email: users.email,
+      memberId: members.id,
+      role: members.role,
+      skill: members.skill,
+      status: members.status,
+      workshopId: workshops.id,
+      workshopName: workshops.name,
+      workshopSlug: workshops.slug,
+    })
+    .from(users)
+    .leftJoin(members, eq(members.userId, users.id))
+    .leftJoin(workshops, eq(workshops.id, members.workshopId))
+    .where(eq(users.id, userId));
+  return row ?? null;
+}
+
+export type Account = NonNullable<Awaited<ReturnType<typeof loadAccount>>>;

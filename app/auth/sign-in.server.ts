@@ -1,0 +1,53 @@
+import { redirect } from "react-router";
+import { audit } from "~/audit.server";
+import type { Db } from "~/db/client.server";
+import { env, isSecure } from "~/env.server";
+import { loadAccount, signInFromProfile } from "./accounts.server";
+import { getAuthenticator } from "./authenticator.server";
+import { ROLE_HOME } from "./permissions";
+import { clientIp, limitSignIn } from "./rate-limit.server";
+import { createSession, readSessionToken, revokeSession, sessionCookie } from "./session.server";
+
+/** Step one: send the browser to the provider (remix-auth throws the redirect with the state cookie). */
+export async function startSignIn(db: Db, request: Request) {
+  const e = env();
+  await limitSignIn(db, `ip:${clientIp(request)}`, e.SIGN_IN_LIMIT_PER_IP, e.SIGN_IN_WINDOW_S);
+  return getAuthenticator().authenticate("github", request);
+}
+
+export class SignInRefused extends Error {}
+
+/** Step two: the provider sent the browser back. Verify state and code, then open a fresh session. */
+export async function finishSignIn(db: Db, request: Request) {
+  const e = env();
+  await limitSignIn(db, `ip:${clientIp(request)}`, e.SIGN_IN_LIMIT_PER_IP, e.SIGN_IN_WINDOW_S);
+  let profile;
+  try {
+    profile = await getAuthenticator().authenticate("github", request);
+  } catch (error) {
+    if (error instanceof Response) throw error;
+    throw new SignInRefused(describe(error));
+  }
+  await limitSignIn(db, `account:github:${profile.providerUserId}`, e.SIGN_IN_LIMIT_PER_ACCOUNT, e.SIGN_IN_WINDOW_S);
+  const userId = await signInFromProfile(db, profile);
+  const account = await loadAccount(db, userId);
+  // Whatever session the browser had is dropped: the id always changes at sign-in.
+  const old = readSessionToken(request, isSecure(e));
+  if (old) await revokeSession(db, old);
+  const token = await createSession(db, userId, request.headers.get("user-agent"));
+  await audit(db, { workshopId: account?.workshopId ?? null, actorUserId: userId, action: "auth.sign_in", entity: "user", entityId: userId, after: { login: profile.login } });
+  const home = account?.role ? ROLE_HOME[account.role] : "/welcome";
+  const headers = new Headers();
+  headers.append("Set-Cookie", sessionCookie(token, isSecure(e)));
+  // The one-time OAuth state cookie has done its job.
+  headers.append("Set-Cookie", `rl_oauth=; Path=/auth; Max-Age=0; HttpOnly; SameSite=Lax${isSecure(e) ? "; Secure" : ""}`);
+  return redirect(home, { headers });
+}
+
+function describe(error: unknown): string {
+  const text = error instanceof Error ? `${error.name}: ${error.message}` : String(error);
+  if (/state/i.test(text)) return "The sign-in could not be matched to this browser (the security check on its state failed). Start the sign-in again from this page.";
+  if (/access_denied/i.test(text)) return "The sign-in was cancelled at the provider.";
+  if (/code/i.test(text) || /invalid_grant|Unexpected/i.test(text)) return "The provider did not accept this sign-in (the one-time code was missing, used already or expired). Start again.";
+  return "The sign-in did not complete. Start again.";
+}

@@ -1,0 +1,50 @@
+import { and, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
+import type { Db } from "~/db/client.server";
+import { cases, causes, members, users, vehicles } from "~/db/schema";
+
+import type { CaseState } from "./states";
+
+export type CaseFilter = { state?: CaseState; q?: string; assignedTo?: string; limit?: number };
+
+/** One query for the case list, scoped to the workshop; the search matches plate, VIN, make, model or complaint. */
+export async function listCases(db: Db, workshopId: string, filter: CaseFilter = {}) {
+  const where: SQL[] = [eq(cases.workshopId, workshopId)];
+  if (filter.state) where.push(eq(cases.state, filter.state));
+  if (filter.assignedTo) where.push(eq(cases.assignedMemberId, filter.assignedTo));
+  if (filter.q) {
+    const like = `%${filter.q.replace(/[%_\\]/g, (c) => `\\${c}`)}%`;
+    where.push(
+      or(
+        ilike(vehicles.registration, like),
+        ilike(vehicles.vin, like),
+        ilike(vehicles.make, like),
+        ilike(vehicles.model, like),
+        ilike(cases.complaint, like),
+        sql`${cases.number}::text = ${filter.q.replace(/^#/, "")}`,
+      )!,
+    );
+  }
+  return db
+    .select({
+      id: cases.id,
+      number: cases.number,
+      state: cases.state,
+      complaint: cases.complaint,
+      needsSenior: cases.needsSenior,
+      openedAt: cases.openedAt,
+      registration: vehicles.registration,
+      vehicle: sql<string>`${vehicles.make} || ' ' || ${vehicles.model} || ' (' || ${vehicles.year} || ')'`,
+      assignedName: users.name,
+      conclusion: causes.name,
+    })
+    .from(cases)
+    .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
+    .leftJoin(members, eq(members.id, cases.assignedMemberId))
+    .leftJoin(users, eq(users.id, members.userId))
+    .leftJoin(causes, eq(causes.id, cases.conclusionCauseId))
+    .where(and(...where))
+    .orderBy(desc(cases.openedAt), desc(cases.number))
+    .limit(filter.limit ?? 100);
+}
+
+export type CaseRow = Awaited<ReturnType<typeof listCases>>[number];

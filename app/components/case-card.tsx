@@ -1,0 +1,26 @@
+import { Link } from "react-router";
+import type { CaseRow } from "~/cases/list.server";
+import { formatDate, STATE_LABEL } from "./format";
+
+export function CaseCard({ c }: { c: Pick<CaseRow, "id" | "number" | "state" | "complaint" | "registration" | "vehicle" | "assignedName" | "openedAt" | "needsSenior" | "conclusion"> }) {
+  return (
+    <article className="rounded-card border border-rule bg-card p-4" aria-labelledby={`case-${c.id}`}>
+      <div className="flex items-baseline justify-between gap-3">
+        <h3 id={`case-${c.id}`} className="font-semibold">
+          <Link to={`/cases/${c.id}`} className="hover:underline">
+            <span className="tabular">#{c.number}</span> · {c.registration}
+          </Link>
+        </h3>
+        <span className="text-sm text-graphite-600">{STATE_LABEL[c.state]}</span>
+      </div>
+      <p className="text-sm text-graphite-600">{c.vehicle}</p>
+      <p className="mt-2">“{c.complaint}”</p>
+      {c.conclusion ? <p className="mt-2 text-sm">Cause: <strong>{c.conclusion}</strong></p> : null}
+      <p className="mt-2 flex flex-wrap gap-x-3 text-sm text-graphite-600">
+        <span>{c.assignedName ? `With ${c.assignedName}` : "Not assigned"}</span>
+        <span className="tabular">Opened {formatDate(c.openedAt)}</span>
+        {c.needsSenior ? <strong className="text-uv-700">Senior asked for</strong> : null}
+      </p>
+    </article>
+  );
+}

@@ -1,0 +1,57 @@
+import type { Priority } from "../../seeds/kb/types";
+
+// ISO 3864 in spirit: prohibition circle with a bar, warning triangle, mandatory-style filled
+// circle, safe-condition square. The shape carries the meaning for anyone who cannot tell the colours apart.
+export const PRIORITY_COPY: Record<Priority, { label: string; description: string }> = {
+  stop: { label: "Stop", description: "Unsafe to drive. Do not use the car until this is fixed." },
+  soon: { label: "Soon", description: "Needs fixing soon; book it in within weeks, not months." },
+  watch: { label: "Watch", description: "Fine for now. We will look again at the next visit." },
+  sound: { label: "Sound", description: "Checked and in good order." },
+};
+
+function Shape({ priority }: { priority: Priority }) {
+  switch (priority) {
+    case "stop":
+      return (
+        <svg viewBox="0 0 24 24" className="h-6 w-6 shrink-0" aria-hidden="true">
+          <circle cx="12" cy="12" r="9.5" fill="none" stroke="var(--color-stop)" strokeWidth="3" />
+          <line x1="5.5" y1="18.5" x2="18.5" y2="5.5" stroke="var(--color-stop)" strokeWidth="3" />
+        </svg>
+      );
+    case "soon":
+      return (
+        <svg viewBox="0 0 24 24" className="h-6 w-6 shrink-0" aria-hidden="true">
+          <path d="M12 2.5 L22.5 21 H1.5 Z" fill="var(--color-soon)" stroke="#16181b" strokeWidth="1.5" strokeLinejoin="round" />
+          <rect x="11" y="9" width="2" height="6.5" fill="#16181b" />
+          <rect x="11" y="17" width="2" height="2" fill="#16181b" />
+        </svg>
+      );
+    case "watch":
+      return (
+        <svg viewBox="0 0 24 24" className="h-6 w-6 shrink-0" aria-hidden="true">
+          <circle cx="12" cy="12" r="10" fill="var(--color-watch)" />
+          <circle cx="12" cy="12" r="3.5" fill="#fff" />
+        </svg>
+      );
+    case "sound":
+      return (
+        <svg viewBox="0 0 24 24" className="h-6 w-6 shrink-0" aria-hidden="true">
+          <rect x="2.5" y="2.5" width="19" height="19" rx="2" fill="var(--color-sound)" />
+          <path d="M7 12.5 L10.5 16 L17 8.5" fill="none" stroke="#fff" strokeWidth="2.5" />
+        </svg>
+      );
+  }
+}
+
+export function PriorityMark({ priority, showDescription = false }: { priority: Priority; showDescription?: boolean }) {
+  const copy = PRIORITY_COPY[priority];
+  return (
+    <span className="inline-flex items-start gap-2" data-priority={priority}>
+      <Shape priority={priority} />
+      <span>
+        <span className="font-semibold">{copy.label}</span>
+        {showDescription ? <span className="block text-sm text-graphite-700">{copy.description}</span> : null}
+      </span>
+    </span>
+  );
+}

@@ -1,0 +1,29 @@
+import { asc, count, eq } from "drizzle-orm";
+import type { Db } from "~/db/client.server";
+import { causes, checkLinks, checks, symptomLinks, symptoms } from "~/db/schema";
+
+/** The knowledge base at a glance: counts, and the systems with their failure-mode counts. */
+export async function kbOverview(db: Db, workshopId: string) {
+  const [[s], [c], [k], [sl], [cl]] = await Promise.all([
+    db.select({ n: count() }).from(symptoms).where(eq(symptoms.workshopId, workshopId)),
+    db.select({ n: count() }).from(causes).where(eq(causes.workshopId, workshopId)),
+    db.select({ n: count() }).from(checks).where(eq(checks.workshopId, workshopId)),
+    db.select({ n: count() }).from(symptomLinks).where(eq(symptomLinks.workshopId, workshopId)),
+    db.select({ n: count() }).from(checkLinks).where(eq(checkLinks.workshopId, workshopId)),
+  ]);
+  const tree = await db
+    .select({ id: causes.id, parentId: causes.parentId, level: causes.level, name: causes.name, system: causes.system, priority: causes.priority })
+    .from(causes)
+    .where(eq(causes.workshopId, workshopId))
+    .orderBy(asc(causes.system), asc(causes.name));
+  const symptomList = await db
+    .select({ id: symptoms.id, name: symptoms.name, system: symptoms.system, synonyms: symptoms.synonyms })
+    .from(symptoms)
+    .where(eq(symptoms.workshopId, workshopId))
+    .orderBy(asc(symptoms.system), asc(symptoms.name));
+  return {
+    counts: { symptoms: s.n, causes: c.n, checks: k.n, symptomLinks: sl.n, checkLinks: cl.n },
+    tree,
+    symptoms: symptomList,
+  };
+}

@@ -1,0 +1,48 @@
+import "@fontsource/ibm-plex-sans/400.css";
+import "@fontsource/ibm-plex-sans/500.css";
+import "@fontsource/ibm-plex-sans/600.css";
+import "@fontsource/ibm-plex-sans/700.css";
+import "./app.css";
+
+import { isRouteErrorResponse, Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
+import type { Route } from "./+types/root";
+import { ErrorPage } from "./components/error-page";
+import { dbContext } from "./context";
+import { serverDb } from "./db/pool.server";
+
+export const middleware: Route.MiddlewareFunction[] = [
+  async ({ context }, next) => {
+    context.set(dbContext, serverDb());
+    return next();
+  },
+];
+
+export function Layout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en">
+      <head>
+        <meta charSet="utf-8" />
+        <meta name="viewport" content="width=device-width, initial-scale=1" />
+        <meta name="color-scheme" content="light dark" />
+        <link rel="icon" href="/favicon.ico" />
+        <Meta />
+        <Links />
+      </head>
+      <body>
+        {children}
+        <ScrollRestoration />
+        <Scripts />
+      </body>
+    </html>
+  );
+}
+
+export default function App() {
+  return <Outlet />;
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  if (isRouteErrorResponse(error)) return <ErrorPage status={error.status} message={typeof error.data === "string" ? error.data : undefined} />;
+  if (import.meta.env.DEV && error instanceof Error) console.error(error);
+  return <ErrorPage status={500} />;
+}

@@ -1,0 +1,16 @@
+import { type RouteConfig, index, layout, route } from "@react-router/dev/routes";
+
+export default [
+  index("routes/landing.tsx"),
+  route("sign-in", "routes/auth/sign-in.tsx"),
+  route("sign-out", "routes/auth/sign-out.tsx"),
+  route("auth/github", "routes/auth/github.tsx"),
+  route("auth/github/callback", "routes/auth/callback.tsx"),
+  layout("routes/app/layout.tsx", [
+    route("board", "routes/board/board.tsx"),
+    route("cases", "routes/cases/list.tsx"),
+    route("kb", "routes/kb/overview.tsx"),
+    route("settings", "routes/settings/workshop.tsx"),
+  ]),
+  route("*", "routes/not-found.tsx"),
+] satisfies RouteConfig;

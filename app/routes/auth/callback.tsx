@@ -1,0 +1,18 @@
+import { data } from "react-router";
+import { finishSignIn, SignInRefused } from "~/auth/sign-in.server";
+import { dbContext } from "~/context";
+import { SignInPanel } from "./sign-in-panel";
+import type { Route } from "./+types/callback";
+
+export async function loader({ request, context }: Route.LoaderArgs) {
+  try {
+    return await finishSignIn(context.get(dbContext), request);
+  } catch (error) {
+    if (error instanceof SignInRefused) return data({ message: error.message }, { status: 400 });
+    throw error;
+  }
+}
+
+export default function Callback({ loaderData }: Route.ComponentProps) {
+  return <SignInPanel message={loaderData.message} />;
+}

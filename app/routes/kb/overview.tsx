@@ -1,0 +1,86 @@
+import { memberContext } from "~/auth/guards.server";
+import { PriorityMark } from "~/components/priority";
+import { dbContext } from "~/context";
+import { kbOverview } from "~/kb/overview.server";
+import type { Route } from "./+types/overview";
+
+export async function loader({ context }: Route.LoaderArgs) {
+  const member = context.get(memberContext);
+  return kbOverview(context.get(dbContext), member.workshopId);
+}
+
+export function meta() {
+  return [{ title: "Knowledge base — Ramplight" }];
+}
+
+const SYSTEM_LABEL: Record<string, string> = {
+  brakes: "Brakes",
+  suspension_steering: "Suspension and steering",
+  wheels_tyres: "Wheels and tyres",
+  driveline: "Driveline",
+  engine_fuel_emissions: "Engine, fuelling and emissions",
+  cooling: "Cooling",
+  electrical: "Electrical",
+  exhaust: "Exhaust",
+};
+
+export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
+  const { counts, tree, symptoms } = loaderData;
+  const systems = tree.filter((n) => n.level === "system");
+  const childrenOf = (id: string) => tree.filter((n) => n.parentId === id);
+  return (
+    <div>
+      <h1 className="text-2xl font-semibold">Knowledge base</h1>
+      <dl className="mt-4 grid grid-cols-2 gap-3 sm:grid-cols-5">
+        {[
+          ["Symptoms", counts.symptoms],
+          ["Causes", counts.causes],
+          ["Checks", counts.checks],
+          ["Symptom links", counts.symptomLinks],
+          ["Check links", counts.checkLinks],
+        ].map(([label, n]) => (
+          <div key={label} className="rounded-card border border-rule bg-card p-3">
+            <dt className="text-sm text-graphite-600">{label}</dt>
+            <dd className="tabular text-xl font-semibold">{n}</dd>
+          </div>
+        ))}
+      </dl>
+      <div className="mt-8 grid gap-8 lg:grid-cols-2">
+        <section aria-labelledby="tree">
+          <h2 id="tree" className="text-xl font-semibold">Cause tree</h2>
+          {systems.map((sys) => (
+            <details key={sys.id} className="mt-3 rounded-card border border-rule bg-card p-3">
+              <summary className="min-h-tap cursor-pointer content-center font-semibold">{SYSTEM_LABEL[sys.system] ?? sys.name}</summary>
+              <ul className="mt-2 grid gap-2">
+                {childrenOf(sys.id).map((comp) => (
+                  <li key={comp.id}>
+                    <p className="font-medium">{comp.name}</p>
+                    <ul className="ml-4 grid gap-1">
+                      {childrenOf(comp.id).map((fm) => (
+                        <li key={fm.id} className="flex items-center justify-between gap-2 text-graphite-800">
+                          <span>{fm.name}</span>
+                          {fm.priority ? <PriorityMark priority={fm.priority} /> : null}
+                        </li>
+                      ))}
+                    </ul>
+                  </li>
+                ))}
+              </ul>
+            </details>
+          ))}
+        </section>
+        <section aria-labelledby="symptoms">
+          <h2 id="symptoms" className="text-xl font-semibold">Symptoms</h2>
+          <ul className="mt-3 grid gap-2">
+            {symptoms.map((s) => (
+              <li key={s.id} className="rounded-lg border border-rule bg-card p-3">
+                <p className="font-medium">{s.name}</p>
+                {s.synonyms.length ? <p className="text-sm text-graphite-600">Also: {s.synonyms.join(", ")}</p> : null}
+              </li>
+            ))}
+          </ul>
+        </section>
+      </div>
+    </div>
+  );
+}
