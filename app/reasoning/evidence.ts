@@ -1,0 +1,121 @@
+// Evidence turned into likelihood vectors over the hypotheses (leaves + "not in the knowledge
+// base"). Each item is sparse: one default likelihood for every hypothesis the item says nothing
+// specific about (the symptom's leak, the check's false-alarm rate) and explicit values for the
+// leaves its links reach.
+import { fail } from "./errors";
+import type { ModelIndex } from "./model-index";
+import type { Evidence, Observation } from "./schema";
+
+export type EvidenceItem = {
+  key: string; // "symptom:<id>" or "check:<id>": the key of this item in a cause's contributions
+  defaultLik: number; // for unlisted hypothesis and for leaves not in `leaves`
+  leaves: Int32Array;
+  liks: Float64Array; // likelihood at leaves[j]
+};
+
+export function resolveEvidence(index: ModelIndex, evidence: Evidence, ownerReliability: number): EvidenceItem[] {
+  if (!evidence || !Array.isArray(evidence.observations) || !Array.isArray(evidence.findings)) {
+    fail("INVALID_INPUT", "Evidence needs a list of observations and a list of findings.");
+  }
+  const items: EvidenceItem[] = [];
+  for (const o of chooseObservations(evidence.observations)) {
+    const s = index.symptomIndex.get(o.symptomId);
+    if (s === undefined) fail("UNKNOWN_ID", `An observation names symptom "${o.symptomId}", which is not in the model.`);
+    const item = expandItem(index, `symptom:${o.symptomId}`, index.leak[s], index.linkStart, index.linkNode, index.linkP, s, o.present);
+    if ((o.source ?? "technician") === "owner") temperOwnerReport(index, item, ownerReliability);
+    items.push(item);
+  }
+  for (const f of chooseFindings(evidence.findings)) {
+    const k = index.checkIndex.get(f.checkId);
+    if (k === undefined) fail("UNKNOWN_ID", `A finding names check "${f.checkId}", which is not in the model.`);
+    if (f.result !== "pass" && f.result !== "fail") {
+      fail("INVALID_INPUT", `The finding for check "${f.checkId}" is "${String(f.result)}"; use pass or fail.`);
+    }
+    items.push(
+      expandItem(index, `check:${f.checkId}`, index.falseAlarm[k], index.bearStart, index.bearNode, index.bearP, k, f.result === "fail"),
+    );
+  }
+  return items;
+}
+
+/** The likelihood vector of "check k gave this result", for what-if and planning. */
+export function checkItem(index: ModelIndex, k: number, failed: boolean): EvidenceItem {
+  return expandItem(index, `check:${index.checkIds[k]}`, index.falseAlarm[k], index.bearStart, index.bearNode, index.bearP, k, failed);
+}
+
+// P(e | h) for "present"/"failed" is the stored figure; for "absent"/"passed" it is 1 − figure.
+function expandItem(
+  index: ModelIndex,
+  key: string,
+  background: number,
+  start: Int32Array,
+  node: Int32Array,
+  p: Float64Array,
+  g: number,
+  positive: boolean,
+): EvidenceItem {
+  const from = start[g];
+  const m = start[g + 1] - from;
+  const ex = index.expander;
+  const n = ex.expand(node.subarray(from, from + m), p.subarray(from, from + m), m);
+  const leaves = new Int32Array(n);
+  const liks = new Float64Array(n);
+  for (let j = 0; j < n; j++) {
+    leaves[j] = ex.leafAt(j);
+    liks[j] = positive ? ex.valueAt(j) : 1 - ex.valueAt(j);
+  }
+  return { key, defaultLik: positive ? background : 1 - background, leaves, liks };
+}
+
+// Owner report: P'(e|h) = r·P(e|h) + (1 − r)·P(e), with P(e) the chance of the report under the
+// prior. Mixing (rather than raising to a power) keeps a wrong owner report from ruling a cause
+// out entirely: P' is never 0 while P(e) > 0.
+function temperOwnerReport(index: ModelIndex, item: EvidenceItem, r: number): void {
+  let linkedMass = 0;
+  let linkedLik = 0;
+  for (let j = 0; j < item.leaves.length; j++) {
+    const w = index.prior[item.leaves[j]];
+    linkedMass += w;
+    linkedLik += w * item.liks[j];
+  }
+  const marginal = Math.min(1, Math.max(0, item.defaultLik * (1 - linkedMass) + linkedLik));
+  item.defaultLik = r * item.defaultLik + (1 - r) * marginal;
+  for (let j = 0; j < item.liks.length; j++) item.liks[j] = r * item.liks[j] + (1 - r) * marginal;
+}
+
+// One observation per symptom: a technician's confirmation replaces the owner's report; two
+// reports from the same source that disagree are refused rather than guessed between.
+function chooseObservations(observations: readonly Observation[]): Observation[] {
+  const chosen = new Map<string, Observation>();
+  for (const o of observations) {
+    if (typeof o?.present !== "boolean") fail("INVALID_INPUT", `The observation of "${o?.symptomId}" needs present: true or false.`);
+    const source = o.source ?? "technician";
+    if (source !== "owner" && source !== "technician") fail("INVALID_INPUT", `Observation source "${String(source)}" is not owner or technician.`);
+    const before = chosen.get(o.symptomId);
+    if (!before) {
+      chosen.set(o.symptomId, o);
+      continue;
+    }
+    const beforeSource = before.source ?? "technician";
+    if (beforeSource === source) {
+      if (before.present !== o.present) {
+        fail("CONFLICTING_EVIDENCE", `Symptom "${o.symptomId}" is recorded both present and absent by the ${source}.`);
+      }
+    } else if (source === "technician") {
+      chosen.set(o.symptomId, o);
+    }
+  }
+  return [...chosen.values()];
+}
+
+function chooseFindings(findings: Evidence["findings"]): Evidence["findings"] {
+  const chosen = new Map<string, Evidence["findings"][number]>();
+  for (const f of findings) {
+    const before = chosen.get(f.checkId);
+    if (before && before.result !== f.result) {
+      fail("CONFLICTING_EVIDENCE", `Check "${f.checkId}" is recorded as both passed and failed; keep the latest result only.`);
+    }
+    chosen.set(f.checkId, f);
+  }
+  return [...chosen.values()];
+}

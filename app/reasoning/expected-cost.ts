@@ -1,0 +1,87 @@
+// Expected cost of running checks in a given order, stopping at the first check that fails:
+//   ECR = Σ_i C_i · P(every check before step i passed).
+// Under the single-fault model with checks independent given the cause,
+//   P(all of k_1..k_{i−1} pass) = Σ_h P(h | e) · Π_{j<i} (1 − q_j(h)),
+// with q_j(h) = P(check j fails | h). For perfect single-cause checks this is the textbook
+// 1 − Σ_{j<i} p_j (Heckerman, Breese & Rommelse 1995); the last step counts too.
+//
+// Linear time: every hypothesis a check does not bear on shrinks by the same factor (1 − false
+// alarm), so that factor is kept once as G and only the leaves the check bears on are updated.
+import type { ModelIndex } from "./model-index";
+
+export type CheckLeaves = { start: Int32Array; leaf: Int32Array; pFail: Float64Array };
+
+/** Every check's bearings expanded to leaves (nearest node wins), as CSR arrays. */
+export function expandAllChecks(index: ModelIndex): CheckLeaves {
+  const K = index.checkIds.length;
+  const start = new Int32Array(K + 1);
+  const leaves: number[] = [];
+  const values: number[] = [];
+  const ex = index.expander;
+  for (let k = 0; k < K; k++) {
+    const from = index.bearStart[k];
+    const m = index.bearStart[k + 1] - from;
+    const n = ex.expand(index.bearNode.subarray(from, from + m), index.bearP.subarray(from, from + m), m);
+    for (let j = 0; j < n; j++) {
+      leaves.push(ex.leafAt(j));
+      values.push(ex.valueAt(j));
+    }
+    start[k + 1] = leaves.length;
+  }
+  return { start, leaf: Int32Array.from(leaves), pFail: Float64Array.from(values) };
+}
+
+/** P(check k fails) = Σ_h P(h)·q_k(h): its own figure on the leaves it bears on, false alarm elsewhere. */
+export function failProbability(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, k: number): number {
+  // = d + Σ_{borne leaves} P(h)·(q(h) − d), with d the false-alarm rate, since Σ_h P(h) = 1.
+  const d = index.falseAlarm[k];
+  let p = d;
+  for (let j = cl.start[k]; j < cl.start[k + 1]; j++) p += prob[cl.leaf[j]] * (cl.pFail[j] - d);
+  return Math.min(1, Math.max(0, p));
+}
+
+export type OrderCost = { total: number; reached: Float64Array }; // reached[i] = P(step i is run)
+
+export function expectedCost(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, order: ArrayLike<number>): OrderCost {
+  const H = prob.length;
+  const t = Float64Array.from(prob); // survival of each hypothesis, relative to G
+  let T = 1; // Σ t
+  let G = 1;
+  let total = 0;
+  const reached = new Float64Array(order.length);
+  for (let s = 0; s < order.length; s++) {
+    const k = order[s];
+    const reach = Math.min(1, Math.max(0, G * T));
+    reached[s] = reach;
+    total += index.cost[k] * reach;
+    const g = 1 - index.falseAlarm[k];
+    if (g > 0) {
+      for (let j = cl.start[k]; j < cl.start[k + 1]; j++) {
+        const h = cl.leaf[j];
+        const next = (t[h] * (1 - cl.pFail[j])) / g;
+        T += next - t[h];
+        t[h] = next;
+      }
+      G *= g;
+      if (G < 1e-150) {
+        // Fold G into t before it underflows (it shrinks by every false-alarm rate).
+        T = fold(t, G);
+        G = 1;
+      }
+    } else {
+      // False alarm 1: only the leaves this check can pass on survive it.
+      const keep = new Float64Array(H);
+      for (let j = cl.start[k]; j < cl.start[k + 1]; j++) keep[cl.leaf[j]] = 1 - cl.pFail[j];
+      for (let h = 0; h < H; h++) t[h] *= G * keep[h];
+      T = fold(t, 1);
+      G = 1;
+    }
+  }
+  return { total, reached };
+}
+
+function fold(t: Float64Array, factor: number): number {
+  let sum = 0;
+  for (let h = 0; h < t.length; h++) sum += t[h] *= factor;
+  return sum;
+}

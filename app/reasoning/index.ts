@@ -1,0 +1,19 @@
+// Public surface of the reasoning core: pure functions over a Model already resolved for one
+// vehicle. No database, no I/O; see docs/reasoning.md for the model and its assumptions.
+export { ModelSchema, EvidenceSchema, SkillSchema, SKILL_LEVELS, parseModel, parseEvidence } from "./schema";
+export type { Model, Evidence, Cause, Symptom, Link, Check, Observation, Finding, Skill } from "./schema";
+export { ReasoningError, REASONING_ERROR_CODES } from "./errors";
+export type { ReasoningErrorCode } from "./errors";
+export { DEFAULT_UNLISTED_PRIOR, DEFAULT_OWNER_RELIABILITY, DEFAULT_CHECK_SKILL } from "./options";
+export type { RankOptions, PlanOptions } from "./options";
+export { rankCauses } from "./rank";
+export type { Ranking, RankedCause } from "./rank";
+export { planChecks, orderCost } from "./plan";
+export type { Plan, PlanStep, AboveSkillStep } from "./plan";
+export { whatIf } from "./what-if";
+export type { WhatIf, WhatIfOutcome } from "./what-if";
+export { diagnose } from "./diagnose";
+export { resolvePriors, DEFAULT_PSEUDO_COUNT, DEFAULT_YOUNG_FACTOR } from "./priors";
+export type { Applicability, PriorInput, VehicleFacts, PriorOptions, ResolvedPrior } from "./priors";
+export { checkCost } from "./cost";
+export type { CheckCostInput } from "./cost";
