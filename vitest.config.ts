@@ -31,7 +31,6 @@ export default defineConfig({
           name: "integration",
           environment: "node",
           include: ["tests/integration/**/*.test.ts"],
-          globalSetup: ["tests/setup/integration-global.ts"],
           setupFiles: ["tests/setup/integration-worker.ts"],
           testTimeout: 20_000,
           hookTimeout: 60_000,

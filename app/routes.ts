@@ -6,6 +6,7 @@ export default [
   route("sign-out", "routes/auth/sign-out.tsx"),
   route("auth/github", "routes/auth/github.tsx"),
   route("auth/github/callback", "routes/auth/callback.tsx"),
+  route("welcome", "routes/auth/welcome.tsx"),
   layout("routes/app/layout.tsx", [
     route("board", "routes/board/board.tsx"),
     route("cases", "routes/cases/list.tsx"),

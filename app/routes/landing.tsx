@@ -1,4 +1,4 @@
-import { Link } from "react-router";
+import { Form } from "react-router";
 import { Wordmark } from "~/components/brand";
 import { PriorityMark } from "~/components/priority";
 
@@ -21,12 +21,15 @@ export default function Landing() {
     <div className="min-h-dvh">
       <header className="mx-auto flex max-w-5xl items-center justify-between px-5 py-5">
         <Wordmark />
-        <Link
-          to="/sign-in"
-          className="inline-flex min-h-tap items-center rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700"
-        >
-          Sign in
-        </Link>
+        {/* Straight to the provider: the demo's sign-in is two clicks, this one and the person. */}
+        <Form method="post" action="/auth/github">
+          <button
+            type="submit"
+            className="inline-flex min-h-tap items-center rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700"
+          >
+            Sign in
+          </button>
+        </Form>
       </header>
       <main className="mx-auto max-w-5xl px-5 pb-16">
         <section className="py-10 sm:py-16">

@@ -1,0 +1,77 @@
+import { data, Form, redirect } from "react-router";
+import { z } from "zod";
+import { requireAccount } from "~/auth/guards.server";
+import { ROLE_HOME } from "~/auth/permissions";
+import { Wordmark } from "~/components/brand";
+import { dbContext } from "~/context";
+import { COUNTRIES } from "~/workshop/countries";
+import { createWorkshop } from "~/workshop/create.server";
+import type { Route } from "./+types/welcome";
+
+const NewWorkshopSchema = z.object({
+  name: z.string().trim().min(2, "Give the workshop a name of at least 2 characters").max(80, "Keep the name under 80 characters"),
+  country: z.enum(COUNTRIES.map((c) => c.code) as [string, ...string[]], { message: "Choose a country from the list" }),
+  labourRatePerHour: z.coerce.number({ message: "The labour rate is a number, such as 84" }).min(0, "The labour rate cannot be negative").max(10_000, "That labour rate looks too high"),
+});
+
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const account = await requireAccount(request, context.get(dbContext));
+  if (account.role) throw redirect(ROLE_HOME[account.role]);
+  return { name: account.name };
+}
+
+export async function action({ request, context }: Route.ActionArgs) {
+  const db = context.get(dbContext);
+  const account = await requireAccount(request, db);
+  if (account.role) throw new Response("You are already a member of a workshop.", { status: 409 });
+  const parsed = NewWorkshopSchema.safeParse(Object.fromEntries(await request.formData()));
+  if (!parsed.success) return data({ errors: z.flattenError(parsed.error).fieldErrors }, { status: 400 });
+  await createWorkshop(db, account.userId, parsed.data);
+  throw redirect(ROLE_HOME.admin);
+}
+
+export function meta() {
+  return [{ title: "Set up your workshop — Ramplight" }];
+}
+
+const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base";
+
+export default function Welcome({ loaderData, actionData }: Route.ComponentProps) {
+  const errors: Partial<Record<string, string[]>> = actionData?.errors ?? {};
+  return (
+    <main className="mx-auto flex min-h-dvh max-w-lg flex-col justify-center gap-5 px-5 py-10">
+      <Wordmark />
+      <h1 className="text-2xl font-semibold">Welcome, {loaderData.name}</h1>
+      <p className="text-graphite-700">
+        No workshop has invited you yet. Set up your own and you become its admin; the starter knowledge base comes with it.
+        If you expected an invitation, ask your workshop admin to invite your GitHub login or e-mail.
+      </p>
+      <Form method="post" className="grid gap-4" noValidate>
+        <label className="font-medium">
+          Workshop name
+          <input name="name" required className={field} aria-invalid={errors.name ? true : undefined} />
+          {errors.name ? <span className="block text-sm text-stop">{errors.name[0]}</span> : null}
+        </label>
+        <label className="font-medium">
+          Country
+          <select name="country" className={field} defaultValue="GB">
+            {COUNTRIES.map((c) => (
+              <option key={c.code} value={c.code}>
+                {c.name} — {c.currency}, tax {Math.round(c.taxRate * 1000) / 10}%
+              </option>
+            ))}
+          </select>
+          {errors.country ? <span className="block text-sm text-stop">{errors.country[0]}</span> : null}
+        </label>
+        <label className="font-medium">
+          Labour rate per hour
+          <input name="labourRatePerHour" inputMode="decimal" defaultValue="80" className={field} aria-invalid={errors.labourRatePerHour ? true : undefined} />
+          {errors.labourRatePerHour ? <span className="block text-sm text-stop">{errors.labourRatePerHour[0]}</span> : null}
+        </label>
+        <button type="submit" className="min-h-tap rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700">
+          Create the workshop
+        </button>
+      </Form>
+    </main>
+  );
+}

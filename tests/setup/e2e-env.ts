@@ -1,0 +1,22 @@
+// Ports of the end-to-end run, apart from the demo's so both can run at once.
+const APP_PORT = 3998;
+const OAUTH_PORT = 4191;
+
+export const E2E_ENV = {
+  PORT: String(APP_PORT),
+  HOST: "127.0.0.1",
+  APP_URL: `http://127.0.0.1:${APP_PORT}`,
+  GITHUB_CLIENT_ID: "ramplight-e2e",
+  GITHUB_CLIENT_SECRET: "e2e-secret-0123456789",
+  GITHUB_OAUTH_URL: `http://127.0.0.1:${OAUTH_PORT}`,
+  GITHUB_API_URL: `http://127.0.0.1:${OAUTH_PORT}`,
+  FAKE_OAUTH_PORT: String(OAUTH_PORT),
+  FAKE_SMTP_PORT: "4192",
+  FAKE_PAY_PORT: "4193",
+  OAUTH_CLIENT_ID: "ramplight-e2e",
+  OAUTH_CLIENT_SECRET: "e2e-secret-0123456789",
+  OAUTH_REDIRECT_URI: `http://127.0.0.1:${APP_PORT}/auth/github/callback`,
+  // Journeys sign in many times in a row; the limiter itself is tested on its own.
+  SIGN_IN_LIMIT_PER_IP: "1000",
+  SIGN_IN_LIMIT_PER_ACCOUNT: "1000",
+} as const;
