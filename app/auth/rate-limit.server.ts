@@ -25,6 +25,8 @@ export async function limitSignIn(db: Db, bucket: string, limit: number, windowS
 }
 
 export function clientIp(request: Request): string {
-  // Behind a proxy the first X-Forwarded-For entry is the client; locally there is none.
-  return request.headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "local";
+  // X-Forwarded-For is only believed behind our own proxy (TRUST_PROXY=1): anyone can send it.
+  // Without a proxy every caller shares one bucket, which errs on the side of refusing.
+  if (process.env.TRUST_PROXY === "1") return request.headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "unknown";
+  return "direct";
 }

@@ -11,7 +11,7 @@ export type CheckCostInput = {
 /**
  * cost = (minutes + Σ access minutes) × rate / 60 + consumables.
  * Access is charged to every check that needs it; the plan does not yet credit a ramp already up
- * for the previous check (a known simplification, see docs/reasoning.md).
+ * for the previous check (a known simplification).
  */
 export function checkCost(input: CheckCostInput): number {
   const nonNegative = (v: unknown, what: string): number => {

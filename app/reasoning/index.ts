@@ -1,5 +1,5 @@
 // Public surface of the reasoning core: pure functions over a Model already resolved for one
-// vehicle. No database, no I/O; see docs/reasoning.md for the model and its assumptions.
+// vehicle. No database, no I/O.
 export { ModelSchema, EvidenceSchema, SkillSchema, SKILL_LEVELS, parseModel, parseEvidence } from "./schema";
 export type { Model, Evidence, Cause, Symptom, Link, Check, Observation, Finding, Skill } from "./schema";
 export { ReasoningError, REASONING_ERROR_CODES } from "./errors";

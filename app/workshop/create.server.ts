@@ -11,6 +11,7 @@ export function slugify(name: string) {
   const base = name
     .toLowerCase()
     .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "") // drop the accents NFKD split off
     .replace(/[^a-z0-9]+/g, "-")
     .replace(/^-|-$/g, "")
     .slice(0, 40);
