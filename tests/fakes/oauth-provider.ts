@@ -193,7 +193,10 @@ export async function startFakeOAuthProvider(opts: FakeOAuthOptions): Promise<Fa
     const route = `${req.method} ${url.pathname}`;
     if (route === "GET /__health") return sendText(res, 200, "ok");
     // Browsers ask every origin for an icon; answer so the sign-in page logs no 404.
-    if (route === "GET /favicon.ico") { res.writeHead(204); return res.end(); }
+    if (route === "GET /favicon.ico") {
+      res.writeHead(204).end();
+      return;
+    }
     if (route === "GET /login/oauth/authorize") return authorizePage(res, url);
     if (route === "POST /login/oauth/authorize") return authorizeDecision(req, res);
     if (route === "POST /login/oauth/access_token") return accessToken(req, res);

@@ -49,7 +49,10 @@ export default async function setup(project: TestProject) {
   project.provide("e2eDatabaseUrl", databaseUrl);
   project.provide("fakeOAuthUrl", E2E_ENV.GITHUB_OAUTH_URL);
   return async () => {
+    // Let the server close its pool before its database is dropped under it.
+    const exited = new Promise((r) => server.once("exit", r));
     server.kill("SIGTERM");
+    await Promise.race([exited, new Promise((r) => setTimeout(r, 5000))]);
     await fakes.close();
     await dropDatabase(dbName);
     if (stderr.trim()) console.log(`app server stderr:\n${stderr.slice(-4000)}`);
