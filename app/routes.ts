@@ -12,6 +12,8 @@ export default [
     route("cases", "routes/cases/list.tsx"),
     route("kb", "routes/kb/overview.tsx"),
     route("settings", "routes/settings/workshop.tsx"),
+    route("settings/members", "routes/settings/members.tsx"),
+    route("settings/audit", "routes/settings/audit.tsx"),
   ]),
   route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

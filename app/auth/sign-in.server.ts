@@ -46,8 +46,8 @@ export async function finishSignIn(db: Db, request: Request) {
 
 function describe(error: unknown): string {
   const text = error instanceof Error ? `${error.name}: ${error.message}` : String(error);
-  if (/state/i.test(text)) return "The sign-in could not be matched to this browser (the security check on its state failed). Start the sign-in again from this page.";
   if (/access_denied/i.test(text)) return "The sign-in was cancelled at the provider.";
+  if (/state/i.test(text)) return "The sign-in could not be matched to this browser (the security check on its state failed). Start the sign-in again from this page.";
   if (/code/i.test(text) || /invalid_grant|Unexpected/i.test(text)) return "The provider did not accept this sign-in (the one-time code was missing, used already or expired). Start again.";
   return "The sign-in did not complete. Start again.";
 }

@@ -13,6 +13,8 @@ export const E2E_ENV = {
   FAKE_OAUTH_PORT: String(OAUTH_PORT),
   FAKE_SMTP_PORT: "4192",
   FAKE_PAY_PORT: "4193",
+  SMTP_URL: "smtp://127.0.0.1:4192",
+  FAKE_MAIL_DIR: "/tmp/ramplight-e2e-mail",
   OAUTH_CLIENT_ID: "ramplight-e2e",
   OAUTH_CLIENT_SECRET: "e2e-secret-0123456789",
   OAUTH_REDIRECT_URI: `http://127.0.0.1:${APP_PORT}/auth/github/callback`,

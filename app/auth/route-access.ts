@@ -1,0 +1,37 @@
+import type { Permission } from "./permissions";
+
+// Who may use each route, by method (and form intent). The authorization test walks app/routes.ts
+// and fails for any route missing here, then tries every cell against the running server.
+//   public       anyone, signed in or not
+//   account      signed in, with or without a workshop
+//   no-workshop  signed in and not yet a member anywhere
+//   member       any active member of a workshop
+//   Permission   a member whose role has it
+export type Access = "public" | "account" | "no-workshop" | "member" | Permission;
+
+export type RouteAccess = {
+  path: string; // a concrete URL to try; :params are filled by the test with another workshop's ids too
+  GET?: Access;
+  POST?: Access | Record<string, Access>; // by intent when one route has several forms
+};
+
+export const ROUTE_ACCESS: Record<string, RouteAccess> = {
+  "routes/landing.tsx": { path: "/", GET: "public" },
+  "routes/auth/sign-in.tsx": { path: "/sign-in", GET: "public" },
+  "routes/auth/sign-out.tsx": { path: "/sign-out", POST: "public" },
+  "routes/auth/github.tsx": { path: "/auth/github", POST: "public" },
+  "routes/auth/callback.tsx": { path: "/auth/github/callback", GET: "public" },
+  "routes/auth/welcome.tsx": { path: "/welcome", GET: "no-workshop", POST: "no-workshop" },
+  "routes/app/layout.tsx": { path: "/board", GET: "member" },
+  "routes/board/board.tsx": { path: "/board", GET: "case:read" },
+  "routes/cases/list.tsx": { path: "/cases", GET: "case:read" },
+  "routes/kb/overview.tsx": { path: "/kb", GET: "kb:read" },
+  "routes/settings/workshop.tsx": { path: "/settings", GET: "member", POST: "settings:manage" },
+  "routes/settings/members.tsx": {
+    path: "/settings/members",
+    GET: "member:manage",
+    POST: { invite: "member:manage", role: "member:manage", suspend: "member:manage", reactivate: "member:manage", "revoke-invite": "member:manage" },
+  },
+  "routes/settings/audit.tsx": { path: "/settings/audit", GET: "audit:read" },
+  "routes/not-found.tsx": { path: "/no-such-page", GET: "public" },
+};

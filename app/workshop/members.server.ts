@@ -1,0 +1,73 @@
+import { and, desc, eq, isNull, ne, sql } from "drizzle-orm";
+import { audit } from "~/audit.server";
+import type { Member } from "~/auth/guards.server";
+import type { Db } from "~/db/client.server";
+import { identities, invitations, members, users } from "~/db/schema";
+import type { Role } from "../../seeds/demo/people";
+
+const INVITE_DAYS = 14;
+const skillFor = (role: Role) => (role === "apprentice" ? "apprentice" : role === "senior" ? "senior" : "technician");
+
+export async function listMembers(db: Db, workshopId: string) {
+  return db
+    .select({ id: members.id, name: users.name, email: users.email, login: identities.login, role: members.role, skill: members.skill, status: members.status })
+    .from(members)
+    .innerJoin(users, eq(users.id, members.userId))
+    .leftJoin(identities, eq(identities.userId, users.id))
+    .where(eq(members.workshopId, workshopId))
+    .orderBy(users.name);
+}
+
+export async function listPendingInvitations(db: Db, workshopId: string) {
+  return db
+    .select({ id: invitations.id, email: invitations.email, githubLogin: invitations.githubLogin, role: invitations.role, expiresAt: invitations.expiresAt })
+    .from(invitations)
+    .where(and(eq(invitations.workshopId, workshopId), isNull(invitations.acceptedAt)))
+    .orderBy(desc(invitations.createdAt));
+}
+
+export async function inviteMember(db: Db, by: Member, input: { email?: string; githubLogin?: string; role: Role }) {
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(invitations)
+      .values({ workshopId: by.workshopId, email: input.email ?? null, githubLogin: input.githubLogin ?? null, role: input.role, invitedBy: by.memberId, expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000) })
+      .returning({ id: invitations.id });
+    await audit(tx, { workshopId: by.workshopId, actorUserId: by.userId, action: "member.invite", entity: "invitation", entityId: row.id, after: input });
+    return row.id;
+  });
+}
+
+export async function revokeInvitation(db: Db, by: Member, invitationId: string) {
+  await db.transaction(async (tx) => {
+    const gone = await tx.delete(invitations).where(and(eq(invitations.id, invitationId), eq(invitations.workshopId, by.workshopId), isNull(invitations.acceptedAt))).returning({ id: invitations.id });
+    if (gone.length === 0) throw new Response("That invitation does not exist or was accepted already.", { status: 404 });
+    await audit(tx, { workshopId: by.workshopId, actorUserId: by.userId, action: "member.invite_revoke", entity: "invitation", entityId: invitationId });
+  });
+}
+
+/** Role or status change. The workshop always keeps at least one active admin, so nobody locks it out. */
+export async function updateMember(db: Db, by: Member, memberId: string, change: { role?: Role; status?: "active" | "suspended" }) {
+  await db.transaction(async (tx) => {
+    const [target] = await tx.select().from(members).where(and(eq(members.id, memberId), eq(members.workshopId, by.workshopId))).for("update");
+    if (!target) throw new Response("No such member in this workshop.", { status: 404 });
+    const losesAdmin = target.role === "admin" && target.status === "active" && ((change.role && change.role !== "admin") || change.status === "suspended");
+    if (losesAdmin) {
+      const [{ n }] = await tx
+        .select({ n: sql<number>`count(*)::int` })
+        .from(members)
+        .where(and(eq(members.workshopId, by.workshopId), eq(members.role, "admin"), eq(members.status, "active"), ne(members.id, memberId)));
+      if (n === 0) throw new Response("This is the workshop's only active admin. Make someone else admin first.", { status: 409 });
+    }
+    const next = { role: change.role ?? target.role, status: change.status ?? target.status };
+    await tx.update(members).set({ ...next, skill: change.role ? skillFor(change.role) : target.skill }).where(eq(members.id, memberId));
+    await audit(tx, {
+      workshopId: by.workshopId,
+      actorUserId: by.userId,
+      action: change.status ? `member.${change.status === "suspended" ? "suspend" : "reactivate"}` : "member.role",
+      entity: "member",
+      entityId: memberId,
+      before: { role: target.role, status: target.status },
+      after: next,
+    });
+  });
+}

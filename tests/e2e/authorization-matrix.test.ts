@@ -1,0 +1,118 @@
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { inject } from "vitest";
+import { can, type Permission } from "~/auth/permissions";
+import { type Access, ROUTE_ACCESS } from "~/auth/route-access";
+import { createSession } from "~/auth/session.server";
+import { createDb } from "~/db/client.server";
+import { members, users, workshops } from "~/db/schema";
+import routes from "~/routes";
+import { DEMO_PEOPLE, type Role } from "../../seeds/demo/people";
+import { seedId } from "../../seeds/ids";
+
+// Every route × every kind of caller, against the running production server. Expected outcomes
+// come from app/auth/route-access.ts and the role table; docs/permissions.md states both in words.
+
+type Actor = { name: string; kind: "anonymous" | "newcomer" | "suspended" | "member"; role?: Role; cookie?: string; userId?: string };
+
+function routeFiles(list: { file: string; children?: unknown[] }[]): string[] {
+  return list.flatMap((r) => [r.file, ...routeFiles((r.children ?? []) as { file: string; children?: unknown[] }[])]);
+}
+
+const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 2 });
+const actors: Actor[] = [{ name: "anonymous", kind: "anonymous" }];
+
+beforeAll(async () => {
+  for (const p of DEMO_PEOPLE.filter((p) => p.workshop)) {
+    const token = await createSession(db, seedId(`user:${p.login}`), "matrix");
+    actors.push({ name: `${p.role} of ${p.workshop}`, kind: "member", role: p.role!, cookie: `rl_session=${token}`, userId: seedId(`user:${p.login}`) });
+  }
+  const [newcomer] = await db.insert(users).values({ name: "Matrix Newcomer" }).returning({ id: users.id });
+  actors.push({ name: "signed in, no workshop", kind: "newcomer", cookie: `rl_session=${await createSession(db, newcomer.id, "matrix")}`, userId: newcomer.id });
+  const [suspended] = await db.insert(users).values({ name: "Matrix Suspended" }).returning({ id: users.id });
+  const [w] = await db.select({ id: workshops.id }).from(workshops).where(eq(workshops.slug, "bramblegate"));
+  await db.insert(members).values({ workshopId: w.id, userId: suspended.id, role: "senior", skill: "senior", status: "suspended" });
+  actors.push({ name: "suspended senior", kind: "suspended", cookie: `rl_session=${await createSession(db, suspended.id, "matrix")}`, userId: suspended.id });
+});
+afterAll(() => pool.end());
+
+function expected(access: Access, actor: Actor, method: "GET" | "POST"): "allowed" | "sign-in" | "welcome" | "forbidden" | "has-workshop" {
+  if (access === "public") return "allowed";
+  if (actor.kind === "anonymous") return "sign-in";
+  if (access === "account") return "allowed";
+  if (access === "no-workshop") return actor.kind === "newcomer" ? "allowed" : actor.kind === "suspended" ? "has-workshop" : "has-workshop";
+  if (actor.kind === "newcomer") return "welcome";
+  if (actor.kind === "suspended") return "forbidden";
+  if (access === "member") return "allowed";
+  return can(actor.role!, access as Permission) ? "allowed" : "forbidden";
+}
+
+function outcome(res: Response, method: "GET" | "POST"): string {
+  const location = res.headers.get("location") ?? "";
+  if (res.status >= 300 && res.status < 400 && location.startsWith("/sign-in")) return "sign-in";
+  if (res.status >= 300 && res.status < 400 && location.startsWith("/welcome")) return "welcome";
+  if (res.status === 403) return "forbidden";
+  if (res.status >= 500 || res.status === 404 || res.status === 405) return `status ${res.status}`;
+  return "allowed";
+}
+
+describe("authorization matrix", () => {
+  it("has an access rule for every route in app/routes.ts", () => {
+    const files = routeFiles(routes as never);
+    const missing = files.filter((f) => !ROUTE_ACCESS[f]);
+    expect(missing).toEqual([]);
+  });
+
+  const base = inject("baseUrl");
+  for (const [file, rule] of Object.entries(ROUTE_ACCESS)) {
+    if (file === "routes/not-found.tsx") continue;
+    const methods: ["GET" | "POST", string | undefined, Access][] = [];
+    if (rule.GET) methods.push(["GET", undefined, rule.GET]);
+    if (typeof rule.POST === "string") methods.push(["POST", undefined, rule.POST]);
+    else if (rule.POST) for (const [intent, a] of Object.entries(rule.POST)) methods.push(["POST", intent, a]);
+    for (const [method, intent, access] of methods) {
+      it(`${method} ${rule.path}${intent ? ` (${intent})` : ""} — ${access}`, async () => {
+        const results: string[] = [];
+        for (const actor of actors) {
+          const want = expected(access, actor, method);
+          // Signing out revokes the session it is sent with: use a spare one.
+          const cookie = file === "routes/auth/sign-out.tsx" && actor.userId ? `rl_session=${await createSession(db, actor.userId, "spare")}` : actor.cookie;
+          const res = await fetch(`${base}${rule.path}`, {
+            method,
+            redirect: "manual",
+            headers: { ...(cookie ? { cookie } : {}), ...(method === "POST" ? { origin: base, "content-type": "application/x-www-form-urlencoded" } : {}) },
+            // Deliberately incomplete: an allowed caller gets a 400 and nothing changes.
+            body: method === "POST" ? new URLSearchParams(intent ? { intent } : {}) : undefined,
+          });
+          await res.arrayBuffer();
+          let got = outcome(res, method);
+          // A public page may send a signed-in newcomer on to set up a workshop.
+          if (access === "public" && got === "welcome") got = "allowed";
+          if (want === "has-workshop") got = got === "allowed" && (res.status >= 300 || res.status === 409) ? "has-workshop" : got;
+          if (got !== want) results.push(`${actor.name}: expected ${want}, got ${got} (${res.status} ${res.headers.get("location") ?? ""})`);
+        }
+        expect(results).toEqual([]);
+      });
+    }
+  }
+
+  it("answers an unknown page with 404 for everyone", async () => {
+    for (const actor of actors) {
+      const res = await fetch(`${base}/no-such-page`, { headers: actor.cookie ? { cookie: actor.cookie } : {} });
+      expect(res.status, actor.name).toBe(404);
+    }
+  });
+
+  it("refuses a form post from another origin (OWASP ASVS 5.0 V3.5)", async () => {
+    const admin = actors.find((a) => a.role === "admin")!;
+    const res = await fetch(`${base}/settings`, {
+      method: "POST",
+      redirect: "manual",
+      headers: { cookie: admin.cookie!, origin: "http://evil.example", "content-type": "application/x-www-form-urlencoded" },
+      body: new URLSearchParams({ name: "Hijacked", currency: "EUR", taxRatePercent: "0", units: "metric", labourRatePerHour: "1" }),
+    });
+    expect(res.status).toBeGreaterThanOrEqual(400);
+    const [w] = await db.select({ name: workshops.name }).from(workshops).where(eq(workshops.slug, "bramblegate"));
+    expect(w.name).toBe("Bramblegate Motor Works");
+  });
+});

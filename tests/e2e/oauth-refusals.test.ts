@@ -1,0 +1,92 @@
+import { describe, expect, it } from "vitest";
+import { inject } from "vitest";
+
+// The sign-in's security checks against the running server and the fake provider, without a
+// browser: every refusal must be a clear page with a 4xx, never a signed-in session.
+const base = inject("baseUrl");
+const provider = inject("fakeOAuthUrl");
+
+async function startSignIn() {
+  const res = await fetch(`${base}/auth/github`, { method: "POST", redirect: "manual", headers: { origin: base } });
+  expect(res.status).toBe(302);
+  const authorize = new URL(res.headers.get("location")!);
+  expect(authorize.origin).toBe(provider);
+  const stateCookie = res.headers.getSetCookie().find((c) => c.startsWith("rl_oauth="))!.split(";")[0];
+  return { authorize, stateCookie, state: authorize.searchParams.get("state")! };
+}
+
+async function approve(authorize: URL, login: string) {
+  const form = new URLSearchParams(authorize.searchParams);
+  form.set("login", login);
+  const res = await fetch(`${provider}/login/oauth/authorize`, { method: "POST", body: form, redirect: "manual" });
+  expect(res.status).toBe(302);
+  return new URL(res.headers.get("location")!);
+}
+
+const callback = (url: URL, cookie?: string) => fetch(`${base}${url.pathname}${url.search}`, { redirect: "manual", headers: cookie ? { cookie } : {} });
+
+describe("OAuth refusals (OWASP ASVS 5.0 V10.2.1)", () => {
+  it("signs in when state and code are right, with HttpOnly SameSite cookies", async () => {
+    const { authorize, stateCookie } = await startSignIn();
+    const back = await approve(authorize, "priya-hale");
+    const res = await callback(back, stateCookie);
+    expect(res.status).toBe(302);
+    expect(res.headers.get("location")).toBe("/board");
+    const session = res.headers.getSetCookie().find((c) => c.startsWith("rl_session="))!;
+    expect(session).toMatch(/HttpOnly/);
+    expect(session).toMatch(/SameSite=Lax/);
+  });
+
+  it("refuses a callback with a forged state", async () => {
+    const { authorize, stateCookie } = await startSignIn();
+    const back = await approve(authorize, "priya-hale");
+    back.searchParams.set("state", "forged-state-value");
+    const res = await callback(back, stateCookie);
+    expect(res.status).toBe(400);
+    expect(await res.text()).toContain("security check on its state failed");
+    expect(res.headers.getSetCookie().some((c) => c.startsWith("rl_session=") && !c.includes("Max-Age=0"))).toBe(false);
+  });
+
+  it("refuses a callback whose state cookie is missing", async () => {
+    const { authorize } = await startSignIn();
+    const back = await approve(authorize, "priya-hale");
+    const res = await callback(back);
+    expect(res.status).toBe(400);
+    expect(await res.text()).toContain("could not be matched to this browser");
+  });
+
+  it("refuses a callback with no state at all by starting over, never signing in", async () => {
+    const res = await callback(new URL(`${base}/auth/github/callback?code=abc`));
+    // Without a state the strategy treats it as a fresh start and sends the browser to the provider.
+    expect(res.status).toBe(302);
+    expect(res.headers.get("location")).toContain(`${provider}/login/oauth/authorize`);
+    expect(res.headers.getSetCookie().some((c) => c.startsWith("rl_session="))).toBe(false);
+  });
+
+  it("refuses a replayed code", async () => {
+    const { authorize, stateCookie } = await startSignIn();
+    const back = await approve(authorize, "tomas-varga");
+    expect((await callback(back, stateCookie)).status).toBe(302);
+    const replay = await callback(back, stateCookie);
+    expect(replay.status).toBe(400);
+    expect(await replay.text()).toContain("did not accept this sign-in");
+  });
+
+  it("shows the provider's refusal of a wrong redirect URI, with no redirect", async () => {
+    const { authorize } = await startSignIn();
+    authorize.searchParams.set("redirect_uri", "http://evil.example/steal");
+    const res = await fetch(authorize, { redirect: "manual" });
+    expect(res.status).toBe(400);
+    expect(res.headers.get("location")).toBeNull();
+  });
+
+  it("tells the person when they cancelled at the provider", async () => {
+    const { authorize, stateCookie } = await startSignIn();
+    const form = new URLSearchParams(authorize.searchParams);
+    form.set("decision", "deny");
+    const denied = await fetch(`${provider}/login/oauth/authorize`, { method: "POST", body: form, redirect: "manual" });
+    const res = await callback(new URL(denied.headers.get("location")!), stateCookie);
+    expect(res.status).toBe(400);
+    expect(await res.text()).toContain("cancelled");
+  });
+});
