@@ -65,7 +65,9 @@ describe("an admin manages the workshop's members", () => {
     await page.goto(`${baseUrl()}/settings/audit`);
     await page.getByText("member.role").first().waitFor();
     await page.getByText("member.invite").first().waitFor();
-    expect(errors).toEqual([]);
+    // The refused invitation (400) and the refused demotion (409) are the only failed loads.
+    expect(errors.filter((e) => !/status of (400|409)/.test(e))).toEqual([]);
+    expect(errors).toHaveLength(2);
     await page.close();
   });
 

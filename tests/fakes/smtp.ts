@@ -65,6 +65,8 @@ export async function startFakeSmtp(opts: FakeSmtpOptions = {}): Promise<FakeSmt
       // Write then rename, so a reader polling the directory never sees half a message.
       const seq = String(++sequence % 1_000_000).padStart(6, "0");
       const file = join(opts.dir, `${received.getTime()}-${seq}-${id}.json`);
+      // The folder may have been cleared since start-up (tests empty it between journeys).
+      await mkdir(opts.dir, { recursive: true });
       await writeFile(`${file}.tmp`, JSON.stringify(message, null, 2));
       await rename(`${file}.tmp`, file);
     }

@@ -56,8 +56,13 @@ async function perform(db: Db, member: Member, input: z.infer<typeof ActionSchem
             to: input.target,
             subject: `You are invited to ${member.workshopName} on Ramplight`,
             text: `${member.name} invited you to join ${member.workshopName} as ${input.role}.\n\nSign in at ${env().APP_URL}/sign-in with the GitHub account that uses this e-mail address.\n\nThe invitation is valid for 14 days.`,
+          }).catch((error: Error) => {
+            // The invitation stands even when the mail relay is down; say so instead of failing.
+            console.warn("invitation mail not sent:", error.message);
+            return "failed" as const;
           })
         : false;
+      if (mailed === "failed") return { error: `Invitation saved, but the e-mail to ${input.target} could not be sent. Tell them to sign in with that address.`, notice: null };
       return { error: null, notice: mailed ? `Invitation e-mailed to ${input.target}.` : `Invitation saved for ${input.target}: they join as ${input.role} when they next sign in.` };
     }
     case "role":
