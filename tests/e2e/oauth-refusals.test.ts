@@ -90,3 +90,47 @@ describe("OAuth refusals (OWASP ASVS 5.0 V10.2.1)", () => {
     expect(await res.text()).toContain("cancelled");
   });
 });
+
+describe("session cookie at the server (OWASP ASVS 5.0 V7.2.4)", () => {
+  async function signIn(login: string, existing?: string) {
+    const { authorize, stateCookie } = await startSignIn();
+    const back = await approve(authorize, login);
+    const res = await callback(back, [stateCookie, existing].filter(Boolean).join("; "));
+    expect(res.status).toBe(302);
+    return res.headers.getSetCookie().find((c) => c.startsWith("rl_session="))!.split(";")[0];
+  }
+  const board = (cookie: string) => fetch(`${base}/board`, { redirect: "manual", headers: { cookie } });
+
+  it("replaces whatever session the browser brought to sign-in, and revokes it (fixation)", async () => {
+    const first = await signIn("priya-hale");
+    expect((await board(first)).status).toBe(200);
+    const second = await signIn("priya-hale", first);
+    expect(second).not.toBe(first);
+    expect((await board(second)).status).toBe(200);
+    const stale = await board(first);
+    expect(stale.status).toBe(302);
+    expect(stale.headers.get("location")).toMatch(/^\/sign-in/);
+  });
+
+  it("treats a tampered cookie as signed out", async () => {
+    const cookie = await signIn("priya-hale");
+    const last = cookie.at(-1) === "A" ? "B" : "A";
+    const res = await board(cookie.slice(0, -1) + last);
+    expect(res.status).toBe(302);
+    expect(res.headers.get("location")).toMatch(/^\/sign-in/);
+  });
+
+  it("signs out everywhere: every session of the person stops working", async () => {
+    const a = await signIn("tomas-varga");
+    const b = await signIn("tomas-varga");
+    const out = await fetch(`${base}/sign-out`, {
+      method: "POST",
+      redirect: "manual",
+      headers: { cookie: a, origin: base, "content-type": "application/x-www-form-urlencoded" },
+      body: new URLSearchParams({ scope: "everywhere" }),
+    });
+    expect(out.status).toBe(302);
+    expect((await board(a)).status).toBe(302);
+    expect((await board(b)).status).toBe(302);
+  });
+});

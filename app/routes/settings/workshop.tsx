@@ -40,9 +40,13 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
   const errors: Partial<Record<string, string[]>> = actionData?.errors ?? {};
   const err = (k: string) => (errors[k] ? <span className="block text-sm text-stop">{errors[k]![0]}</span> : null);
   const links = (
-    <nav aria-label="Settings" className="mt-3 flex gap-3">
+    <nav aria-label="Settings" className="mt-3 flex flex-wrap items-center gap-3">
       {loaderData.canEdit ? <Link className="font-medium text-uv-700 underline" to="/settings/members">Members</Link> : null}
       {loaderData.role === "admin" || loaderData.role === "senior" ? <Link className="font-medium text-uv-700 underline" to="/settings/audit">Audit log</Link> : null}
+      <Form method="post" action="/sign-out" className="ml-auto">
+        <input type="hidden" name="scope" value="everywhere" />
+        <button type="submit" className="min-h-tap rounded-lg border border-rule px-3 font-medium hover:bg-paper">Sign out on every device</button>
+      </Form>
     </nav>
   );
   if (!loaderData.canEdit) {
