@@ -1,0 +1,34 @@
+import type { RouterContextProvider } from "react-router";
+import { api, jsonBody } from "~/api.server";
+import { dbContext } from "~/context";
+import { refuse } from "~/http.server";
+import { FindingBody, ObservationBody } from "./api-schemas";
+import { loadCase } from "./case.server";
+import { recordFinding, recordObservation, removeFinding, removeObservation } from "./evidence.server";
+
+type Args = { request: Request; params: { caseId: string; itemId?: string }; context: Readonly<RouterContextProvider> };
+
+// Observations and findings are handled alike: POST adds one, DELETE on its id removes it.
+const KINDS = {
+  observations: { body: ObservationBody, add: recordObservation, remove: removeObservation, noun: "an observation" },
+  findings: { body: FindingBody, add: recordFinding, remove: removeFinding, noun: "a finding" },
+} as const;
+
+export function evidenceAction({ request, params, context }: Args, kind: keyof typeof KINDS) {
+  const db = context.get(dbContext);
+  const k = KINDS[kind];
+  return api(request, db, null, async (member) => {
+    const bundle = await loadCase(db, member, params.caseId);
+    if (request.method === "POST" && !params.itemId) {
+      const body = await jsonBody(request, k.body as typeof ObservationBody & typeof FindingBody);
+      return Response.json(await k.add(db, member, bundle, body), { status: 201 });
+    }
+    if (request.method === "DELETE" && params.itemId) {
+      await k.remove(db, member, bundle, params.itemId);
+      return new Response(null, { status: 204 });
+    }
+    refuse(405, `Use POST to add ${k.noun} and DELETE on its id to remove it.`);
+  });
+}
+
+export const readWithCase = () => Response.json({ error: "Read evidence with GET /api/cases/:caseId." }, { status: 405 });

@@ -1,0 +1,62 @@
+import { and, count, eq, inArray, isNotNull } from "drizzle-orm";
+import type { Db } from "~/db/client.server";
+import { cases, causes, checkLinks, checks, symptomLinks, symptoms, vehicles, workshops } from "~/db/schema";
+import type { Knowledge } from "./build-model";
+
+// The knowledge base changes rarely and is read on every re-rank: keep one copy per workshop and
+// version. A change bumps workshops.kb_version, so the next read reloads.
+const cache = new Map<string, Knowledge>();
+
+export async function kbVersion(db: Db, workshopId: string): Promise<number> {
+  const [w] = await db.select({ v: workshops.kbVersion }).from(workshops).where(eq(workshops.id, workshopId));
+  return w?.v ?? 0;
+}
+
+export async function loadKnowledge(db: Db, workshopId: string, version: number): Promise<Knowledge> {
+  const key = `${workshopId}:${version}`;
+  const hit = cache.get(key);
+  if (hit) return hit;
+  const [s, c, k, sl, cl] = await Promise.all([
+    db.select({ id: symptoms.id, name: symptoms.name, leak: symptoms.leak, synonyms: symptoms.synonyms, conditions: symptoms.conditions, system: symptoms.system }).from(symptoms).where(eq(symptoms.workshopId, workshopId)),
+    db
+      .select({ id: causes.id, parentId: causes.parentId, level: causes.level, name: causes.name, baseRate: causes.baseRate, applicability: causes.applicability, priority: causes.priority, repairMinutes: causes.repairMinutes, partsCost: causes.partsCost })
+      .from(causes)
+      .where(eq(causes.workshopId, workshopId)),
+    db
+      .select({
+        id: checks.id,
+        name: checks.name,
+        minutes: checks.minutes,
+        consumablesCost: checks.consumablesCost,
+        access: checks.access,
+        skill: checks.skill,
+        falseAlarm: checks.falseAlarm,
+        instructions: checks.instructions,
+        tools: checks.tools,
+        cautions: checks.cautions,
+        resultKind: checks.resultKind,
+        unit: checks.unit,
+        rule: checks.rule,
+        failMeans: checks.failMeans,
+      })
+      .from(checks)
+      .where(eq(checks.workshopId, workshopId)),
+    db.select({ symptomId: symptomLinks.symptomId, causeId: symptomLinks.causeId, p: symptomLinks.p }).from(symptomLinks).where(eq(symptomLinks.workshopId, workshopId)),
+    db.select({ checkId: checkLinks.checkId, causeId: checkLinks.causeId, pFail: checkLinks.pFail }).from(checkLinks).where(eq(checkLinks.workshopId, workshopId)),
+  ]);
+  const kb: Knowledge = { kbVersion: version, symptoms: s, causes: c, checks: k, symptomLinks: sl, checkLinks: cl };
+  for (const old of cache.keys()) if (old.startsWith(`${workshopId}:`)) cache.delete(old);
+  cache.set(key, kb);
+  return kb;
+}
+
+/** Confirmed causes of the workshop's closed cases for vehicles of this fuel type: the learning signal. */
+export async function outcomeCounts(db: Db, workshopId: string, fuelType: string): Promise<Record<string, number>> {
+  const rows = await db
+    .select({ causeId: cases.conclusionCauseId, n: count() })
+    .from(cases)
+    .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
+    .where(and(eq(cases.workshopId, workshopId), inArray(cases.state, ["closed"]), isNotNull(cases.conclusionCauseId), eq(vehicles.fuelType, fuelType as "petrol")))
+    .groupBy(cases.conclusionCauseId);
+  return Object.fromEntries(rows.map((r) => [r.causeId!, r.n]));
+}

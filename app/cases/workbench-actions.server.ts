@@ -1,0 +1,32 @@
+import { z } from "zod";
+import type { Member } from "~/auth/guards.server";
+import type { Db } from "~/db/client.server";
+import type { CaseBundle } from "./case.server";
+import { askSenior, conclude, signOff, updateComplaint } from "./workflow.server";
+
+// The forms of the case workbench, told apart by their intent.
+export const WorkbenchForm = z.discriminatedUnion("intent", [
+  z.object({ intent: z.literal("conclude"), causeId: z.uuid({ message: "Choose the confirmed cause" }), notes: z.string().trim().min(3, "Say what you found and the repair").max(2000), version: z.coerce.number().int() }),
+  z.object({ intent: z.enum(["signoff", "send-back"]), note: z.string().trim().max(2000).default(""), version: z.coerce.number().int() }),
+  z.object({ intent: z.literal("ask-senior"), note: z.string().trim().max(500).default("") }),
+  z.object({ intent: z.literal("complaint"), complaint: z.string().trim().min(3, "The complaint needs a few words").max(2000), version: z.coerce.number().int() }),
+]);
+
+export async function runWorkbenchForm(db: Db, member: Member, c: CaseBundle, form: z.infer<typeof WorkbenchForm>) {
+  switch (form.intent) {
+    case "conclude": {
+      const state = await conclude(db, member, c, form);
+      return state === "awaiting_signoff" ? "Sent for a senior's sign-off." : "Case concluded.";
+    }
+    case "signoff":
+    case "send-back":
+      await signOff(db, member, c, { accept: form.intent === "signoff", note: form.note, version: form.version });
+      return form.intent === "signoff" ? "Signed off." : "Sent back to diagnose.";
+    case "ask-senior":
+      await askSenior(db, member, c, form.note);
+      return "A senior has been asked.";
+    case "complaint":
+      await updateComplaint(db, member, c, form.complaint, form.version);
+      return "Complaint updated.";
+  }
+}

@@ -1,0 +1,79 @@
+import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
+import type { CaseBundle } from "~/cases/case.server";
+import type { Diagnosis } from "~/cases/present-diagnosis";
+
+// The browser's own fetches for the workbench: the live re-rank after every piece of evidence.
+// Over the wire dates arrive as strings; the screens only format them, so either is fine.
+type Wire<T> = { [K in keyof T]: T[K] extends Date ? string | Date : T[K] extends Date | null ? string | Date | null : T[K] extends (infer U)[] ? Wire<U>[] : T[K] };
+export type CaseView = { case: Wire<CaseBundle>; diagnosis: Diagnosis };
+
+export class ApiError extends Error {
+  constructor(readonly status: number, message: string) {
+    super(message);
+  }
+}
+
+async function call<T>(url: string, init?: RequestInit): Promise<T> {
+  const res = await fetch(url, { ...init, headers: { "content-type": "application/json", ...init?.headers } });
+  if (res.status === 204) return undefined as T;
+  const body = await res.json().catch(() => ({ error: `The server answered ${res.status}.` }));
+  if (!res.ok) throw new ApiError(res.status, body.error ?? `The server answered ${res.status}.`);
+  return body as T;
+}
+
+export const caseKeys = { all: ["case"] as const, one: (id: string) => ["case", id] as const };
+
+export const caseQuery = (caseId: string) =>
+  queryOptions({ queryKey: caseKeys.one(caseId), queryFn: () => call<CaseView>(`/api/cases/${caseId}`), staleTime: 5_000 });
+
+type Change =
+  | { kind: "observe"; symptomId: string; name: string; present: boolean; source?: "owner" | "technician" }
+  | { kind: "unobserve"; id: string }
+  | { kind: "find"; checkId: string; name: string; result?: "pass" | "fail"; reading?: string }
+  | { kind: "unfind"; id: string };
+
+function send(caseId: string, c: Change) {
+  switch (c.kind) {
+    case "observe":
+      return call(`/api/cases/${caseId}/observations`, { method: "POST", body: JSON.stringify({ symptomId: c.symptomId, present: c.present, source: c.source ?? "technician" }) });
+    case "unobserve":
+      return call(`/api/cases/${caseId}/observations/${c.id}`, { method: "DELETE" });
+    case "find":
+      return call(`/api/cases/${caseId}/findings`, { method: "POST", body: JSON.stringify({ checkId: c.checkId, result: c.result, reading: c.reading }) });
+    case "unfind":
+      return call(`/api/cases/${caseId}/findings/${c.id}`, { method: "DELETE" });
+  }
+}
+
+/** Evidence changes with an optimistic list update, rolled back if the server refuses. */
+export function useEvidence(caseId: string) {
+  const qc = useQueryClient();
+  const key = caseKeys.one(caseId);
+  return useMutation({
+    mutationFn: (c: Change) => send(caseId, c),
+    onMutate: async (c) => {
+      await qc.cancelQueries({ queryKey: key });
+      const before = qc.getQueryData<CaseView>(key);
+      if (before) qc.setQueryData<CaseView>(key, { ...before, case: optimistic(before.case, c) });
+      return { before };
+    },
+    onError: (_e, _c, ctx) => {
+      if (ctx?.before) qc.setQueryData(key, ctx.before);
+    },
+    onSettled: () => qc.invalidateQueries({ queryKey: key }),
+  });
+}
+
+function optimistic(c: CaseView["case"], change: Change): CaseView["case"] {
+  const now = new Date().toISOString();
+  switch (change.kind) {
+    case "observe":
+      return { ...c, observations: [...c.observations.filter((o) => o.symptomId !== change.symptomId), { id: `pending-${change.symptomId}`, symptomId: change.symptomId, name: change.name, present: change.present, source: change.source ?? "technician", note: null, by: null, recordedAt: now }] };
+    case "unobserve":
+      return { ...c, observations: c.observations.filter((o) => o.id !== change.id) };
+    case "find":
+      return { ...c, findings: [...c.findings, { id: `pending-${change.checkId}`, checkId: change.checkId, name: change.name, result: change.result ?? "pass", reading: change.reading ?? "…", note: null, by: null, recordedAt: now }] };
+    case "unfind":
+      return { ...c, findings: c.findings.filter((f) => f.id !== change.id) };
+  }
+}

@@ -1,0 +1,42 @@
+import type { CaseView } from "./case-queries";
+import { formatDate } from "../format";
+
+/** What has been noticed and found so far, newest last, each removable while the case is open. */
+export function EvidenceList({ c, canWork, remove }: { c: CaseView["case"]; canWork: boolean; remove: (kind: "unobserve" | "unfind", id: string) => void }) {
+  return (
+    <section aria-labelledby="evidence" className="rounded-card border border-rule bg-card p-4">
+      <h2 id="evidence" className="text-xl font-semibold">Evidence</h2>
+      <h3 className="mt-3 font-semibold">Observations</h3>
+      {c.observations.length === 0 ? <p className="text-graphite-600">None yet. Press Ctrl+K (⌘K) to add what you notice.</p> : null}
+      <ul className="mt-1 grid gap-1" aria-label="Observations">
+        {c.observations.map((o) => (
+          <li key={o.id} className="flex items-center justify-between gap-2">
+            <span>
+              <strong className={o.present ? "" : "text-graphite-600"}>{o.present ? "Present" : "Absent"}</strong>: {o.name}{" "}
+              <span className="text-sm text-graphite-600">({o.source === "owner" ? "owner says" : "confirmed"}{o.by ? `, ${o.by}` : ""})</span>
+            </span>
+            {canWork && !o.id.startsWith("pending") ? (
+              <button type="button" onClick={() => remove("unobserve", o.id)} className="min-h-tap rounded-lg px-2 text-sm text-graphite-600 hover:bg-paper" aria-label={`Remove observation ${o.name}`}>Remove</button>
+            ) : null}
+          </li>
+        ))}
+      </ul>
+      <h3 className="mt-4 font-semibold">Findings</h3>
+      {c.findings.length === 0 ? <p className="text-graphite-600">No checks done yet.</p> : null}
+      <ol className="mt-1 grid gap-1" aria-label="Findings">
+        {c.findings.map((f) => (
+          <li key={f.id} className="flex items-center justify-between gap-2">
+            <span>
+              <strong className={f.result === "fail" ? "text-stop" : ""}>{f.id.startsWith("pending") ? "Recording…" : f.result === "fail" ? "Fault found" : "Passed"}</strong>: {f.name}
+              {f.reading ? <span className="tabular"> — {f.reading}</span> : null}{" "}
+              <span className="tabular text-sm text-graphite-600">{f.by ? `${f.by}, ` : ""}{formatDate(f.recordedAt)}</span>
+            </span>
+            {canWork && !f.id.startsWith("pending") ? (
+              <button type="button" onClick={() => remove("unfind", f.id)} className="min-h-tap rounded-lg px-2 text-sm text-graphite-600 hover:bg-paper" aria-label={`Remove finding ${f.name}`}>Remove</button>
+            ) : null}
+          </li>
+        ))}
+      </ol>
+    </section>
+  );
+}

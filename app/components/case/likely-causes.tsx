@@ -1,0 +1,90 @@
+import { useEffect, useRef } from "react";
+import type { ShownCause } from "~/cases/present-diagnosis";
+import { formatPercent } from "../format";
+import { PriorityMark } from "../priority";
+
+const SHOWN = 5;
+
+/** Likely causes as bars of their share; "not in the knowledge base" always has its own bar. */
+export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlisted: number }) {
+  // Remember the last shares so a bar that moved can flash once: the user sees what changed.
+  const last = useRef(new Map<string, number>());
+  const moved = new Set(causes.filter((c) => Math.abs((last.current.get(c.id) ?? c.probability) - c.probability) > 0.005).map((c) => c.id));
+  useEffect(() => {
+    last.current = new Map(causes.map((c) => [c.id, c.probability]));
+  });
+  const top = causes.slice(0, SHOWN);
+  const rest = causes.slice(SHOWN).filter((c) => c.probability >= 0.001);
+  return (
+    <section aria-labelledby="likely" className="rounded-card border border-rule bg-card p-4">
+      <h2 id="likely" className="text-xl font-semibold">Likely causes</h2>
+      <ol className="mt-3 grid gap-3" aria-label="Likely causes, most likely first">
+        {top.map((c, i) => (
+          <CauseRow key={c.id} cause={c} rank={i + 1} moved={moved.has(c.id)} open={i === 0} />
+        ))}
+      </ol>
+      {rest.length ? (
+        <details className="mt-3">
+          <summary className="min-h-tap cursor-pointer content-center text-graphite-700">{rest.length} less likely causes</summary>
+          <ol className="mt-2 grid gap-2">
+            {rest.map((c, i) => (
+              <CauseRow key={c.id} cause={c} rank={SHOWN + i + 1} moved={moved.has(c.id)} open={false} />
+            ))}
+          </ol>
+        </details>
+      ) : null}
+      <div className="mt-4 border-t border-rule pt-3" data-testid="unlisted">
+        <Bar label="Not in the knowledge base" value={unlisted} muted />
+        <p className="text-sm text-graphite-600">When this grows, the evidence fits none of the causes we know well: ask a senior.</p>
+      </div>
+    </section>
+  );
+}
+
+function Bar({ label, value, muted = false, moved = false }: { label: string; value: number; muted?: boolean; moved?: boolean }) {
+  return (
+    <div>
+      <div className="flex items-baseline justify-between gap-3">
+        <span className={muted ? "text-graphite-700" : "font-medium"}>{label}</span>
+        <span className="tabular font-semibold" aria-label={`${formatPercent(value)} likely`}>{formatPercent(value)}</span>
+      </div>
+      <div className={`mt-1 h-3 rounded-full bg-data-soft ${moved ? "motion-safe:animate-pulse" : ""}`} aria-hidden="true">
+        <div className={`h-3 rounded-full ${muted ? "bg-graphite-500" : "bg-data"}`} style={{ width: `${Math.max(0.5, value * 100)}%` }} />
+      </div>
+    </div>
+  );
+}
+
+function CauseRow({ cause, rank, moved, open }: { cause: ShownCause; rank: number; moved: boolean; open: boolean }) {
+  const max = Math.max(1, ...cause.why.map((w) => Math.abs(w.weight)));
+  return (
+    <li data-cause={cause.name} data-moved={moved || undefined}>
+      <Bar label={`${rank}. ${cause.name}`} value={cause.probability} moved={moved} />
+      <details open={open} className="mt-1">
+        <summary className="cursor-pointer text-sm text-graphite-700">
+          Why {cause.priority ? <span className="ml-2 inline-block align-middle"><PriorityMark priority={cause.priority as "stop"} /></span> : null}
+        </summary>
+        {cause.why.length === 0 ? (
+          <p className="text-sm text-graphite-600">No evidence bears on it yet: its share is its usual frequency.</p>
+        ) : (
+          <ul className="mt-1 grid gap-1 text-sm">
+            {cause.why.map((w) => (
+              <li key={w.label} className="grid grid-cols-[1fr_8rem] items-center gap-2">
+                <span>
+                  {w.weight > 0 ? "Points to it: " : "Points away: "}
+                  {w.label}
+                </span>
+                <span className="relative h-2 rounded bg-data-soft" aria-label={`weight ${w.weight.toFixed(2)}`}>
+                  <span
+                    className={`absolute top-0 h-2 rounded ${w.weight > 0 ? "left-1/2 bg-data" : "right-1/2 bg-graphite-500"}`}
+                    style={{ width: `${(Math.abs(w.weight) / max) * 50}%` }}
+                  />
+                </span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </details>
+    </li>
+  );
+}

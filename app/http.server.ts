@@ -1,0 +1,20 @@
+// One way to refuse a request: a JSON body with a message a person can act on, and a 4xx.
+// API routes return it as it is; pages show it in their error boundary.
+export function httpError(status: number, message: string, extra: Record<string, unknown> = {}): Response {
+  return Response.json({ error: message, ...extra }, { status });
+}
+
+export function refuse(status: number, message: string, extra?: Record<string, unknown>): never {
+  throw httpError(status, message, extra);
+}
+
+/** The message inside a refusal, for pages that show it on the form instead of an error page. */
+export async function refusalMessage(error: unknown): Promise<{ status: number; message: string } | null> {
+  if (!(error instanceof Response) || error.status >= 500 || error.status < 400) return null;
+  const text = await error.clone().text();
+  try {
+    return { status: error.status, message: (JSON.parse(text) as { error?: string }).error ?? text };
+  } catch {
+    return { status: error.status, message: text };
+  }
+}

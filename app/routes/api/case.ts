@@ -1,0 +1,15 @@
+import { api } from "~/api.server";
+import { loadCase } from "~/cases/case.server";
+import { diagnoseCase } from "~/cases/diagnosis.server";
+import { dbContext } from "~/context";
+import type { Route } from "./+types/case";
+
+// GET /api/cases/:caseId — the case with its evidence, likely causes and check plan.
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const db = context.get(dbContext);
+  return api(request, db, "case:read", async (member) => {
+    const bundle = await loadCase(db, member, params.caseId);
+    const { model: _model, evidence: _evidence, ...diagnosis } = await diagnoseCase(db, member, bundle);
+    return { case: bundle, diagnosis };
+  });
+}

@@ -1,0 +1,15 @@
+import { api } from "~/api.server";
+import { loadCase } from "~/cases/case.server";
+import { diagnoseCase } from "~/cases/diagnosis.server";
+import { dbContext } from "~/context";
+import type { Route } from "./+types/diagnosis";
+
+// GET /api/cases/:caseId/diagnosis — only the ranking and plan, for the live re-rank.
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const db = context.get(dbContext);
+  return api(request, db, "case:read", async (member) => {
+    const bundle = await loadCase(db, member, params.caseId);
+    const { model: _model, evidence, ...diagnosis } = await diagnoseCase(db, member, bundle);
+    return { evidence, ...diagnosis };
+  });
+}

@@ -1,0 +1,100 @@
+import { data, Form, redirect } from "react-router";
+import { asc, eq } from "drizzle-orm";
+import { z } from "zod";
+import { memberContext, requirePermission } from "~/auth/guards.server";
+import { openCase } from "~/cases/workflow.server";
+import { dbContext } from "~/context";
+import { owners, vehicles } from "~/db/schema";
+import { refusalMessage } from "~/http.server";
+import { validateVin } from "~/measure";
+import type { Route } from "./+types/new";
+
+const Known = z.object({ mode: z.literal("known"), vehicleId: z.uuid({ message: "Pick a vehicle" }) });
+const Fresh = z.object({
+  mode: z.literal("new"),
+  ownerName: z.string().trim().min(2, "The owner's name is needed"),
+  ownerPhone: z.string().trim().max(40).optional(),
+  registration: z.string().trim().toUpperCase().min(2, "The registration is needed").max(15),
+  vin: z.string().trim().toUpperCase().optional().transform((v) => v || undefined),
+  make: z.string().trim().min(1, "Make is needed"),
+  model: z.string().trim().min(1, "Model is needed"),
+  year: z.coerce.number().int().min(1950, "Year looks wrong").max(new Date().getFullYear() + 1, "Year looks wrong"),
+  fuelType: z.enum(["petrol", "diesel", "hybrid", "electric", "lpg"]),
+  drivetrain: z.enum(["fwd", "rwd", "awd"]),
+});
+const OpenSchema = z.intersection(
+  z.discriminatedUnion("mode", [Known, Fresh]),
+  z.object({
+    mileageKm: z.coerce.number({ message: "Mileage is a number" }).int().min(0, "Mileage cannot be negative").max(3_000_000),
+    complaint: z.string().trim().min(3, "Write the complaint in the owner's words").max(2000),
+  }),
+);
+
+export async function loader({ context }: Route.LoaderArgs) {
+  const member = requirePermission(context.get(memberContext), "case:open");
+  const list = await context
+    .get(dbContext)
+    .select({ id: vehicles.id, registration: vehicles.registration, make: vehicles.make, model: vehicles.model, owner: owners.name })
+    .from(vehicles)
+    .innerJoin(owners, eq(owners.id, vehicles.ownerId))
+    .where(eq(vehicles.workshopId, member.workshopId))
+    .orderBy(asc(vehicles.registration));
+  return { vehicles: list };
+}
+
+export async function action({ request, context }: Route.ActionArgs) {
+  const member = requirePermission(context.get(memberContext), "case:open");
+  const parsed = OpenSchema.safeParse(Object.fromEntries(await request.formData()));
+  if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "Check the form" }, { status: 400 });
+  const input = parsed.data;
+  if (input.mode === "new" && input.vin) {
+    const vin = validateVin(input.vin, { requireCheckDigit: false });
+    if (!vin.valid) return data({ error: vin.message }, { status: 400 });
+  }
+  try {
+    const created = await openCase(context.get(dbContext), member, {
+      vehicleId: input.mode === "known" ? input.vehicleId : undefined,
+      newVehicle: input.mode === "new" ? input : undefined,
+      mileageKm: input.mileageKm,
+      complaint: input.complaint,
+    });
+    throw redirect(`/cases/${created.id}`);
+  } catch (error) {
+    const refused = await refusalMessage(error);
+    if (refused) return data({ error: refused.message }, { status: refused.status });
+    throw error;
+  }
+}
+
+const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base";
+
+export default function NewCase({ loaderData, actionData }: Route.ComponentProps) {
+  return (
+    <div className="max-w-2xl">
+      <h1 className="text-2xl font-semibold">Open a case</h1>
+      {actionData?.error ? <p role="alert" className="mt-3 rounded-lg border-2 border-stop bg-card p-3">{actionData.error}</p> : null}
+      <Form method="post" className="mt-4 grid gap-4" noValidate>
+        <fieldset className="grid gap-2 rounded-card border border-rule bg-card p-4">
+          <legend className="px-1 font-semibold">Vehicle on file</legend>
+          <label className="flex items-center gap-2"><input type="radio" name="mode" value="known" defaultChecked /> Pick from the list</label>
+          <select name="vehicleId" aria-label="Vehicle" className={field}>
+            {loaderData.vehicles.map((v) => (
+              <option key={v.id} value={v.id}>{v.registration} — {v.make} {v.model} ({v.owner})</option>
+            ))}
+          </select>
+          <label className="mt-2 flex items-center gap-2"><input type="radio" name="mode" value="new" /> A new owner and vehicle</label>
+          <div className="grid gap-2 sm:grid-cols-2">
+            {[["ownerName", "Owner's name"], ["ownerPhone", "Owner's phone"], ["registration", "Registration"], ["vin", "VIN (optional)"], ["make", "Make"], ["model", "Model"], ["year", "Year"]].map(([name, label]) => (
+              <label key={name} className="text-sm font-medium">{label}<input name={name} className={field} /></label>
+            ))}
+            <label className="text-sm font-medium">Fuel<select name="fuelType" className={field}>{["petrol", "diesel", "hybrid", "electric", "lpg"].map((f) => <option key={f}>{f}</option>)}</select></label>
+            <label className="text-sm font-medium">Drive<select name="drivetrain" className={field}>{["fwd", "rwd", "awd"].map((f) => <option key={f}>{f}</option>)}</select></label>
+          </div>
+        </fieldset>
+        <label className="font-medium">Mileage (km)<input name="mileageKm" inputMode="numeric" className={field} /></label>
+        <label className="font-medium">Complaint, in the owner's words<textarea name="complaint" rows={3} className={`${field} py-2`} /></label>
+        <button type="submit" className="min-h-tap rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700">Open the case</button>
+      </Form>
+    </div>
+  );
+}

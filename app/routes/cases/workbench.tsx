@@ -1,0 +1,120 @@
+import { useQuery } from "@tanstack/react-query";
+import { data, Link, useRevalidator } from "react-router";
+import { useEffect } from "react";
+import { memberContext, requirePermission } from "~/auth/guards.server";
+import { can } from "~/auth/permissions";
+import { loadCase } from "~/cases/case.server";
+import { diagnoseCase } from "~/cases/diagnosis.server";
+import { runWorkbenchForm, WorkbenchForm } from "~/cases/workbench-actions.server";
+import { ApprenticeMode } from "~/components/case/apprentice-mode";
+import { caseQuery, type CaseView, useEvidence } from "~/components/case/case-queries";
+import { CheckPlan, type RecordResult } from "~/components/case/check-plan";
+import { ConclusionPanel } from "~/components/case/conclusion-panel";
+import { EvidenceList } from "~/components/case/evidence-list";
+import { LikelyCauses } from "~/components/case/likely-causes";
+import { CaseQuickFind } from "~/components/case/case-quick-find";
+import { ErrorPage } from "~/components/error-page";
+import { STATE_LABEL } from "~/components/format";
+import { dbContext } from "~/context";
+import { refusalMessage } from "~/http.server";
+import { knowledgeEntries } from "~/search/quick-find.server";
+import { isRouteErrorResponse } from "react-router";
+import type { Route } from "./+types/workbench";
+
+export async function loader({ params, context }: Route.LoaderArgs) {
+  const member = requirePermission(context.get(memberContext), "case:read");
+  const db = context.get(dbContext);
+  const bundle = await loadCase(db, member, params.caseId);
+  const { model: _m, evidence: _e, ...diagnosis } = await diagnoseCase(db, member, bundle);
+  const entries = (await knowledgeEntries(db, member.workshopId, bundle.workshop.kbVersion)).filter((e) => e.kind === "symptom");
+  const canWork = bundle.state === "open" && (can(member.role, "case:work") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId));
+  return {
+    view: { case: bundle, diagnosis } satisfies CaseView as CaseView,
+    entries,
+    me: { role: member.role, canWork, mayConclude: can(member.role, "case:conclude") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId), maySignOff: can(member.role, "case:signoff") },
+  };
+}
+
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const member = context.get(memberContext);
+  const db = context.get(dbContext);
+  const parsed = WorkbenchForm.safeParse(Object.fromEntries(await request.formData()));
+  if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "Check the form", notice: null }, { status: 400 });
+  try {
+    const bundle = await loadCase(db, member, params.caseId);
+    return { error: null, notice: await runWorkbenchForm(db, member, bundle, parsed.data) };
+  } catch (error) {
+    const refused = await refusalMessage(error);
+    if (refused && refused.status !== 404) return data({ error: refused.message, notice: null }, { status: refused.status });
+    throw error;
+  }
+}
+
+export function meta({ loaderData }: Route.MetaArgs) {
+  const c = loaderData?.view.case as { number?: number } | undefined;
+  return [{ title: c?.number ? `Case #${c.number} — Ramplight` : "Case — Ramplight" }];
+}
+
+export default function Workbench({ loaderData, actionData }: Route.ComponentProps) {
+  const { me, entries } = loaderData;
+  const initial = loaderData.view;
+  const id = initial.case.id;
+  const query = useQuery({ ...caseQuery(id), initialData: initial });
+  const view = query.data ?? initial;
+  const evidence = useEvidence(id);
+  const revalidator = useRevalidator();
+  // A form post (conclude, sign-off) changes the case: refresh the live copy from the new loader data.
+  useEffect(() => {
+    if (actionData?.notice) void query.refetch();
+  }, [actionData]);
+  const c = view.case;
+  const d = view.diagnosis;
+  const record: RecordResult = (step, r) => evidence.mutate({ kind: "find", checkId: step.checkId, name: step.name, ...r });
+  const error = evidence.error ? evidence.error.message : null;
+  return (
+    <div className="grid gap-4">
+      <header className="flex flex-wrap items-start justify-between gap-3">
+        <div>
+          <p className="text-sm text-graphite-600"><Link to="/cases" className="underline">Cases</Link> · {STATE_LABEL[c.state]}{c.assignedName ? ` · with ${c.assignedName}` : ""}</p>
+          <h1 className="text-2xl font-semibold"><span className="tabular">#{c.number}</span> · {c.vehicle.registration}</h1>
+          <p className="text-graphite-700">
+            {c.vehicle.make} {c.vehicle.model} ({c.vehicle.year}) · {c.vehicle.engine} · {c.vehicle.fuelType}
+            {c.mileageKm != null ? <span className="tabular"> · {c.mileageKm.toLocaleString("en-GB")} km</span> : null} · owner {c.owner.name}
+          </p>
+          <blockquote className="mt-2 border-l-4 border-uv-500 pl-3 text-lg">“{c.complaint}”</blockquote>
+        </div>
+        {me.canWork ? <CaseQuickFind entries={entries} recent={c.observations.map((o) => o.symptomId)} onAdd={(e, present) => evidence.mutate({ kind: "observe", symptomId: e.id, name: e.title, present })} /> : null}
+      </header>
+      {actionData?.notice ? <p role="status" className="rounded-lg border border-sound bg-card p-3">{actionData.notice}</p> : null}
+      {revalidator.state === "loading" ? <p className="sr-only">Updating…</p> : null}
+      <div className="grid gap-4 lg:grid-cols-[1fr_1.1fr]">
+        <div className="grid content-start gap-4">
+          <LikelyCauses causes={d.causes} unlisted={d.unlisted} />
+          <EvidenceList c={c} canWork={me.canWork} remove={(kind, itemId) => evidence.mutate({ kind, id: itemId })} />
+        </div>
+        <div className="grid content-start gap-4">
+          {me.canWork && me.role === "apprentice" ? (
+            <ApprenticeMode plan={d.plan} currency={c.workshop.currency} record={record} busy={evidence.isPending} error={error} needsSenior={c.needsSenior} />
+          ) : me.canWork ? (
+            <CheckPlan plan={d.plan} currency={c.workshop.currency} record={record} busy={evidence.isPending} error={error} />
+          ) : null}
+          <ConclusionPanel
+            state={c.state}
+            version={c.version}
+            causes={d.causes}
+            conclusion={{ cause: c.conclusionCause, notes: c.conclusionNotes }}
+            mayConclude={me.mayConclude}
+            maySignOff={me.maySignOff}
+            isApprentice={me.role === "apprentice"}
+            error={actionData?.error}
+          />
+        </div>
+      </div>
+    </div>
+  );
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  if (isRouteErrorResponse(error)) return <ErrorPage status={error.status} message={typeof error.data === "string" ? error.data : (error.data as { error?: string })?.error} />;
+  return <ErrorPage status={500} />;
+}
