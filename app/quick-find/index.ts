@@ -1,0 +1,23 @@
+// Quick find, the pure part: entries → index → grouped results. No React, no database.
+export { buildIndex, FIELD_WEIGHT, FUSE_KEYS, type QuickFindIndex } from "./build";
+export { cachedKeys, clearQuickFindCache, getIndex, quickFindKey } from "./cache";
+export {
+  caseEntry,
+  causeEntry,
+  checkEntry,
+  entriesFromKnowledgeBase,
+  symptomEntry,
+  SYSTEM_LABEL,
+  vehicleEntry,
+  type CaseRow,
+  type CauseRow,
+  type CheckRow,
+  type KnowledgeBaseRows,
+  type SymptomRow,
+  type VehicleRow,
+} from "./entries";
+export { normaliseText } from "./normalise";
+export { parseQuery } from "./query";
+export { DEFAULT_LIMIT, search } from "./search";
+export { SYNONYM_GROUPS, type SynonymGroup } from "./synonyms";
+export { ENTRY_KINDS, GROUP_HEADING, type Entry, type EntryKind, type GroupKind, type ResultGroup, type ScoredEntry, type SearchOptions } from "./types";

@@ -1,0 +1,156 @@
+// The per-keystroke path for one index: the inverted index narrows 10,000 entries to the few that
+// contain every query word (or its concept, prefix, code fragment or near-miss spelling), and Fuse
+// then re-scores only those few. Nothing here allocates per entry.
+import type { Postings, QuickFindIndex } from "./build";
+import { wordConcept } from "./build";
+import { hasDigit } from "./normalise";
+import type { ParsedQuery } from "./query";
+import { nearWords } from "./typo";
+import { ENTRY_KINDS, type EntryKind, type ScoredEntry } from "./types";
+
+// How much each kind of match is worth, relative to the word itself found in the same field.
+export const MATCH = { exact: 1, concept: 0.85, prefix: 0.8, prefixConcept: 0.7, code: 0.7, typo: 0.6, typoConcept: 0.5 } as const;
+export const PHRASE_BONUS = 0.25; // the whole query is one of the entry's phrases ("pulls left")
+export const RECENT_BONUS = 0.05; // a nudge, never enough to beat a better match
+export const FUSE_BONUS = 0.3; // × (1 − Fuse score) for the re-scored candidates
+const PREFIX_TERMS_MAX = 4000; // bounds a one-letter prefix at very large vocabularies
+const RERANK_PER_KIND = 3; // × limit candidates per kind go to Fuse
+
+function lowerBound(list: string[], key: string): number {
+  let lo = 0;
+  let hi = list.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (list[mid] < key) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
+function* withPrefix(list: string[], prefix: string): Generator<string> {
+  for (let i = lowerBound(list, prefix), n = 0; i < list.length && n < PREFIX_TERMS_MAX; i++, n++) {
+    if (!list[i].startsWith(prefix)) return;
+    yield list[i];
+  }
+}
+
+export type ScoreInput = { query: ParsedQuery; kinds: ReadonlySet<EntryKind>; recent: ReadonlySet<string>; limit: number };
+
+export function scoreIndex(index: QuickFindIndex, { query, kinds, recent, limit }: ScoreInput): ScoredEntry[] {
+  const { tok, total, cover } = index.scratch;
+  const all: number[] = [];
+  for (const qt of query.tokens) {
+    const touched: number[] = [];
+    const add = (p: Postings | undefined, factor: number) => {
+      if (!p) return;
+      const { docs, weights } = p;
+      for (let k = 0; k < docs.length; k++) {
+        const d = docs[k];
+        const s = weights[k] * factor;
+        if (s > tok[d]) {
+          if (tok[d] === 0) touched.push(d);
+          tok[d] = s;
+        }
+      }
+    };
+    const w = qt.word;
+    let found = false;
+    if (w) {
+      const p = index.words.get(w);
+      add(p, MATCH.exact);
+      found = !!p;
+    }
+    if (qt.concept) {
+      const p = index.concepts.get(qt.concept);
+      add(p, w ? MATCH.concept : MATCH.exact);
+      found ||= !!p;
+    }
+    if (w && qt.prefix) {
+      const seen = new Set<string>();
+      for (const term of withPrefix(index.wordList, w)) {
+        if (term === w) continue;
+        found = true;
+        add(index.words.get(term), MATCH.prefix * (0.6 + (0.4 * w.length) / term.length));
+        const c = w.length >= 3 ? wordConcept.get(term) : undefined;
+        if (c && c !== qt.concept) seen.add(c);
+      }
+      for (const c of seen) add(index.concepts.get(c), MATCH.prefixConcept);
+    }
+    if (w && w.length >= 3 && hasDigit(w)) {
+      for (const term of withPrefix(index.codeList, w)) add(index.codes.get(term), MATCH.code);
+    }
+    if (w && !found) {
+      for (const near of nearWords(w, index.typoWords, qt.prefix)) {
+        add(index.words.get(near), MATCH.typo);
+        const c = wordConcept.get(near);
+        if (c) add(index.concepts.get(c), MATCH.typoConcept);
+      }
+    }
+    // Run-together words ("vibrationbraking"): split where both halves are known words.
+    if (w && touched.length === 0) splitMatch(index, w, qt.prefix, tok, touched);
+    for (const d of touched) {
+      if (cover[d] === 0) all.push(d);
+      total[d] += tok[d];
+      cover[d]++;
+      tok[d] = 0;
+    }
+  }
+
+  // Every word should count; with three or more words one may miss (an owner's extra word).
+  const n = query.tokens.length;
+  let maxCover = 0;
+  for (const d of all) if (kinds.has(ENTRY_KINDS[index.kindOf[d]]) && cover[d] > maxCover) maxCover = cover[d];
+  const required = Math.max(1, maxCover - (n >= 3 ? 1 : 0));
+  const byKind = new Map<number, { d: number; s: number }[]>();
+  for (const d of all) {
+    const k = index.kindOf[d];
+    if (cover[d] >= required && kinds.has(ENTRY_KINDS[k])) {
+      let s = total[d] / n;
+      if (query.canonical && index.phrases[d].includes(query.canonical)) s += PHRASE_BONUS;
+      if (recent.has(index.entries[d].id)) s += RECENT_BONUS;
+      const list = byKind.get(k) ?? [];
+      list.push({ d, s });
+      byKind.set(k, list);
+    }
+    total[d] = 0;
+    cover[d] = 0;
+  }
+
+  const picked: { d: number; s: number }[] = [];
+  for (const list of byKind.values()) picked.push(...list.sort((a, b) => b.s - a.s).slice(0, limit * RERANK_PER_KIND));
+  return rerank(index, query, picked);
+}
+
+function rerank(index: QuickFindIndex, query: ParsedQuery, picked: { d: number; s: number }[]): ScoredEntry[] {
+  if (picked.length === 0) return [];
+  const score = new Map(picked.map((p) => [p.d, p.s]));
+  // Concepts stand in for their words (an entry's Fuse text carries both), so "judder" meets "vibration".
+  const fuseQuery = query.tokens.map((t) => t.concept ?? t.word).join(" ");
+  index.rerankIndex.setIndexRecords(picked.map((p) => index.fuseRecords[p.d]));
+  index.rerank.setCollection(index.fuseDocs, index.rerankIndex);
+  for (const r of index.rerank.search(fuseQuery)) {
+    score.set(r.refIndex, (score.get(r.refIndex) ?? 0) + FUSE_BONUS * (1 - (r.score ?? 1)));
+  }
+  return picked.map((p) => ({ entry: index.entries[p.d], score: score.get(p.d) ?? p.s }));
+}
+
+/** Scores entries holding both halves of a word typed without its space, at the typo rate. */
+function splitMatch(index: QuickFindIndex, w: string, prefix: boolean, tok: Float32Array, touched: number[]) {
+  for (let i = 3; i <= w.length - 3; i++) {
+    const left = index.words.get(w.slice(0, i));
+    if (!left) continue;
+    const rightWord = w.slice(i);
+    const right = index.words.get(rightWord) ?? (prefix ? index.words.get(withPrefix(index.wordList, rightWord).next().value ?? "") : undefined);
+    if (!right) continue;
+    const fromLeft = new Map<number, number>();
+    for (let k = 0; k < left.docs.length; k++) fromLeft.set(left.docs[k], left.weights[k]);
+    for (let k = 0; k < right.docs.length; k++) {
+      const a = fromLeft.get(right.docs[k]);
+      if (a === undefined) continue;
+      const d = right.docs[k];
+      if (tok[d] === 0) touched.push(d);
+      tok[d] = Math.max(tok[d], (MATCH.typo * (a + right.weights[k])) / 2);
+    }
+    if (touched.length) return;
+  }
+}

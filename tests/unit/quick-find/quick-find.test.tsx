@@ -1,0 +1,115 @@
+// The Quick find palette in a browser-like DOM: the shortcut, typing, the two symptom actions
+// from the keyboard and by tap, jumping to other kinds, and closing.
+import { act, fireEvent, render, screen, within } from "@testing-library/react";
+import { describe, expect, it, vi } from "vitest";
+import { QuickFind } from "~/components/quick-find/quick-find";
+import type { Entry } from "~/quick-find";
+import { allEntries } from "./fixtures";
+
+const openWithCtrlK = () => fireEvent.keyDown(window, { key: "k", ctrlKey: true });
+const input = () => screen.getByRole("combobox", { name: "Quick find" });
+const type = (text: string) => fireEvent.change(input(), { target: { value: text } });
+const options = () => screen.getAllByRole("option");
+const selected = () => options().find((o) => o.getAttribute("aria-selected") === "true");
+
+function setup(extra: Partial<React.ComponentProps<typeof QuickFind>> = {}) {
+  const onPick = vi.fn<(entry: Entry, pick: { present?: boolean }) => void>();
+  render(<QuickFind entries={allEntries} onPick={onPick} {...extra} />);
+  return onPick;
+}
+
+describe("Quick find palette", () => {
+  it("opens with Ctrl+K as a dialog labelled “Quick find” with a labelled input", () => {
+    setup();
+    expect(screen.queryByRole("dialog")).toBeNull();
+    openWithCtrlK();
+    expect(screen.getByRole("dialog", { name: "Quick find" })).toBeTruthy();
+    expect(document.activeElement).toBe(input());
+  });
+
+  it("also opens from its visible button, which shows the shortcut", () => {
+    setup();
+    const button = screen.getByRole("button", { name: /quick find/i });
+    expect(button.textContent).toMatch(/K/);
+    fireEvent.click(button);
+    expect(screen.getByRole("dialog", { name: "Quick find" })).toBeTruthy();
+  });
+
+  it("puts the braking vibration first, under the Symptoms heading, and Enter adds it as present", () => {
+    const onPick = setup();
+    openWithCtrlK();
+    type("judder when braking");
+    expect(options()[0].textContent).toContain("Vibration through the steering wheel under braking");
+    expect(selected()).toBe(options()[0]);
+    expect(screen.getByText("Symptoms")).toBeTruthy();
+    fireEvent.keyDown(input(), { key: "Enter" });
+    expect(onPick).toHaveBeenCalledTimes(1);
+    expect(onPick.mock.calls[0][0].id).toBe("vibration_braking");
+    expect(onPick.mock.calls[0][1]).toEqual({ present: true });
+    // stays open for the next symptom, with the box cleared and the addition announced
+    expect(input()).toHaveProperty("value", "");
+    expect(screen.getByRole("status").textContent).toMatch(/as present/);
+  });
+
+  it("adds the highlighted symptom as absent with Shift+Enter, following the arrow keys", () => {
+    const onPick = setup();
+    openWithCtrlK();
+    type("pulls left");
+    const second = options()[1];
+    fireEvent.keyDown(input(), { key: "ArrowDown" });
+    expect(selected()).toBe(second);
+    fireEvent.keyDown(input(), { key: "Enter", shiftKey: true });
+    expect(onPick).toHaveBeenCalledTimes(1);
+    expect(onPick.mock.calls[0][0].title).toBe(second.querySelector(".font-medium")?.textContent);
+    expect(onPick.mock.calls[0][1]).toEqual({ present: false });
+  });
+
+  it("adds as absent from the row's Absent chip, for a tap with no keyboard", () => {
+    const onPick = setup();
+    openWithCtrlK();
+    type("squeal brake");
+    fireEvent.click(within(options()[0]).getByText("Absent"));
+    expect(onPick).toHaveBeenCalledTimes(1);
+    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ id: "squeal_braking" }), { present: false }]);
+  });
+
+  it("jumps to a vehicle with Enter and closes", () => {
+    const onPick = setup();
+    openWithCtrlK();
+    type("DEMO 101");
+    expect(screen.getByText("Vehicles")).toBeTruthy();
+    fireEvent.keyDown(input(), { key: "Enter" });
+    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ kind: "vehicle", id: "orlan-brisk" }), {}]);
+    expect(screen.queryByRole("dialog")).toBeNull();
+  });
+
+  it("shows recent items first when the box is empty", () => {
+    setup({ recentIds: ["clunk_front_bumps", "b1"] });
+    openWithCtrlK();
+    expect(screen.getByText("Recent")).toBeTruthy();
+    expect(options()[0].textContent).toContain("Clunk from the front over bumps");
+    expect(options()[1].textContent).toContain("#1041");
+  });
+
+  it("closes with Escape, and Ctrl+K toggles it shut too", () => {
+    setup();
+    openWithCtrlK();
+    fireEvent.keyDown(input(), { key: "Escape" });
+    expect(screen.queryByRole("dialog")).toBeNull();
+    openWithCtrlK();
+    expect(screen.getByRole("dialog")).toBeTruthy();
+    openWithCtrlK();
+    expect(screen.queryByRole("dialog")).toBeNull();
+  });
+
+  it("loads its entries from a loader on first open", async () => {
+    const loader = vi.fn(async () => allEntries);
+    setup({ entries: loader });
+    expect(loader).not.toHaveBeenCalled();
+    openWithCtrlK();
+    await act(async () => {});
+    expect(loader).toHaveBeenCalledTimes(1);
+    type("drinks fuel");
+    expect(options()[0].textContent).toContain("High fuel consumption");
+  });
+});
