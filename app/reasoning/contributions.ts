@@ -14,7 +14,7 @@ export function computeContributions(index: ModelIndex, items: readonly Evidence
   const H = index.hypotheses;
   const L = index.leafCount;
   const out = new Float64Array(items.length * L);
-  const pi = Float64Array.from(index.prior); // P(h | evidence so far)
+  const pi = index.prior.slice(); // P(h | evidence so far)
   const lik = new Float64Array(H);
   const tailPL = new Float64Array(H + 1); // Σ_{j ≥ h} π_j·lik_j
   const tailP = new Float64Array(H + 1); // Σ_{j ≥ h} π_j

@@ -33,17 +33,18 @@ export function fail(code: ReasoningErrorCode, message: string): never {
   throw new ReasoningError(code, message);
 }
 
-// Shared guards: NaN and ±Infinity fail every comparison below, so they are caught too.
-export function checkProbability(p: unknown, what: string): number {
+// Shared guards. NaN and ±Infinity fail every comparison below, so they are caught too. `what`
+// is a function so the message is only built when the check fails (they run per link).
+export function checkProbability(p: unknown, what: () => string): number {
   if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
-    fail("INVALID_PROBABILITY", `${what} is ${String(p)}; a probability must be between 0 and 1.`);
+    fail("INVALID_PROBABILITY", `${what()} is ${String(p)}; a probability must be between 0 and 1.`);
   }
   return p;
 }
 
-export function checkCostValue(c: unknown, what: string): number {
-  if (typeof c !== "number" || !Number.isFinite(c) || c <= 0) {
-    fail("INVALID_COST", `${what} is ${String(c)}; a cost must be a positive number.`);
+export function checkCostValue(c: unknown, what: () => string): number {
+  if (typeof c !== "number" || !(c > 0 && c < Infinity)) {
+    fail("INVALID_COST", `${what()} is ${String(c)}; a cost must be a positive number.`);
   }
   return c;
 }

@@ -57,7 +57,7 @@ function expandItem(
   const from = start[g];
   const m = start[g + 1] - from;
   const ex = index.expander;
-  const n = ex.expand(node.subarray(from, from + m), p.subarray(from, from + m), m);
+  const n = ex.expand(node, p, from, m);
   const leaves = new Int32Array(n);
   const liks = new Float64Array(n);
   for (let j = 0; j < n; j++) {

@@ -16,21 +16,21 @@ export class LeafExpander {
     this.touched = new Int32Array(tree.leafCount);
   }
 
-  /** Expand pairs (cause indices, values, parallel arrays of length m) and return how many leaves they reach. */
-  expand(nodes: ArrayLike<number>, values: ArrayLike<number>, m: number): number {
+  /** Expand pairs nodes[from..from+m) / values[from..from+m) and return how many leaves they reach. */
+  expand(nodes: Int32Array, values: Float64Array, from: number, m: number): number {
     const { tree } = this;
     this.epoch++;
     this.count = 0;
     let order: number[] | null = null;
-    for (let j = 0; j < m; j++) {
-      if (tree.leafOf[nodes[j]] < 0) {
+    for (let j = from; j < from + m; j++) {
+      if (tree.leafOf[nodes[j]] < 0 && m > 1) {
         // Inner nodes present: apply shallow pairs first so deeper (nearer) ones overwrite them.
-        order = Array.from({ length: m }, (_, k) => k).sort((a, b) => tree.depth[nodes[a]] - tree.depth[nodes[b]]);
+        order = Array.from({ length: m }, (_, k) => from + k).sort((a, b) => tree.depth[nodes[a]] - tree.depth[nodes[b]]);
         break;
       }
     }
     for (let k = 0; k < m; k++) {
-      const j = order === null ? k : order[k];
+      const j = order === null ? from + k : order[k];
       const node = nodes[j];
       const v = values[j];
       for (let leaf = tree.lo[node], end = tree.hi[node]; leaf < end; leaf++) {

@@ -7,29 +7,8 @@
 //
 // Linear time: every hypothesis a check does not bear on shrinks by the same factor (1 − false
 // alarm), so that factor is kept once as G and only the leaves the check bears on are updated.
+import type { CheckLeaves } from "./check-leaves";
 import type { ModelIndex } from "./model-index";
-
-export type CheckLeaves = { start: Int32Array; leaf: Int32Array; pFail: Float64Array };
-
-/** Every check's bearings expanded to leaves (nearest node wins), as CSR arrays. */
-export function expandAllChecks(index: ModelIndex): CheckLeaves {
-  const K = index.checkIds.length;
-  const start = new Int32Array(K + 1);
-  const leaves: number[] = [];
-  const values: number[] = [];
-  const ex = index.expander;
-  for (let k = 0; k < K; k++) {
-    const from = index.bearStart[k];
-    const m = index.bearStart[k + 1] - from;
-    const n = ex.expand(index.bearNode.subarray(from, from + m), index.bearP.subarray(from, from + m), m);
-    for (let j = 0; j < n; j++) {
-      leaves.push(ex.leafAt(j));
-      values.push(ex.valueAt(j));
-    }
-    start[k + 1] = leaves.length;
-  }
-  return { start, leaf: Int32Array.from(leaves), pFail: Float64Array.from(values) };
-}
 
 /** P(check k fails) = Σ_h P(h)·q_k(h): its own figure on the leaves it bears on, false alarm elsewhere. */
 export function failProbability(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, k: number): number {
@@ -44,7 +23,7 @@ export type OrderCost = { total: number; reached: Float64Array }; // reached[i] 
 
 export function expectedCost(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, order: ArrayLike<number>): OrderCost {
   const H = prob.length;
-  const t = Float64Array.from(prob); // survival of each hypothesis, relative to G
+  const t = prob.slice(); // survival of each hypothesis, relative to G
   let T = 1; // Σ t
   let G = 1;
   let total = 0;

@@ -1,19 +1,20 @@
-// Per-call index of a Model: ids resolved to integer indices, links grouped by symptom and
-// check bearings grouped by check (CSR arrays), priors normalised. Built in one pass over the
-// model so a whole rank + plan stays linear in its size. Every range and cross-reference is
-// checked here, so the maths downstream never sees NaN.
+// Index of a Model: ids resolved to integer indices, links grouped by symptom and check
+// bearings grouped by check (CSR arrays). Built in one pass over the model, so a whole rank +
+// plan stays linear in its size. Every range and cross-reference is checked here, so the maths
+// downstream never sees NaN. Priors depend on the unlisted share, so they are added per call.
 import { checkCostValue, checkProbability, fail } from "./errors";
+// (checkProbability/checkCostValue build their message only on failure: callers pass a function.)
 import { LeafExpander } from "./expand";
-import { skillRank } from "./options";
+import { DEFAULT_CHECK_SKILL, skillRank } from "./options";
 import type { Model } from "./schema";
 import { buildTree, type Tree } from "./tree";
 
-export type ModelIndex = {
+export type BaseIndex = {
   tree: Tree;
   leafCount: number;
   hypotheses: number; // leaves + 1; the last hypothesis is "not in the knowledge base"
-  prior: Float64Array; // per hypothesis, sums to 1
-  logPrior: Float64Array;
+  leafWeight: Float64Array; // the leaves' relative base rates as given
+  leafWeightSum: number;
   symptomIndex: Map<string, number>;
   leak: Float64Array;
   linkStart: Int32Array; // links of symptom s: linkNode/linkP[linkStart[s] .. linkStart[s+1])
@@ -31,21 +32,29 @@ export type ModelIndex = {
   expander: LeafExpander;
 };
 
-export function buildIndex(model: Model, unlistedPrior: number): ModelIndex {
+export type ModelIndex = BaseIndex & {
+  prior: Float64Array; // per hypothesis, sums to 1
+  logPrior: Float64Array;
+};
+
+const DEFAULT_SKILL_RANK = skillRank(DEFAULT_CHECK_SKILL, "default skill");
+
+export function buildIndex(model: Model): BaseIndex {
   if (!model || !Array.isArray(model.causes) || !Array.isArray(model.symptoms)) {
     fail("INVALID_INPUT", "A model needs arrays of causes, symptoms, links and checks.");
   }
   const tree = buildTree(model.causes);
   const L = tree.leafCount;
-  const { prior, logPrior } = leafPriors(model, tree, unlistedPrior);
+  const { leafWeight, leafWeightSum } = leafWeights(model, tree);
 
   const symptomIndex = new Map<string, number>();
   const leak = new Float64Array(model.symptoms.length);
-  model.symptoms.forEach((s, i) => {
+  for (let i = 0; i < model.symptoms.length; i++) {
+    const s = model.symptoms[i];
     if (symptomIndex.has(s.id)) fail("DUPLICATE_ID", `Two symptoms have the id "${s.id}".`);
     symptomIndex.set(s.id, i);
-    leak[i] = checkProbability(s.leak, `The leak of symptom "${s.id}"`);
-  });
+    leak[i] = checkProbability(s.leak, () => `The leak of symptom "${s.id}"`);
+  }
 
   const links = model.links ?? [];
   const linkSym = new Int32Array(links.length);
@@ -56,11 +65,11 @@ export function buildIndex(model: Model, unlistedPrior: number): ModelIndex {
     if (s === undefined) fail("UNKNOWN_ID", `A link names symptom "${l.symptomId}", which is not in the model.`);
     const c = tree.causeIndex.get(l.causeId);
     if (c === undefined) fail("UNKNOWN_ID", `A link names cause "${l.causeId}", which is not in the model.`);
-    checkProbability(l.p, `P(${l.symptomId} | ${l.causeId})`);
+    if (typeof l.p !== "number" || !(l.p >= 0 && l.p <= 1)) checkProbability(l.p, () => `P(${l.symptomId} | ${l.causeId})`); // inline: hot loop
     linkSym[i] = s;
     linkCause[i] = c;
   }
-  const link = groupBy(linkSym, linkCause, model.symptoms.length, (i) => links[i].p);
+  const link = groupBy(linkSym, linkCause, model.symptoms.length, links);
   rejectDuplicates(link.start, link.node, tree, (s, c) => `symptom "${model.symptoms[s].id}" and cause "${c}"`);
 
   const checks = model.checks ?? [];
@@ -68,33 +77,40 @@ export function buildIndex(model: Model, unlistedPrior: number): ModelIndex {
   const cost = new Float64Array(checks.length);
   const falseAlarm = new Float64Array(checks.length);
   const skill = new Int8Array(checks.length);
-  const bearCheck: number[] = [];
-  const bearCause: number[] = [];
-  const bearValue: number[] = [];
-  checks.forEach((k, i) => {
+  // Checks are already grouped (each lists its own bearings), so the CSR arrays fill in order.
+  const bearStart = new Int32Array(checks.length + 1);
+  for (let i = 0; i < checks.length; i++) {
+    const bears = checks[i].bears;
+    if (!Array.isArray(bears)) fail("INVALID_INPUT", `Check "${checks[i].id}" has no list of causes it bears on.`);
+    bearStart[i + 1] = bearStart[i] + bears.length;
+  }
+  const bearNode = new Int32Array(bearStart[checks.length]);
+  const bearP = new Float64Array(bearStart[checks.length]);
+  for (let i = 0; i < checks.length; i++) {
+    const k = checks[i];
     if (checkIndex.has(k.id)) fail("DUPLICATE_ID", `Two checks have the id "${k.id}".`);
     checkIndex.set(k.id, i);
-    cost[i] = checkCostValue(k.cost, `The cost of check "${k.id}"`);
-    falseAlarm[i] = checkProbability(k.falseAlarm, `The false-alarm rate of check "${k.id}"`);
-    skill[i] = skillRank(k.skill, `The skill of check "${k.id}"`);
-    if (!Array.isArray(k.bears)) fail("INVALID_INPUT", `Check "${k.id}" has no list of causes it bears on.`);
-    for (const b of k.bears) {
+    cost[i] = checkCostValue(k.cost, () => `The cost of check "${k.id}"`);
+    falseAlarm[i] = checkProbability(k.falseAlarm, () => `The false-alarm rate of check "${k.id}"`);
+    skill[i] = k.skill === undefined ? DEFAULT_SKILL_RANK : skillRank(k.skill, `The skill of check "${k.id}"`);
+    for (let j = 0, at = bearStart[i]; j < k.bears.length; j++, at++) {
+      const b = k.bears[j];
       const c = tree.causeIndex.get(b.causeId);
       if (c === undefined) fail("UNKNOWN_ID", `Check "${k.id}" bears on cause "${b.causeId}", which is not in the model.`);
-      bearCheck.push(i);
-      bearCause.push(c);
-      bearValue.push(checkProbability(b.pFail, `P(${k.id} fails | ${b.causeId})`));
+      bearNode[at] = c;
+      if (typeof b.pFail !== "number" || !(b.pFail >= 0 && b.pFail <= 1)) checkProbability(b.pFail, () => `P(${k.id} fails | ${b.causeId})`);
+      bearP[at] = b.pFail;
     }
-  });
-  const bear = groupBy(Int32Array.from(bearCheck), Int32Array.from(bearCause), checks.length, (i) => bearValue[i]);
+  }
+  const bear = { start: bearStart, node: bearNode, value: bearP };
   rejectDuplicates(bear.start, bear.node, tree, (k, c) => `check "${checks[k].id}" and cause "${c}"`);
 
   return {
     tree,
     leafCount: L,
     hypotheses: L + 1,
-    prior,
-    logPrior,
+    leafWeight,
+    leafWeightSum,
     symptomIndex,
     leak,
     linkStart: link.start,
@@ -113,28 +129,32 @@ export function buildIndex(model: Model, unlistedPrior: number): ModelIndex {
   };
 }
 
-// Leaf priors normalised to 1 − u; "not in the knowledge base" gets u. Inner nodes' priors are
-// ignored: a node's share is always the sum of its leaves.
-function leafPriors(model: Model, tree: Tree, u: number) {
-  const L = tree.leafCount;
-  const prior = new Float64Array(L + 1);
-  let sum = 0;
+// Inner nodes' priors are validated but ignored: a node's share is always the sum of its leaves.
+function leafWeights(model: Model, tree: Tree) {
   for (let i = 0; i < model.causes.length; i++) {
     const p = model.causes[i].prior;
     if (typeof p !== "number" || !Number.isFinite(p) || p < 0) {
       fail("INVALID_PRIOR", `Cause "${model.causes[i].id}" has prior ${String(p)}; it must be 0 or more.`);
     }
   }
-  for (let leaf = 0; leaf < L; leaf++) sum += model.causes[tree.leafCause[leaf]].prior;
-  if (!(sum > 0)) fail("ZERO_PRIOR", "Every candidate cause has prior 0; at least one needs a positive base rate.");
-  for (let leaf = 0; leaf < L; leaf++) prior[leaf] = ((1 - u) * model.causes[tree.leafCause[leaf]].prior) / sum;
-  prior[L] = u;
-  const logPrior = prior.map(Math.log);
-  return { prior, logPrior };
+  const leafWeight = new Float64Array(tree.leafCount);
+  let leafWeightSum = 0;
+  for (let leaf = 0; leaf < tree.leafCount; leaf++) leafWeightSum += leafWeight[leaf] = model.causes[tree.leafCause[leaf]].prior;
+  if (!(leafWeightSum > 0)) fail("ZERO_PRIOR", "Every candidate cause has prior 0; at least one needs a positive base rate.");
+  return { leafWeight, leafWeightSum };
 }
 
-// Counting sort of (group, node, value) triples into CSR arrays: O(items + groups).
-function groupBy(group: Int32Array, node: Int32Array, groups: number, valueOf: (i: number) => number) {
+/** Priors per hypothesis: leaves share 1 − u in proportion to their base rates; "not in the knowledge base" gets u. */
+export function priorsFor(base: BaseIndex, u: number): { prior: Float64Array; logPrior: Float64Array } {
+  const L = base.leafCount;
+  const prior = new Float64Array(L + 1);
+  for (let leaf = 0; leaf < L; leaf++) prior[leaf] = ((1 - u) * base.leafWeight[leaf]) / base.leafWeightSum;
+  prior[L] = u;
+  return { prior, logPrior: prior.map(Math.log) };
+}
+
+// Counting sort of links into CSR arrays by symptom: O(links + symptoms).
+function groupBy(group: Int32Array, node: Int32Array, groups: number, links: Model["links"]) {
   const start = new Int32Array(groups + 1);
   for (let i = 0; i < group.length; i++) start[group[i] + 1]++;
   for (let g = 0; g < groups; g++) start[g + 1] += start[g];
@@ -144,7 +164,7 @@ function groupBy(group: Int32Array, node: Int32Array, groups: number, valueOf: (
   for (let i = 0; i < group.length; i++) {
     const k = at[group[i]]++;
     outNode[k] = node[i];
-    outValue[k] = valueOf(i);
+    outValue[k] = links[i].p;
   }
   return { start, node: outNode, value: outValue };
 }

@@ -5,12 +5,14 @@
 // finding the caller asks again and gets a fresh plan.
 import { fail } from "./errors";
 import { resolveEvidence } from "./evidence";
-import { expandAllChecks, expectedCost, failProbability } from "./expected-cost";
-import { buildIndex, type ModelIndex } from "./model-index";
+import { toCompiled, type CompiledModel } from "./compiled";
+import { expectedCost, failProbability } from "./expected-cost";
+import { compareIds } from "./ids";
+import type { ModelIndex } from "./model-index";
 import { resolveOptions, type PlanOptions } from "./options";
 import { computePosterior, type Posterior } from "./posterior";
-import { compareIds } from "./rank";
 import { SKILL_LEVELS, type Evidence, type Model, type Skill } from "./schema";
+import { orderByKeyDesc } from "./sort-keys";
 import { whatIfFrom, type WhatIf } from "./what-if";
 
 export type PlanStep = {
@@ -36,17 +38,19 @@ export type Plan = {
   next: WhatIf | null; // what-if for steps[0]
 };
 
-export function planChecks(model: Model, evidence: Evidence, options?: PlanOptions): Plan {
+export function planChecks(model: Model | CompiledModel, evidence: Evidence, options?: PlanOptions): Plan {
   const opts = resolveOptions(options);
-  const index = buildIndex(model, opts.unlistedPrior);
+  const compiled = toCompiled(model);
+  const index = compiled.scoped(opts.unlistedPrior);
   const items = resolveEvidence(index, evidence, opts.ownerReliability);
-  return planFrom(index, evidence, computePosterior(index, items), opts.maxSkill);
+  return planFrom(compiled, index, evidence, computePosterior(index, items), opts.maxSkill);
 }
 
 /** Expected cost of running the given checks in exactly this order (e.g. a technician's own order). */
-export function orderCost(model: Model, evidence: Evidence, checkIds: readonly string[], options?: PlanOptions): number {
+export function orderCost(model: Model | CompiledModel, evidence: Evidence, checkIds: readonly string[], options?: PlanOptions): number {
   const opts = resolveOptions(options);
-  const index = buildIndex(model, opts.unlistedPrior);
+  const compiled = toCompiled(model);
+  const index = compiled.scoped(opts.unlistedPrior);
   const post = computePosterior(index, resolveEvidence(index, evidence, opts.ownerReliability));
   const order = checkIds.map((id) => {
     const k = index.checkIndex.get(id);
@@ -54,11 +58,11 @@ export function orderCost(model: Model, evidence: Evidence, checkIds: readonly s
     return k;
   });
   if (new Set(order).size !== order.length) fail("INVALID_INPUT", "The order lists a check twice.");
-  return expectedCost(index, expandAllChecks(index), post.prob, order).total;
+  return expectedCost(index, compiled.checkLeaves(), post.prob, order).total;
 }
 
-export function planFrom(index: ModelIndex, evidence: Evidence, post: Posterior, maxSkill: number): Plan {
-  const cl = expandAllChecks(index);
+export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: Evidence, post: Posterior, maxSkill: number): Plan {
+  const cl = compiled.checkLeaves();
   const K = index.checkIds.length;
   const done = new Uint8Array(K);
   for (const f of evidence.findings) {
@@ -67,50 +71,49 @@ export function planFrom(index: ModelIndex, evidence: Evidence, post: Posterior,
   }
   const pFind = new Float64Array(K);
   const ratio = new Float64Array(K);
-  const remaining: number[] = [];
   for (let k = 0; k < K; k++) {
     if (done[k]) continue;
     pFind[k] = failProbability(index, cl, post.prob, k);
     ratio[k] = pFind[k] / index.cost[k]; // cost > 0 is enforced when indexing
-    remaining.push(k);
   }
+  // Best ratio first; ratios equal to ~12 significant digits tie (so p/c pairs equal on paper,
+  // such as 0.3/10 and 0.6/20, tie in floating point too) and go cheaper first, then by id.
   const { cost, checkIds: ids } = index;
-  remaining.sort((a, b) => byValue(ratio[a], ratio[b]) || cost[a] - cost[b] || compareIds(ids[a], ids[b]));
+  const order = orderByKeyDesc(ratio, K, (a, b) => cost[a] - cost[b] || compareIds(ids[a], ids[b]));
 
-  const within: number[] = [];
+  const withinAll = new Int32Array(K);
+  let n = 0;
   const aboveSkill: AboveSkillStep[] = [];
-  for (const k of remaining) {
-    if (index.skill[k] <= maxSkill) within.push(k);
-    else aboveSkill.push({ ...describe(index, k, pFind, ratio), before: within.length });
+  for (let r = 0; r < K; r++) {
+    const k = order[r];
+    if (done[k]) continue;
+    if (index.skill[k] <= maxSkill) withinAll[n++] = k;
+    else {
+      const step: AboveSkillStep = { checkId: ids[k], pFind: pFind[k], cost: cost[k], ratio: ratio[k], skill: SKILL_LEVELS[index.skill[k]], before: n };
+      if (index.checkNames[k] !== undefined) step.name = index.checkNames[k];
+      aboveSkill.push(step);
+    }
   }
+  const within = withinAll.subarray(0, n);
   const ecr = expectedCost(index, cl, post.prob, within);
-  const cheapest = [...within].sort((a, b) => cost[a] - cost[b] || compareIds(ids[a], ids[b]));
+  const cheapest = new Int32Array(n);
+  let c = 0;
+  for (const k of compiled.costOrder()) if (!done[k] && index.skill[k] <= maxSkill) cheapest[c++] = k;
   const cheapestFirstExpectedCost = expectedCost(index, cl, post.prob, cheapest).total;
+  const steps: PlanStep[] = new Array(within.length);
+  for (let s = 0; s < within.length; s++) {
+    const k = within[s];
+    // A literal rather than a spread: building 3,000 steps by spreading costs more than the plan itself.
+    const step: PlanStep = { checkId: ids[k], pFind: pFind[k], cost: cost[k], ratio: ratio[k], skill: SKILL_LEVELS[index.skill[k]], pReached: ecr.reached[s] };
+    if (index.checkNames[k] !== undefined) step.name = index.checkNames[k];
+    steps[s] = step;
+  }
   return {
-    steps: within.map((k, s) => ({ ...describe(index, k, pFind, ratio), pReached: ecr.reached[s] })),
+    steps,
     expectedCost: ecr.total,
     cheapestFirstExpectedCost,
     saving: cheapestFirstExpectedCost - ecr.total,
     aboveSkill,
     next: within.length > 0 ? whatIfFrom(index, post, within[0]) : null,
   };
-}
-
-// Higher ratio first. Ratios within a relative 1e-12 count as equal, so that p/c pairs equal on
-// paper (0.3/10 and 0.6/20) tie in floating point too and fall to the cheaper-first rule.
-function byValue(ra: number, rb: number): number {
-  const scale = Math.max(Math.abs(ra), Math.abs(rb));
-  return Math.abs(ra - rb) <= 1e-12 * scale ? 0 : rb - ra;
-}
-
-function describe(index: ModelIndex, k: number, pFind: Float64Array, ratio: Float64Array): Omit<PlanStep, "pReached"> {
-  const step: Omit<PlanStep, "pReached"> = {
-    checkId: index.checkIds[k],
-    pFind: pFind[k],
-    cost: index.cost[k],
-    ratio: ratio[k],
-    skill: SKILL_LEVELS[index.skill[k]],
-  };
-  if (index.checkNames[k] !== undefined) step.name = index.checkNames[k];
-  return step;
 }

@@ -15,7 +15,7 @@ export type Posterior = {
 
 export function computePosterior(index: ModelIndex, items: readonly EvidenceItem[]): Posterior {
   const H = index.hypotheses;
-  const lp = Float64Array.from(index.logPrior);
+  const lp = index.logPrior.slice();
   for (const item of items) {
     const d = item.defaultLik;
     if (d > 0) {

@@ -1,19 +1,60 @@
 // rankCauses: the posterior over the candidate faults (leaves) plus "not in the knowledge base",
 // each with its evidence contributions, and every inner node's share (the sum of its leaves).
+import { toCompiled, type CompiledModel } from "./compiled";
 import { computeContributions } from "./contributions";
 import { resolveEvidence, type EvidenceItem } from "./evidence";
-import { buildIndex, type ModelIndex } from "./model-index";
+import type { ModelIndex } from "./model-index";
 import { resolveOptions, type RankOptions } from "./options";
 import { computePosterior, type Posterior } from "./posterior";
 import type { Evidence, Model } from "./schema";
+import { rankingOrder } from "./leaf-order";
 
-export type RankedCause = {
-  id: string;
+// The weights for all causes come from one pass over the evidence (O(leaves × evidence)), made
+// the first time any cause's contributions are read, so ranking and planning do not pay for a
+// "why" nobody looks at. Shared by every cause of one ranking.
+class Explanation {
+  #weights: Float64Array | null = null;
+  constructor(
+    private readonly index: ModelIndex,
+    private readonly items: readonly EvidenceItem[],
+  ) {}
+  of(leaf: number): Record<string, number> {
+    const w = (this.#weights ??= computeContributions(this.index, this.items));
+    const L = this.index.leafCount;
+    const out: Record<string, number> = {};
+    for (let i = 0; i < this.items.length; i++) out[this.items[i].key] = w[i * L + leaf];
+    return out;
+  }
+}
+
+/**
+ * One candidate fault. `contributions` ("symptom:<id>" / "check:<id>" → log likelihood ratio)
+ * is computed on first read and then kept; JSON.stringify includes it (toJSON), but an object
+ * spread ({ ...cause }) copies only the plain fields.
+ */
+export class RankedCause {
   name?: string;
-  probability: number;
-  prior: number; // before any evidence, with "not in the knowledge base" taking its share
-  contributions: Record<string, number>; // "symptom:<id>" / "check:<id>" -> log likelihood ratio
-};
+  readonly #leaf: number;
+  readonly #explanation: Explanation;
+  #contributions: Record<string, number> | null = null;
+  constructor(
+    readonly id: string,
+    readonly probability: number,
+    readonly prior: number, // before any evidence, with "not in the knowledge base" taking its share
+    leaf: number,
+    explanation: Explanation,
+  ) {
+    this.#leaf = leaf;
+    this.#explanation = explanation;
+  }
+  get contributions(): Record<string, number> {
+    return (this.#contributions ??= this.#explanation.of(this.#leaf));
+  }
+  toJSON() {
+    const { id, name, probability, prior, contributions } = this;
+    return name === undefined ? { id, probability, prior, contributions } : { id, name, probability, prior, contributions };
+  }
+}
 
 export type Ranking = {
   causes: RankedCause[]; // leaves, most likely first (ties: id order)
@@ -21,43 +62,30 @@ export type Ranking = {
   nodes: Record<string, number>; // inner node id -> sum of its leaves' probabilities
 };
 
-export function rankCauses(model: Model, evidence: Evidence, options?: RankOptions): Ranking {
+export function rankCauses(model: Model | CompiledModel, evidence: Evidence, options?: RankOptions): Ranking {
   const opts = resolveOptions(options);
-  const index = buildIndex(model, opts.unlistedPrior);
+  const compiled = toCompiled(model);
+  const index = compiled.scoped(opts.unlistedPrior);
   const items = resolveEvidence(index, evidence, opts.ownerReliability);
-  return rankFrom(index, items, computePosterior(index, items));
+  return rankFrom(compiled, index, items, computePosterior(index, items));
 }
 
 /** Shared with diagnose(): builds the ranking from an index, its evidence and its posterior. */
-export function rankFrom(index: ModelIndex, items: readonly EvidenceItem[], post: Posterior): Ranking {
+export function rankFrom(compiled: CompiledModel, index: ModelIndex, items: readonly EvidenceItem[], post: Posterior): Ranking {
   const { tree, leafCount: L } = index;
-  const weights = computeContributions(index, items);
-  const order = leafOrder(index, post.prob);
+  const explanation = new Explanation(index, items);
+  const ids = tree.ids;
+  const order = rankingOrder(index, items, post.prob, compiled.priorOrder());
   const causes: RankedCause[] = new Array(L);
   for (let r = 0; r < L; r++) {
     const leaf = order[r];
     const c = tree.leafCause[leaf];
-    // Same key order for every cause, so the engine gives all these objects one shape.
-    const contributions: Record<string, number> = {};
-    for (let i = 0; i < items.length; i++) contributions[items[i].key] = weights[i * L + leaf];
-    const entry: RankedCause = { id: tree.ids[c], probability: post.prob[leaf], prior: index.prior[leaf], contributions };
+    const entry = new RankedCause(ids[c], post.prob[leaf], index.prior[leaf], leaf, explanation);
     if (tree.names[c] !== undefined) entry.name = tree.names[c];
     causes[r] = entry;
   }
   return { causes, unlisted: post.prob[L], nodes: nodeShares(index, post.prob) };
 }
-
-/** Leaves sorted by probability, descending; equal probabilities in id order so output is stable. */
-export function leafOrder(index: ModelIndex, prob: Float64Array): Int32Array {
-  const ids = index.tree.ids;
-  const cause = index.tree.leafCause;
-  const order = new Int32Array(index.leafCount);
-  for (let i = 0; i < order.length; i++) order[i] = i;
-  order.sort((a, b) => prob[b] - prob[a] || compareIds(ids[cause[a]], ids[cause[b]]));
-  return order;
-}
-
-export const compareIds = (a: string, b: string): number => (a < b ? -1 : a > b ? 1 : 0);
 
 // Children before parents (post-order), so each node is the sum of already-summed children.
 function nodeShares(index: ModelIndex, prob: Float64Array): Record<string, number> {

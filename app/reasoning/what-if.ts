@@ -1,11 +1,13 @@
 // What-if: "if this check fails, the top cause becomes …; if it passes, …". Bayes' rule on the
-// current posterior with the check's likelihood, in log space, without re-running the ranking.
+// current posterior with the check's likelihood, without re-running the ranking:
+//   P(h | e, fail) = P(h | e)·q(h) / P(fail),   P(h | e, pass) = P(h | e)·(1 − q(h)) / P(pass).
+import { toCompiled, type CompiledModel } from "./compiled";
 import { fail } from "./errors";
-import { checkItem, resolveEvidence } from "./evidence";
-import { buildIndex, type ModelIndex } from "./model-index";
+import { checkItem, resolveEvidence, type EvidenceItem } from "./evidence";
+import { compareIds } from "./ids";
+import type { ModelIndex } from "./model-index";
 import { resolveOptions, type RankOptions } from "./options";
 import { computePosterior, type Posterior } from "./posterior";
-import { compareIds } from "./rank";
 import type { Evidence, Model } from "./schema";
 
 export type WhatIfOutcome = {
@@ -21,9 +23,9 @@ export type WhatIf = {
   ifPass: WhatIfOutcome | null; // null when the check cannot pass (pFail = 1)
 };
 
-export function whatIf(model: Model, evidence: Evidence, checkId: string, options?: RankOptions): WhatIf {
+export function whatIf(model: Model | CompiledModel, evidence: Evidence, checkId: string, options?: RankOptions): WhatIf {
   const opts = resolveOptions(options);
-  const index = buildIndex(model, opts.unlistedPrior);
+  const index = toCompiled(model).scoped(opts.unlistedPrior);
   const k = index.checkIndex.get(checkId);
   if (k === undefined) fail("UNKNOWN_ID", `What-if asked about check "${checkId}", which is not in the model.`);
   if (evidence?.findings?.some((f) => f.checkId === checkId)) {
@@ -35,40 +37,50 @@ export function whatIf(model: Model, evidence: Evidence, checkId: string, option
 
 export function whatIfFrom(index: ModelIndex, post: Posterior, k: number): WhatIf {
   const failed = checkItem(index, k, true);
-  // P(fail) = Σ_h P(h)·q(h) = d + Σ_{borne leaves} P(h)·(q(h) − d), since Σ_h P(h) = 1.
-  let pFail = failed.defaultLik;
-  for (let j = 0; j < failed.leaves.length; j++) {
-    pFail += post.prob[failed.leaves[j]] * (failed.liks[j] - failed.defaultLik);
-  }
-  pFail = Math.min(1, Math.max(0, pFail));
+  const passed: EvidenceItem = { ...failed, defaultLik: 1 - failed.defaultLik, liks: failed.liks.map((q) => 1 - q) };
+  const pFail = marginal(post, failed);
+  const pPass = marginal(post, passed); // summed on its own, not 1 − pFail, to stay exact near 0
   return {
     checkId: index.checkIds[k],
     pFail,
-    ifFail: pFail > 0 ? outcome(index, post, failed.defaultLik, failed.leaves, failed.liks) : null,
-    ifPass: pFail < 1 ? outcome(index, post, 1 - failed.defaultLik, failed.leaves, failed.liks.map((q) => 1 - q)) : null,
+    ifFail: pFail > 0 ? outcome(index, post, failed, pFail) : null,
+    ifPass: pPass > 0 ? outcome(index, post, passed, pPass) : null,
   };
 }
 
-function outcome(index: ModelIndex, post: Posterior, d: number, leaves: Int32Array, liks: Float64Array): WhatIfOutcome | null {
-  const H = index.hypotheses;
-  const lw = new Float64Array(H);
-  const ld = Math.log(d);
-  for (let h = 0; h < H; h++) lw[h] = post.logPost[h] + ld;
-  for (let j = 0; j < leaves.length; j++) lw[leaves[j]] = post.logPost[leaves[j]] + Math.log(liks[j]);
-  let max = -Infinity;
-  for (let h = 0; h < H; h++) if (lw[h] > max) max = lw[h];
-  if (max === -Infinity) return null;
-  let sum = 0;
-  for (let h = 0; h < H; h++) sum += Math.exp(lw[h] - max);
-  const logZ = max + Math.log(sum);
-  // Top leaf: highest weight, ties in id order; "not in the knowledge base" only if strictly higher.
-  const { tree } = index;
+// Σ_h P(h)·lik(h) = d + Σ_{linked leaves} P(h)·(lik(h) − d), since Σ_h P(h) = 1.
+function marginal(post: Posterior, item: EvidenceItem): number {
+  let p = item.defaultLik;
+  for (let j = 0; j < item.leaves.length; j++) p += post.prob[item.leaves[j]] * (item.liks[j] - item.defaultLik);
+  return Math.min(1, Math.max(0, p));
+}
+
+// The top hypothesis after the result. Every leaf the check does not bear on is scaled by the
+// same default likelihood, so among those the order is unchanged: only the best of them and the
+// leaves the check bears on need comparing. Ties go to the smaller id; "not in the knowledge base"
+// wins only if strictly more likely.
+function outcome(index: ModelIndex, post: Posterior, item: EvidenceItem, z: number): WhatIfOutcome {
+  const { tree, leafCount: L } = index;
+  const idOf = (leaf: number) => tree.ids[tree.leafCause[leaf]];
+  const borne = new Uint8Array(L);
+  for (const leaf of item.leaves) borne[leaf] = 1;
   let top = -1;
-  for (let h = 0; h < index.leafCount; h++) {
-    if (top < 0 || lw[h] > lw[top] || (lw[h] === lw[top] && compareIds(tree.ids[tree.leafCause[h]], tree.ids[tree.leafCause[top]]) < 0)) top = h;
+  let topWeight = -1;
+  const consider = (leaf: number, weight: number) => {
+    if (weight > topWeight || (weight === topWeight && top >= 0 && compareIds(idOf(leaf), idOf(top)) < 0)) {
+      top = leaf;
+      topWeight = weight;
+    }
+  };
+  let best = -1; // most likely leaf the check does not bear on
+  for (let h = 0; h < L; h++) {
+    if (borne[h]) continue;
+    const lh = post.logPost[h];
+    if (best < 0 || lh > post.logPost[best] || (lh === post.logPost[best] && compareIds(idOf(h), idOf(best)) < 0)) best = h;
   }
-  const U = index.leafCount;
-  const unlisted = Math.exp(lw[U] - logZ);
-  if (lw[U] > lw[top]) return { topCauseId: null, probability: unlisted, unlisted };
-  return { topCauseId: tree.ids[tree.leafCause[top]], probability: Math.exp(lw[top] - logZ), unlisted };
+  if (best >= 0) consider(best, post.prob[best] * item.defaultLik);
+  for (let j = 0; j < item.leaves.length; j++) consider(item.leaves[j], post.prob[item.leaves[j]] * item.liks[j]);
+  const unlisted = (post.prob[L] * item.defaultLik) / z;
+  if (top < 0 || unlisted > topWeight / z) return { topCauseId: null, probability: unlisted, unlisted };
+  return { topCauseId: idOf(top), probability: topWeight / z, unlisted };
 }

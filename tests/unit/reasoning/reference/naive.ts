@@ -1,0 +1,103 @@
+// A straightforward reference implementation of the same model: the formulas written out with
+// arrays, find() and nested loops over every hypothesis, no index maps, no sparsity tricks.
+// It is the oracle the fast engine is tested against and the baseline the benchmark compares
+// with. (Evidence here must not repeat a symptom or check; the generator never does.)
+import type { Evidence, Model } from "~/reasoning";
+
+const SKILLS = ["apprentice", "technician", "senior"];
+
+export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.7, maxSkill = "senior") {
+  const leaves = model.causes.filter((c) => !model.causes.some((d) => d.parentId === c.id));
+  const chainOf = (id: string): string[] => {
+    const chain = [id];
+    let c = model.causes.find((x) => x.id === id);
+    while (c?.parentId) {
+      chain.push(c.parentId);
+      c = model.causes.find((x) => x.id === c!.parentId);
+    }
+    return chain; // the leaf first, then its ancestors: nearest first
+  };
+  const chains = leaves.map((l) => chainOf(l.id));
+  const total = leaves.reduce((s, l) => s + l.prior, 0);
+  const prior = [...leaves.map((l) => ((1 - u) * l.prior) / total), u]; // last: not in the knowledge base
+  const H = prior.length;
+
+  // Likelihood vectors, one per piece of evidence, in order: observations, then findings.
+  const liks: { key: string; lik: number[] }[] = [];
+  for (const o of evidence.observations) {
+    const symptom = model.symptoms.find((s) => s.id === o.symptomId)!;
+    const mine = model.links.filter((l) => l.symptomId === o.symptomId);
+    const figure = (h: number) => {
+      if (h === H - 1) return symptom.leak;
+      for (const a of chains[h]) {
+        const link = mine.find((l) => l.causeId === a);
+        if (link) return link.p;
+      }
+      return symptom.leak;
+    };
+    let lik = prior.map((_, h) => (o.present ? figure(h) : 1 - figure(h)));
+    if (o.source === "owner") {
+      const marginal = lik.reduce((s, v, h) => s + prior[h] * v, 0);
+      lik = lik.map((v) => r * v + (1 - r) * marginal);
+    }
+    liks.push({ key: `symptom:${o.symptomId}`, lik });
+  }
+  const checkLik = (checkId: string) => {
+    const check = model.checks.find((k) => k.id === checkId)!;
+    return prior.map((_, h) => {
+      if (h === H - 1) return check.falseAlarm;
+      for (const a of chains[h]) {
+        const b = check.bears.find((x) => x.causeId === a);
+        if (b) return b.pFail;
+      }
+      return check.falseAlarm;
+    });
+  };
+  for (const f of evidence.findings) {
+    const q = checkLik(f.checkId);
+    liks.push({ key: `check:${f.checkId}`, lik: q.map((v) => (f.result === "fail" ? v : 1 - v)) });
+  }
+
+  // Posterior: log prior + Σ log likelihood, normalised.
+  const logW = prior.map((p, h) => liks.reduce((s, e) => s + Math.log(e.lik[h]), Math.log(p)));
+  const max = Math.max(...logW);
+  const z = logW.reduce((s, w) => s + Math.exp(w - max), 0);
+  const post = logW.map((w) => Math.exp(w - max) / z);
+
+  // Contributions: log P(e|c)/P(e|¬c), with ¬c weighted by the posterior just before e.
+  const contributions = leaves.map(() => ({}) as Record<string, number>);
+  let pi = [...prior];
+  for (const { key, lik } of liks) {
+    const m = pi.reduce((s, p, h) => s + p * lik[h], 0);
+    leaves.forEach((_, c) => {
+      contributions[c][key] = Math.log(lik[c] / ((m - pi[c] * lik[c]) / (1 - pi[c])));
+    });
+    pi = pi.map((p, h) => (p * lik[h]) / m);
+  }
+  const causes = leaves
+    .map((l, c) => ({ id: l.id, probability: post[c], contributions: contributions[c] }))
+    .sort((a, b) => b.probability - a.probability || (a.id < b.id ? -1 : 1));
+
+  // Plan: every check not yet done, by P(fail)/cost; ECR with survival per hypothesis.
+  const remaining = model.checks
+    .filter((k) => !evidence.findings.some((f) => f.checkId === k.id))
+    .map((k) => {
+      const q = checkLik(k.id);
+      const pFind = post.reduce((s, p, h) => s + p * q[h], 0);
+      return { check: k, q, pFind, ratio: pFind / k.cost };
+    })
+    .sort((a, b) => b.ratio - a.ratio || a.check.cost - b.check.cost || (a.check.id < b.check.id ? -1 : 1));
+  const within = remaining.filter((s) => SKILLS.indexOf(s.check.skill ?? "technician") <= SKILLS.indexOf(maxSkill));
+  const ecr = (order: typeof within) => {
+    let survive = [...post];
+    let cost = 0;
+    for (const s of order) {
+      cost += s.check.cost * survive.reduce((a, b) => a + b, 0);
+      survive = survive.map((v, h) => v * (1 - s.q[h]));
+    }
+    return cost;
+  };
+  const cheapest = [...within].sort((a, b) => a.check.cost - b.check.cost || (a.check.id < b.check.id ? -1 : 1));
+  const steps = within.map((s) => ({ checkId: s.check.id, pFind: s.pFind, ratio: s.ratio }));
+  return { causes, unlisted: post[H - 1], steps, expectedCost: ecr(within), cheapestFirstExpectedCost: ecr(cheapest) };
+}
