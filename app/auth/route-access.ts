@@ -10,7 +10,9 @@ import type { Permission } from "./permissions";
 export type Access = "public" | "account" | "no-workshop" | "member" | Permission;
 
 export type RouteAccess = {
-  path: string; // a concrete URL to try; :params are filled by the test with another workshop's ids too
+  path: string; // a concrete URL to try; {case} stands for an open demo case of the Bramblegate workshop
+  api?: true; // JSON route: 401/403 answers instead of redirects
+  record?: true; // the URL names a record of one workshop: members of another get 404
   GET?: Access;
   POST?: Access | Record<string, Access>; // by intent when one route has several forms
 };
@@ -33,5 +35,18 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
     POST: { invite: "member:manage", role: "member:manage", suspend: "member:manage", reactivate: "member:manage", "revoke-invite": "member:manage" },
   },
   "routes/settings/audit.tsx": { path: "/settings/audit", GET: "audit:read" },
+  "routes/cases/new.tsx": { path: "/cases/new", GET: "case:open", POST: "case:open" },
+  "routes/cases/workbench.tsx": {
+    path: "/cases/{case}",
+    record: true,
+    GET: "case:read",
+    POST: { conclude: "case:conclude", signoff: "case:signoff", "send-back": "case:signoff", "ask-senior": "case:ask-senior", complaint: "case:open" },
+  },
+  "routes/api/search.ts": { path: "/api/search?q=brake", api: true, GET: "case:read" },
+  "routes/api/what-if.ts": { path: "/api/what-if", api: true, POST: "case:read" },
+  "routes/api/case.ts": { path: "/api/cases/{case}", api: true, record: true, GET: "case:read" },
+  "routes/api/diagnosis.ts": { path: "/api/cases/{case}/diagnosis", api: true, record: true, GET: "case:read" },
+  "routes/api/observations.ts": { path: "/api/cases/{case}/observations", api: true, record: true, POST: "case:work" },
+  "routes/api/findings.ts": { path: "/api/cases/{case}/findings", api: true, record: true, POST: "case:work" },
   "routes/not-found.tsx": { path: "/no-such-page", GET: "public" },
 };

@@ -4,7 +4,7 @@ import { dbContext } from "~/context";
 import { refuse } from "~/http.server";
 import { FindingBody, ObservationBody } from "./api-schemas";
 import { loadCase } from "./case.server";
-import { recordFinding, recordObservation, removeFinding, removeObservation } from "./evidence.server";
+import { assertCanWork, recordFinding, recordObservation, removeFinding, removeObservation } from "./evidence.server";
 
 type Args = { request: Request; params: { caseId: string; itemId?: string }; context: Readonly<RouterContextProvider> };
 
@@ -19,6 +19,7 @@ export function evidenceAction({ request, params, context }: Args, kind: keyof t
   const k = KINDS[kind];
   return api(request, db, null, async (member) => {
     const bundle = await loadCase(db, member, params.caseId);
+    assertCanWork(member, bundle); // before the body is read: a refused role learns nothing from validation
     if (request.method === "POST" && !params.itemId) {
       const body = await jsonBody(request, k.body as typeof ObservationBody & typeof FindingBody);
       return Response.json(await k.add(db, member, bundle, body), { status: 201 });

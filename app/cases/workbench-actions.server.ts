@@ -1,5 +1,7 @@
 import { z } from "zod";
 import type { Member } from "~/auth/guards.server";
+import { can } from "~/auth/permissions";
+import { refuse } from "~/http.server";
 import type { Db } from "~/db/client.server";
 import type { CaseBundle } from "./case.server";
 import { askSenior, conclude, signOff, updateComplaint } from "./workflow.server";
@@ -11,6 +13,18 @@ export const WorkbenchForm = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("ask-senior"), note: z.string().trim().max(500).default("") }),
   z.object({ intent: z.literal("complaint"), complaint: z.string().trim().min(3, "The complaint needs a few words").max(2000), version: z.coerce.number().int() }),
 ]);
+
+/** The role check comes before the form is read, so a refused role learns nothing from validation. */
+export function assertIntentAllowed(member: Member, c: Pick<CaseBundle, "assignedMemberId">, intent: unknown) {
+  const own = member.role === "apprentice" && c.assignedMemberId === member.memberId;
+  const allowed =
+    intent === "conclude" ? can(member.role, "case:conclude") || own
+    : intent === "signoff" || intent === "send-back" ? can(member.role, "case:signoff")
+    : intent === "ask-senior" ? can(member.role, "case:ask-senior")
+    : intent === "complaint" ? can(member.role, "case:open")
+    : true; // unknown intents fail validation with a 400
+  if (!allowed) refuse(403, `Your role (${member.role}) cannot do this on a case.`);
+}
 
 export async function runWorkbenchForm(db: Db, member: Member, c: CaseBundle, form: z.infer<typeof WorkbenchForm>) {
   switch (form.intent) {

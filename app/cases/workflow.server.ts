@@ -25,7 +25,7 @@ async function versionedUpdate(db: Pick<Db, "update" | "select">, c: CaseBundle,
 }
 
 export async function updateComplaint(db: Db, member: Member, c: CaseBundle, complaint: string, expected: number) {
-  if (!can(member.role, "case:open") && !can(member.role, "case:work")) refuse(403, "Your role cannot edit the complaint.");
+  if (!can(member.role, "case:open")) refuse(403, "Your role cannot edit the complaint.");
   if (c.state === "closed") refuse(409, "This case is closed.");
   return db.transaction(async (tx) => {
     const v = await versionedUpdate(tx, c, expected, { complaint });

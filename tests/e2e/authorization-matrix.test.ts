@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { inject } from "vitest";
 import { can, type Permission } from "~/auth/permissions";
-import { type Access, ROUTE_ACCESS } from "~/auth/route-access";
+import { type Access, ROUTE_ACCESS, type RouteAccess } from "~/auth/route-access";
 import { createSession } from "~/auth/session.server";
 import { createDb } from "~/db/client.server";
 import { members, users, workshops } from "~/db/schema";
@@ -13,19 +13,21 @@ import { seedId } from "../../seeds/ids";
 // Every route × every kind of caller, against the running production server. Expected outcomes
 // come from app/auth/route-access.ts and the role table; docs/permissions.md states both in words.
 
-type Actor = { name: string; kind: "anonymous" | "newcomer" | "suspended" | "member"; role?: Role; cookie?: string; userId?: string };
+type Actor = { name: string; kind: "anonymous" | "newcomer" | "suspended" | "member"; role?: Role; cookie?: string; userId?: string; workshop?: string };
 
 function routeFiles(list: { file: string; children?: unknown[] }[]): string[] {
   return list.flatMap((r) => [r.file, ...routeFiles((r.children ?? []) as { file: string; children?: unknown[] }[])]);
 }
 
+// Case #1041 of the demo (Bramblegate, open, assigned to the technician).
+const OPEN_CASE = seedId("case:b1");
 const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 2 });
 const actors: Actor[] = [{ name: "anonymous", kind: "anonymous" }];
 
 beforeAll(async () => {
   for (const p of DEMO_PEOPLE.filter((p) => p.workshop)) {
     const token = await createSession(db, seedId(`user:${p.login}`), "matrix");
-    actors.push({ name: `${p.role} of ${p.workshop}`, kind: "member", role: p.role!, cookie: `rl_session=${token}`, userId: seedId(`user:${p.login}`) });
+    actors.push({ name: `${p.role} of ${p.workshop}`, kind: "member", role: p.role!, cookie: `rl_session=${token}`, userId: seedId(`user:${p.login}`), workshop: p.workshop! });
   }
   const [newcomer] = await db.insert(users).values({ name: "Matrix Newcomer" }).returning({ id: users.id });
   actors.push({ name: "signed in, no workshop", kind: "newcomer", cookie: `rl_session=${await createSession(db, newcomer.id, "matrix")}`, userId: newcomer.id });
@@ -36,9 +38,14 @@ beforeAll(async () => {
 });
 afterAll(() => pool.end());
 
-function expected(access: Access, actor: Actor, method: "GET" | "POST"): "allowed" | "sign-in" | "welcome" | "forbidden" | "has-workshop" {
+type Want = "allowed" | "sign-in" | "welcome" | "forbidden" | "has-workshop" | "not-found";
+
+function expected(access: Access, actor: Actor, rule: RouteAccess): Want {
   if (access === "public") return "allowed";
   if (actor.kind === "anonymous") return "sign-in";
+  // Another workshop's record does not exist for this member, whatever their role.
+  if (rule.record && actor.kind === "member" && actor.workshop !== "bramblegate") return "not-found";
+  if (rule.api && (actor.kind === "newcomer" || actor.kind === "suspended")) return "forbidden";
   if (access === "account") return "allowed";
   if (access === "no-workshop") return actor.kind === "newcomer" ? "allowed" : actor.kind === "suspended" ? "has-workshop" : "has-workshop";
   if (actor.kind === "newcomer") return "welcome";
@@ -47,12 +54,14 @@ function expected(access: Access, actor: Actor, method: "GET" | "POST"): "allowe
   return can(actor.role!, access as Permission) ? "allowed" : "forbidden";
 }
 
-function outcome(res: Response, method: "GET" | "POST"): string {
+function outcome(res: Response): string {
   const location = res.headers.get("location") ?? "";
+  if (res.status === 401) return "sign-in";
+  if (res.status === 404) return "not-found";
   if (res.status >= 300 && res.status < 400 && location.startsWith("/sign-in")) return "sign-in";
   if (res.status >= 300 && res.status < 400 && location.startsWith("/welcome")) return "welcome";
   if (res.status === 403) return "forbidden";
-  if (res.status >= 500 || res.status === 404 || res.status === 405) return `status ${res.status}`;
+  if (res.status >= 500 || res.status === 405) return `status ${res.status}`;
   return "allowed";
 }
 
@@ -74,10 +83,10 @@ describe("authorization matrix", () => {
       it(`${method} ${rule.path}${intent ? ` (${intent})` : ""} — ${access}`, async () => {
         const results: string[] = [];
         for (const actor of actors) {
-          const want = expected(access, actor, method);
+          const want = expected(access, actor, rule);
           // Signing out revokes the session it is sent with: use a spare one.
           const cookie = file === "routes/auth/sign-out.tsx" && actor.userId ? `rl_session=${await createSession(db, actor.userId, "spare")}` : actor.cookie;
-          const res = await fetch(`${base}${rule.path}`, {
+          const res = await fetch(`${base}${rule.path.replace("{case}", OPEN_CASE)}`, {
             method,
             redirect: "manual",
             headers: { ...(cookie ? { cookie } : {}), ...(method === "POST" ? { origin: base, "content-type": "application/x-www-form-urlencoded" } : {}) },
@@ -85,7 +94,7 @@ describe("authorization matrix", () => {
             body: method === "POST" ? new URLSearchParams(intent ? { intent } : {}) : undefined,
           });
           await res.arrayBuffer();
-          let got = outcome(res, method);
+          let got = outcome(res);
           // A public page may send a signed-in newcomer on to set up a workshop.
           if (access === "public" && got === "welcome") got = "allowed";
           if (want === "has-workshop") got = got === "allowed" && (res.status >= 300 || res.status === 409) ? "has-workshop" : got;

@@ -5,7 +5,7 @@ import { memberContext, requirePermission } from "~/auth/guards.server";
 import { can } from "~/auth/permissions";
 import { loadCase } from "~/cases/case.server";
 import { diagnoseCase } from "~/cases/diagnosis.server";
-import { runWorkbenchForm, WorkbenchForm } from "~/cases/workbench-actions.server";
+import { assertIntentAllowed, runWorkbenchForm, WorkbenchForm } from "~/cases/workbench-actions.server";
 import { ApprenticeMode } from "~/components/case/apprentice-mode";
 import { caseQuery, type CaseView, useEvidence } from "~/components/case/case-queries";
 import { CheckPlan, type RecordResult } from "~/components/case/check-plan";
@@ -38,10 +38,12 @@ export async function loader({ params, context }: Route.LoaderArgs) {
 export async function action({ request, params, context }: Route.ActionArgs) {
   const member = context.get(memberContext);
   const db = context.get(dbContext);
-  const parsed = WorkbenchForm.safeParse(Object.fromEntries(await request.formData()));
+  const bundle = await loadCase(db, member, params.caseId);
+  const form = Object.fromEntries(await request.formData());
+  assertIntentAllowed(member, bundle, form.intent);
+  const parsed = WorkbenchForm.safeParse(form);
   if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "Check the form", notice: null }, { status: 400 });
   try {
-    const bundle = await loadCase(db, member, params.caseId);
     return { error: null, notice: await runWorkbenchForm(db, member, bundle, parsed.data) };
   } catch (error) {
     const refused = await refusalMessage(error);
