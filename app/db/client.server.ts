@@ -5,7 +5,7 @@ import * as schema from "./schema";
 export type Db = NodePgDatabase<typeof schema>;
 
 /** One pool per process; a backend killed under us logs and reconnects instead of crashing. */
-export function createDb(url: string, options: { max?: number } = {}): { db: Db; pool: pg.Pool } {
+export function createDb(url: string, options: { max?: number; onQuery?: (sql: string) => void } = {}): { db: Db; pool: pg.Pool } {
   const pool = new pg.Pool({
     connectionString: url,
     max: options.max ?? 10,
@@ -14,5 +14,6 @@ export function createDb(url: string, options: { max?: number } = {}): { db: Db;
   });
   // node-postgres: an idle client's error is emitted on the pool; without a listener it kills the process.
   pool.on("error", (error) => console.warn("postgres pool: idle client error:", error.message));
-  return { db: drizzle(pool, { schema }), pool };
+  const logger = options.onQuery ? { logQuery: (sql: string) => options.onQuery!(sql) } : undefined;
+  return { db: drizzle(pool, { schema, logger }), pool };
 }

@@ -6,6 +6,9 @@ import { Cautions } from "./cautions";
 type Step = Diagnosis["plan"]["steps"][number];
 export type RecordResult = (step: Step, result: { result?: "pass" | "fail"; reading?: string }) => void;
 
+const SHOWN = 6;
+const WORTH = 0.02; // below a 2% chance of finding the fault a check waits in the folded list
+
 const ACCESS_LABEL: Record<string, string> = { ramp: "ramp", road_test: "road test", scan_tool: "scan tool", wheels_off: "wheels off", bonnet_open: "bonnet open", cold_engine: "cold engine" };
 
 /** Arrow keys move between steps; P and F record pass or fail on the focused step. */
@@ -27,6 +30,9 @@ function onPlanKey(e: React.KeyboardEvent<HTMLOListElement>, steps: Step[], reco
 
 export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagnosis["plan"]; currency: string; record: RecordResult; busy: boolean; error: string | null }) {
   const steps = plan.steps;
+  // The plan orders every remaining check; the screen offers the few worth doing now.
+  const shown = steps.filter((s, i) => i < SHOWN && (i === 0 || s.pFind >= WORTH));
+  const later = steps.slice(shown.length);
   return (
     <section aria-labelledby="plan" className="rounded-card border border-rule bg-card p-4">
       <h2 id="plan" className="text-xl font-semibold">Check plan</h2>
@@ -47,11 +53,26 @@ export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagn
           {plan.whatIf.ifPass ? ` (${formatPercent(plan.whatIf.ifPass.probability)})` : ""}.
         </p>
       ) : null}
-      <ol className="mt-3 grid gap-3" aria-label="Checks, best value first" onKeyDown={(e) => onPlanKey(e, steps, record)}>
-        {steps.map((s, i) => (
+      <ol className="mt-3 grid gap-3" aria-label="Checks, best value first" onKeyDown={(e) => onPlanKey(e, shown, record)}>
+        {shown.map((s, i) => (
           <PlanStep key={s.checkId} step={s} first={i === 0} currency={currency} record={record} busy={busy} />
         ))}
       </ol>
+      {later.length ? (
+        <details className="mt-3">
+          <summary className="min-h-tap cursor-pointer content-center text-graphite-700">
+            {later.length} more checks, unlikely to find it now
+          </summary>
+          <ul className="mt-1 grid gap-1 text-sm text-graphite-700">
+            {later.map((s) => (
+              <li key={s.checkId} className="flex justify-between gap-2">
+                <span>{s.name}</span>
+                <span className="tabular">{formatPercent(s.pFind, 1)} · {formatMoney(s.cost, currency)}</span>
+              </li>
+            ))}
+          </ul>
+        </details>
+      ) : null}
       {plan.aboveSkill.length ? (
         <div className="mt-4 border-t border-rule pt-3">
           <h3 className="font-semibold">Waiting for a senior</h3>
