@@ -74,3 +74,6 @@ export const analyse = (text: string, th: Thesaurus = THESAURUS) => analyseWords
 
 /** One string per token sequence, concept in place of its words: "judder when braking" → "_vibration _brake". */
 export const canonical = (tokens: Token[]) => tokens.map((t) => t.concept ?? t.word).join(" ");
+
+/** The same tokens as the words themselves, stopwords dropped: "judder when braking" → "judder braking". */
+export const literal = (tokens: Token[]) => tokens.map((t) => t.word ?? t.covered.join(" ")).join(" ");

@@ -2,7 +2,7 @@
 // normalised here, so a keystroke only looks things up. Fuse gets pre-normalised documents and a
 // prebuilt FuseIndex whose records are reused for whichever few candidates a query leaves.
 import Fuse, { type FuseIndex, type IFuseOptions } from "fuse.js";
-import { analyseWords, canonical, THESAURUS, type Token } from "./analyse";
+import { analyseWords, canonical, literal, THESAURUS, type Token } from "./analyse";
 import { hasDigit, STOPWORDS, words } from "./normalise";
 import { PostingTable } from "./postings";
 import { ENTRY_KINDS, type Entry } from "./types";
@@ -21,6 +21,7 @@ export type QuickFindIndex = {
   codeList: string[]; // sorted
   typoWords: Map<number, string[]>; // letters-only words of 4+ letters, by length
   phrases: string[][]; // canonical title and keyword phrases per entry
+  literals: string[][]; // the same phrases word for word
   fuseDocs: FuseDoc[];
   fuseRecords: FuseIndex<FuseDoc>["records"];
   rerank: Fuse<FuseDoc>; // runs over a subset of fuseRecords per query
@@ -51,7 +52,7 @@ function fuseText(tokens: Token[]): string {
   return parts.join(" ");
 }
 
-type FieldAnalysis = { words: string[]; concepts: string[]; fragments: string[]; canonical: string; fuse: string };
+type FieldAnalysis = { words: string[]; concepts: string[]; fragments: string[]; canonical: string; literal: string; fuse: string };
 
 const fragmentMemo = new Map<string, string[]>();
 /** Inner fragments of a code, from the second character on, at least MIN_FRAGMENT long. */
@@ -69,7 +70,7 @@ function fragmentsOf(code: string): string[] {
 function analyseField(text: string): FieldAnalysis {
   const all = words(text);
   const tokens = analyseWords(all);
-  const out: FieldAnalysis = { words: [], concepts: [], fragments: [], canonical: canonical(tokens), fuse: fuseText(tokens) };
+  const out: FieldAnalysis = { words: [], concepts: [], fragments: [], canonical: canonical(tokens), literal: literal(tokens), fuse: fuseText(tokens) };
   for (const t of tokens) {
     if (t.word) out.words.push(t.word);
     if (t.concept) out.concepts.push(t.concept);
@@ -95,6 +96,7 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
   // Conditions, registrations and synonyms repeat across entries: analyse each text once.
   const analysed = new Map<string, FieldAnalysis>();
   const phrases: string[][] = [];
+  const literals: string[][] = [];
   const fuseDocs: FuseDoc[] = [];
   const byId = new Map<string, number>();
   const kindOf = new Uint8Array(entries.length);
@@ -103,19 +105,21 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
     if (!byId.has(e.id)) byId.set(e.id, i);
     kindOf[i] = ENTRY_KINDS.indexOf(e.kind);
     const own: string[] = [];
+    const ownLiteral: string[] = [];
     const field = (text: string, weight: number): string => {
       let a = analysed.get(text);
       if (!a) analysed.set(text, (a = analyseField(text)));
       for (const w of a.words) wordP.add(w, i, weight);
       for (const c of a.concepts) conceptP.add(c, i, weight);
       for (const f of a.fragments) codeP.add(f, i, weight);
-      if (a.canonical) own.push(a.canonical);
+      if (a.canonical) (own.push(a.canonical), ownLiteral.push(a.literal));
       return a.fuse;
     };
     const title = field(e.title, FIELD_WEIGHT.title);
     const keywords = e.keywords.map((k) => field(k, FIELD_WEIGHT.keyword));
     const subtitle = e.subtitle ? field(e.subtitle, FIELD_WEIGHT.subtitle) : "";
     phrases.push(own);
+    literals.push(ownLiteral);
     fuseDocs.push({ title, keywords, subtitle });
   });
 
@@ -144,6 +148,7 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
     codeList: [...codes.terms()].sort(),
     typoWords,
     phrases,
+    literals,
     fuseDocs,
     fuseRecords: full.records,
     rerank,

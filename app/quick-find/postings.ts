@@ -12,8 +12,9 @@ export class PostingTable {
   private pDoc: number[] = [];
   private pWeight: number[] = [];
   private offsets: Int32Array | null = null;
-  private docs = new Int32Array(0);
-  private weights = new Float32Array(0);
+  /** All postings, grouped by term; a term's slice is given by span(). */
+  docs = new Int32Array(0);
+  weights = new Float32Array(0);
 
   /** Entries must be added in ascending order, so a repeat of the same entry is its term's last posting. */
   add(term: string, doc: number, weight: number) {
@@ -54,6 +55,15 @@ export class PostingTable {
     this.offsets = offsets;
     this.pTerm = this.pDoc = this.pWeight = this.lastDoc = this.lastAt = [];
     return this;
+  }
+
+  /** Start and end of a term's slice of docs/weights (end 0 when unknown): no allocation per lookup. */
+  span(term: string, out: Int32Array): boolean {
+    const id = this.ids.get(term);
+    if (id === undefined || !this.offsets) return false;
+    out[0] = this.offsets[id];
+    out[1] = this.offsets[id + 1];
+    return true;
   }
 
   get(term: string): Postings | undefined {

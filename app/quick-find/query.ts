@@ -1,13 +1,16 @@
 // A query as typed → the tokens to look up. The last word is treated as unfinished (a prefix)
 // unless the user has typed a space after it.
-import { analyseWords, canonical } from "./analyse";
+import { analyseWords, canonical, literal } from "./analyse";
 import { words } from "./normalise";
 
 export type QueryToken = { word: string | null; concept: string | null; prefix: boolean };
 export type ParsedQuery = {
   tokens: QueryToken[];
-  /** Canonical form, compared with each entry's phrases for a whole-phrase bonus. */
+  /** Canonical form ("_vibration _brake") and literal form ("judder braking"), compared with each entry's phrases. */
   canonical: string;
+  literal: string;
+  /** The last word is still being typed. */
+  typing: boolean;
   /** "#1041": the user means a case number. */
   caseNumber: boolean;
 };
@@ -22,5 +25,6 @@ export function parseQuery(raw: string): ParsedQuery {
     concept: t.concept,
     prefix: typing && i === analysed.length - 1 && t.word === lastWord,
   }));
-  return { tokens, canonical: canonical(analysed), caseNumber: /^\s*#\s*\d/.test(raw) };
+  const stillTyping = tokens.length > 0 && tokens[tokens.length - 1].prefix;
+  return { tokens, canonical: canonical(analysed), literal: literal(analysed), typing: stillTyping, caseNumber: /^\s*#\s*\d/.test(raw) };
 }

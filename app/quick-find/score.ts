@@ -1,16 +1,19 @@
 // The per-keystroke path for one index: the inverted index narrows 10,000 entries to the few that
 // contain every query word (or its concept, prefix, code fragment or near-miss spelling), and Fuse
 // then re-scores only those few. Nothing here allocates per entry.
-import type { Postings, QuickFindIndex } from "./build";
+import type { QuickFindIndex } from "./build";
 import { wordConcept } from "./build";
 import { hasDigit } from "./normalise";
+import type { PostingTable } from "./postings";
 import type { ParsedQuery } from "./query";
 import { nearWords } from "./typo";
 import { ENTRY_KINDS, type EntryKind, type ScoredEntry } from "./types";
 
 // How much each kind of match is worth, relative to the word itself found in the same field.
-export const MATCH = { exact: 1, concept: 0.85, prefix: 0.8, prefixConcept: 0.7, code: 0.7, typo: 0.6, typoConcept: 0.5 } as const;
-export const PHRASE_BONUS = 0.25; // the whole query is one of the entry's phrases ("pulls left")
+export const MATCH = { exact: 1, concept: 0.7, prefix: 0.8, prefixConcept: 0.6, code: 0.7, typo: 0.6, typoConcept: 0.5 } as const;
+// The whole query is one of the entry's phrases: word for word ("pulls left"), through the
+// synonym table ("shudder braking" for "judder when braking"), or the start of one while typing.
+export const PHRASE_BONUS = { literal: 0.25, canonical: 0.15, typing: 0.1 } as const;
 export const RECENT_BONUS = 0.05; // a nudge, never enough to beat a better match
 export const FUSE_BONUS = 0.3; // × (1 − Fuse score) for the re-scored candidates
 const PREFIX_TERMS_MAX = 4000; // bounds a one-letter prefix at very large vocabularies
@@ -39,12 +42,13 @@ export type ScoreInput = { query: ParsedQuery; kinds: ReadonlySet<EntryKind>; re
 export function scoreIndex(index: QuickFindIndex, { query, kinds, recent, limit }: ScoreInput): ScoredEntry[] {
   const { tok, total, cover } = index.scratch;
   const all: number[] = [];
+  const span = new Int32Array(2);
   for (const qt of query.tokens) {
     const touched: number[] = [];
-    const add = (p: Postings | undefined, factor: number) => {
-      if (!p) return;
-      const { docs, weights } = p;
-      for (let k = 0; k < docs.length; k++) {
+    const add = (table: PostingTable, term: string, factor: number): boolean => {
+      if (!table.span(term, span)) return false;
+      const { docs, weights } = table;
+      for (let k = span[0]; k < span[1]; k++) {
         const d = docs[k];
         const s = weights[k] * factor;
         if (s > tok[d]) {
@@ -52,38 +56,31 @@ export function scoreIndex(index: QuickFindIndex, { query, kinds, recent, limit 
           tok[d] = s;
         }
       }
+      return true;
     };
     const w = qt.word;
     let found = false;
-    if (w) {
-      const p = index.words.get(w);
-      add(p, MATCH.exact);
-      found = !!p;
-    }
-    if (qt.concept) {
-      const p = index.concepts.get(qt.concept);
-      add(p, w ? MATCH.concept : MATCH.exact);
-      found ||= !!p;
-    }
+    if (w) found = add(index.words, w, MATCH.exact);
+    if (qt.concept) found = add(index.concepts, qt.concept, w ? MATCH.concept : MATCH.exact) || found;
     if (w && qt.prefix) {
       const seen = new Set<string>();
       for (const term of withPrefix(index.wordList, w)) {
         if (term === w) continue;
         found = true;
-        add(index.words.get(term), MATCH.prefix * (0.6 + (0.4 * w.length) / term.length));
+        add(index.words, term, MATCH.prefix * (0.6 + (0.4 * w.length) / term.length));
         const c = w.length >= 3 ? wordConcept.get(term) : undefined;
         if (c && c !== qt.concept) seen.add(c);
       }
-      for (const c of seen) add(index.concepts.get(c), MATCH.prefixConcept);
+      for (const c of seen) add(index.concepts, c, MATCH.prefixConcept);
     }
     if (w && w.length >= 3 && hasDigit(w)) {
-      for (const term of withPrefix(index.codeList, w)) add(index.codes.get(term), MATCH.code);
+      for (const term of withPrefix(index.codeList, w)) add(index.codes, term, MATCH.code);
     }
     if (w && !found) {
       for (const near of nearWords(w, index.typoWords, qt.prefix)) {
-        add(index.words.get(near), MATCH.typo);
+        add(index.words, near, MATCH.typo);
         const c = wordConcept.get(near);
-        if (c) add(index.concepts.get(c), MATCH.typoConcept);
+        if (c) add(index.concepts, c, MATCH.typoConcept);
       }
     }
     // Run-together words ("vibrationbraking"): split where both halves are known words.
@@ -106,7 +103,7 @@ export function scoreIndex(index: QuickFindIndex, { query, kinds, recent, limit 
     const k = index.kindOf[d];
     if (cover[d] >= required && kinds.has(ENTRY_KINDS[k])) {
       let s = total[d] / n;
-      if (query.canonical && index.phrases[d].includes(query.canonical)) s += PHRASE_BONUS;
+      s += phraseBonus(index, d, query);
       if (recent.has(index.entries[d].id)) s += RECENT_BONUS;
       const list = byKind.get(k) ?? [];
       list.push({ d, s });
@@ -119,6 +116,14 @@ export function scoreIndex(index: QuickFindIndex, { query, kinds, recent, limit 
   const picked: { d: number; s: number }[] = [];
   for (const list of byKind.values()) picked.push(...list.sort((a, b) => b.s - a.s).slice(0, limit * RERANK_PER_KIND));
   return rerank(index, query, picked);
+}
+
+function phraseBonus(index: QuickFindIndex, d: number, q: ParsedQuery): number {
+  if (!q.canonical) return 0;
+  if (index.literals[d].includes(q.literal)) return PHRASE_BONUS.literal;
+  if (index.phrases[d].includes(q.canonical)) return PHRASE_BONUS.canonical;
+  if (q.typing && q.literal.length >= 3 && index.literals[d].some((p) => p.startsWith(q.literal))) return PHRASE_BONUS.typing;
+  return 0;
 }
 
 function rerank(index: QuickFindIndex, query: ParsedQuery, picked: { d: number; s: number }[]): ScoredEntry[] {

@@ -11,7 +11,8 @@ import { useQuickFindShortcut, useShortcutLabel } from "./use-shortcut";
 export type QuickFindPick = { present?: boolean };
 
 export type QuickFindProps = {
-  /** The entries, or a loader called the first time the palette opens. */
+  /** The entries, or a loader called the first time the palette opens. Keep the array stable
+   *  across renders (or pass cacheKey): a new array means a new index. */
   entries: EntrySource;
   /** Shares the built index across mounts, e.g. quickFindKey(workshopId, kbVersion). */
   cacheKey?: string;
