@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 import { formatMoney, formatPercent } from "../format";
 import { Cautions } from "./cautions";
@@ -6,7 +6,7 @@ import { Cautions } from "./cautions";
 type Step = Diagnosis["plan"]["steps"][number];
 export type RecordResult = (step: Step, result: { result?: "pass" | "fail"; reading?: string }) => void;
 
-const SHOWN = 6;
+const SHOWN = 8;
 const WORTH = 0.02; // below a 2% chance of finding the fault a check waits in the folded list
 
 const ACCESS_LABEL: Record<string, string> = { ramp: "ramp", road_test: "road test", scan_tool: "scan tool", wheels_off: "wheels off", bonnet_open: "bonnet open", cold_engine: "cold engine" };
@@ -31,8 +31,21 @@ function onPlanKey(e: React.KeyboardEvent<HTMLOListElement>, steps: Step[], reco
 export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagnosis["plan"]; currency: string; record: RecordResult; busy: boolean; error: string | null }) {
   const steps = plan.steps;
   // The plan orders every remaining check; the screen offers the few worth doing now.
-  const shown = steps.filter((s, i) => i < SHOWN && (i === 0 || s.pFind >= WORTH));
-  const later = steps.slice(shown.length);
+  const worth = steps.filter((s, i) => i === 0 || s.pFind >= WORTH);
+  const shown = worth.slice(0, SHOWN);
+  const later = steps.filter((s) => !shown.includes(s));
+  const list = useRef<HTMLOListElement>(null);
+  // N jumps to the next check from anywhere on the page (not while typing).
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      const t = e.target as HTMLElement | null;
+      if (e.key !== "n" || e.ctrlKey || e.metaKey || e.altKey || t?.closest("input, textarea, select, [cmdk-root]")) return;
+      const first = list.current?.querySelector<HTMLElement>("[data-step]");
+      if (first) (e.preventDefault(), first.focus());
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, []);
   return (
     <section aria-labelledby="plan" className="rounded-card border border-rule bg-card p-4">
       <h2 id="plan" className="text-xl font-semibold">Check plan</h2>
@@ -53,7 +66,10 @@ export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagn
           {plan.whatIf.ifPass ? ` (${formatPercent(plan.whatIf.ifPass.probability)})` : ""}.
         </p>
       ) : null}
-      <ol className="mt-3 grid gap-3" aria-label="Checks, best value first" onKeyDown={(e) => onPlanKey(e, shown, record)}>
+      <p className="mt-2 text-sm text-graphite-600">
+        <kbd>N</kbd> next check · <kbd>↑</kbd>/<kbd>↓</kbd> move · <kbd>P</kbd> passed · <kbd>F</kbd> found a fault · <kbd>Enter</kbd> type a reading
+      </p>
+      <ol ref={list} className="mt-3 grid gap-3" aria-label="Checks, best value first" onKeyDown={(e) => onPlanKey(e, shown, record)}>
         {shown.map((s, i) => (
           <PlanStep key={s.checkId} step={s} first={i === 0} currency={currency} record={record} busy={busy} />
         ))}

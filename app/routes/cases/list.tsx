@@ -1,4 +1,5 @@
-import { Form, useSearchParams } from "react-router";
+import { Form, Link, useSearchParams } from "react-router";
+import { can } from "~/auth/permissions";
 import { z } from "zod";
 import { memberContext } from "~/auth/guards.server";
 import { listCases } from "~/cases/list.server";
@@ -18,7 +19,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
   const parsed = FilterSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
   if (!parsed.success) throw new Response(parsed.error.issues[0]?.message ?? "Bad filter", { status: 400 });
   const cases = await listCases(context.get(dbContext), member.workshopId, { state: parsed.data.state, q: parsed.data.q || undefined });
-  return { cases };
+  return { cases, canOpen: can(member.role, "case:open") };
 }
 
 export function meta() {
@@ -29,7 +30,12 @@ export default function CaseList({ loaderData }: Route.ComponentProps) {
   const [params] = useSearchParams();
   return (
     <div>
-      <h1 className="text-2xl font-semibold">Cases</h1>
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h1 className="text-2xl font-semibold">Cases</h1>
+        {loaderData.canOpen ? (
+          <Link to="/cases/new" className="inline-flex min-h-tap items-center rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700">Open a case</Link>
+        ) : null}
+      </div>
       <Form method="get" className="mt-4 flex flex-wrap items-end gap-3" role="search">
         <label className="flex flex-col text-sm font-medium">
           Find

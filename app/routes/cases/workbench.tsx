@@ -17,6 +17,7 @@ import { ErrorPage } from "~/components/error-page";
 import { STATE_LABEL } from "~/components/format";
 import { dbContext } from "~/context";
 import { refusalMessage } from "~/http.server";
+import { quickFindKey } from "~/quick-find";
 import { knowledgeEntries } from "~/search/quick-find.server";
 import { isRouteErrorResponse } from "react-router";
 import type { Route } from "./+types/workbench";
@@ -27,10 +28,13 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const bundle = await loadCase(db, member, params.caseId);
   const { model: _m, evidence: _e, ...diagnosis } = await diagnoseCase(db, member, bundle);
   const entries = (await knowledgeEntries(db, member.workshopId, bundle.workshop.kbVersion)).filter((e) => e.kind === "symptom");
+  // The browser keeps one built index per knowledge-base version instead of rebuilding on every revalidation.
+  const quickFindCacheKey = quickFindKey(member.workshopId, bundle.workshop.kbVersion, "case-symptoms");
   const canWork = bundle.state === "open" && (can(member.role, "case:work") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId));
   return {
     view: { case: bundle, diagnosis } satisfies CaseView as CaseView,
     entries,
+    quickFindCacheKey,
     me: { role: member.role, canWork, mayConclude: can(member.role, "case:conclude") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId), maySignOff: can(member.role, "case:signoff") },
   };
 }
@@ -58,7 +62,7 @@ export function meta({ loaderData }: Route.MetaArgs) {
 }
 
 export default function Workbench({ loaderData, actionData }: Route.ComponentProps) {
-  const { me, entries } = loaderData;
+  const { me, entries, quickFindCacheKey } = loaderData;
   const initial = loaderData.view;
   const id = initial.case.id;
   const query = useQuery({ ...caseQuery(id), initialData: initial });
@@ -85,7 +89,7 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
           </p>
           <blockquote className="mt-2 border-l-4 border-uv-500 pl-3 text-lg">“{c.complaint}”</blockquote>
         </div>
-        {me.canWork ? <CaseQuickFind entries={entries} recent={c.observations.map((o) => o.symptomId)} onAdd={(e, present) => evidence.mutate({ kind: "observe", symptomId: e.id, name: e.title, present })} /> : null}
+        {me.canWork ? <CaseQuickFind entries={entries} cacheKey={quickFindCacheKey} recent={c.observations.map((o) => o.symptomId)} onAdd={(e, present) => evidence.mutate({ kind: "observe", symptomId: e.id, name: e.title, present })} /> : null}
       </header>
       {actionData?.notice ? <p role="status" className="rounded-lg border border-sound bg-card p-3">{actionData.notice}</p> : null}
       {revalidator.state === "loading" ? <p className="sr-only">Updating…</p> : null}
