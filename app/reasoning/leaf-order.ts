@@ -25,7 +25,7 @@ export function rankingOrder(index: ModelIndex, items: readonly EvidenceItem[], 
   }
   const keys = new Float64Array(touched.length);
   for (let j = 0; j < touched.length; j++) keys[j] = prob[touched[j]];
-  const sortedTouched = orderByKeyDesc(keys, touched.length, (a, b) => compareIds(idOf(touched[a]), idOf(touched[b])));
+  const sortedTouched = orderByKeyDesc(keys, touched.length, (a, b) => keys[b] - keys[a] || compareIds(idOf(touched[a]), idOf(touched[b])));
 
   const out = new Int32Array(L);
   let t = 0;

@@ -15,6 +15,8 @@ import { SKILL_LEVELS, type Evidence, type Model, type Skill } from "./schema";
 import { orderByKeyDesc } from "./sort-keys";
 import { whatIfFrom, type WhatIf } from "./what-if";
 
+const RATIO_TIE_BITS = 20;
+
 export type PlanStep = {
   checkId: string;
   name?: string;
@@ -76,10 +78,10 @@ export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: E
     pFind[k] = failProbability(index, cl, post.prob, k);
     ratio[k] = pFind[k] / index.cost[k]; // cost > 0 is enforced when indexing
   }
-  // Best ratio first; ratios equal to ~12 significant digits tie (so p/c pairs equal on paper,
-  // such as 0.3/10 and 0.6/20, tie in floating point too) and go cheaper first, then by id.
+  // Best ratio first. Ratios that agree to 2^−32 (about 10 significant digits) tie, so that pairs
+  // equal on paper, such as 0.3/10 and 0.6/20, tie in floating point too: cheaper first, then id.
   const { cost, checkIds: ids } = index;
-  const order = orderByKeyDesc(ratio, K, (a, b) => cost[a] - cost[b] || compareIds(ids[a], ids[b]));
+  const order = orderByKeyDesc(ratio, K, (a, b) => cost[a] - cost[b] || compareIds(ids[a], ids[b]), RATIO_TIE_BITS);
 
   const withinAll = new Int32Array(K);
   let n = 0;

@@ -1,16 +1,17 @@
 // Ordering indices by a numeric key, descending, without a comparator callback. A comparator
 // sort of 3,000 items costs several times more than the engine's native numeric sort, so each
 // key carries its own index in the lowest mantissa bits and the keys are sorted natively. This
-// keeps the key to a relative precision of about 2^−(52 − bits); keys that agree to that precision
-// count as equal and go to `tie` (cheaper first, then id), which only ever sees short runs.
+// keeps the key to a relative precision of 2^−(52 − bits); keys that agree to that precision form
+// runs that are put in `tie` order. Runs are short, so `tie` is cheap. Pass the full comparison as
+// `tie` for an exact order, or ask for `tieBits` to treat keys within 2^−(52 − tieBits) as equal.
 // The low half of a float64 is the first 32-bit word only on little-endian hardware (all current
 // x86 and ARM); anything else takes the comparator path.
 const LITTLE_ENDIAN = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
 const MAX_INDEX_BITS = 20; // beyond a million items, fall back to a comparator sort
 
-export function orderByKeyDesc(keys: Float64Array, n: number, tie: (a: number, b: number) => number): Int32Array {
+export function orderByKeyDesc(keys: Float64Array, n: number, tie: (a: number, b: number) => number, tieBits = 0): Int32Array {
   const order = new Int32Array(n);
-  const bits = Math.max(1, Math.ceil(Math.log2(Math.max(2, n))));
+  const bits = Math.max(tieBits, Math.ceil(Math.log2(Math.max(2, n))));
   if (bits > MAX_INDEX_BITS || !LITTLE_ENDIAN) {
     for (let i = 0; i < n; i++) order[i] = i;
     return order.sort((a, b) => keys[b] - keys[a] || tie(a, b));

@@ -1,7 +1,7 @@
 // The fast engine against the straightforward reference implementation on random models
 // (seeded), with trees, links on inner nodes, owner reports, findings and skill gating.
 import { describe, expect, it } from "vitest";
-import { diagnose, planChecks, rankCauses } from "~/reasoning";
+import { compileModel, diagnose, planChecks, rankCauses } from "~/reasoning";
 import { generateCase } from "./reference/generate";
 import { naiveDiagnose } from "./reference/naive";
 
@@ -38,7 +38,19 @@ describe("fast engine = reference implementation", () => {
   it("diagnose() gives the same ranking and plan as the two separate calls", () => {
     const { model, evidence } = generateCase({ causes: 50, links: 150, checks: 30, evidence: 10 }, 9);
     const both = diagnose(model, evidence);
-    expect(both.ranking).toEqual(rankCauses(model, evidence));
+    const json = (x: unknown) => JSON.parse(JSON.stringify(x)); // includes every cause's contributions
+    expect(json(both.ranking)).toEqual(json(rankCauses(model, evidence)));
     expect(both.plan).toEqual(planChecks(model, evidence));
+  });
+
+  it("a compiled model gives the same answers and is a snapshot", () => {
+    const { model, evidence } = generateCase({ causes: 50, links: 150, checks: 30, evidence: 10 }, 10);
+    const json = (x: unknown) => JSON.parse(JSON.stringify(x));
+    const compiled = compileModel(model);
+    const before = json(diagnose(model, evidence));
+    expect(json(diagnose(compiled, evidence))).toEqual(before);
+    expect(json(diagnose(compiled, evidence, { unlistedPrior: 0 }))).toEqual(json(diagnose(model, evidence, { unlistedPrior: 0 })));
+    model.links.forEach((l) => (l.p = 0.5)); // later edits do not reach the compiled copy
+    expect(json(diagnose(compiled, evidence))).toEqual(before);
   });
 });

@@ -1,0 +1,104 @@
+// Plans with imperfect checks (false alarms, P(fail | cause) < 1) and an unlisted share. The
+// plan stops at the first failing check, so step i is reached when all earlier checks passed:
+//   P(reach i) = Σ_h P(h) · Π_{j<i} (1 − q_j(h)),   ECR = Σ_i C_i · P(reach i).
+import { describe, expect, it } from "vitest";
+import { orderCost, planChecks, type Model } from "~/reasoning";
+import { mulberry32 } from "./reference/prng";
+
+describe("imperfect checks", () => {
+  // P(A) = .6, P(B) = .3, P(U) = .1 (unlistedPrior .1, bases 2 : 1)
+  // k1 (cost 10): fails .9 on A, false alarm .2;  k2 (cost 30): fails .8 on B, false alarm .05
+  const model: Model = {
+    causes: [
+      { id: "A", prior: 2 },
+      { id: "B", prior: 1 },
+    ],
+    symptoms: [],
+    links: [],
+    checks: [
+      { id: "k1", cost: 10, falseAlarm: 0.2, bears: [{ causeId: "A", pFail: 0.9 }] },
+      { id: "k2", cost: 30, falseAlarm: 0.05, bears: [{ causeId: "B", pFail: 0.8 }] },
+    ],
+  };
+  const none = { observations: [], findings: [] };
+
+  it("P(fail) = Σ P(c)·P(fail|c), false alarm for the rest (hand values)", () => {
+    // k1: .6 × .9 + .3 × .2 + .1 × .2 = .54 + .06 + .02 = .62 → ratio .062
+    // k2: .6 × .05 + .3 × .8 + .1 × .05 = .03 + .24 + .005 = .275 → ratio .0091667
+    const plan = planChecks(model, none, { unlistedPrior: 0.1 });
+    expect(plan.steps.map((s) => s.checkId)).toEqual(["k1", "k2"]);
+    expect(plan.steps[0].pFind).toBeCloseTo(0.62, 14);
+    expect(plan.steps[1].pFind).toBeCloseTo(0.275, 14);
+    expect(plan.steps[1].ratio).toBeCloseTo(0.275 / 30, 14);
+  });
+
+  it("ECR: step 2 is reached only when k1 passed", () => {
+    // P(k1 passes) = .6 × .1 + .3 × .8 + .1 × .8 = .06 + .24 + .08 = .38 → ECR = 10 + .38 × 30 = 21.4
+    // other order: P(k2 passes) = .6 × .95 + .3 × .2 + .1 × .95 = .57 + .06 + .095 = .725 → 30 + .725 × 10 = 37.25
+    const plan = planChecks(model, none, { unlistedPrior: 0.1 });
+    expect(plan.expectedCost).toBeCloseTo(21.4, 12);
+    expect(plan.steps[1].pReached).toBeCloseTo(0.38, 14);
+    expect(orderCost(model, none, ["k2", "k1"], { unlistedPrior: 0.1 })).toBeCloseTo(37.25, 12);
+  });
+
+  it("ECR equals the formula summed over hypotheses, on random imperfect instances", () => {
+    const rand = mulberry32(95);
+    for (let t = 0; t < 50; t++) {
+      const n = 2 + Math.floor(rand() * 5);
+      const causes = Array.from({ length: n }, (_, i) => ({ id: `c${i}`, prior: rand() + 0.1 }));
+      const checks = Array.from({ length: n + 1 }, (_, i) => ({
+        id: `k${i}`,
+        cost: 1 + Math.round(rand() * 50),
+        falseAlarm: rand() * 0.3,
+        bears: [{ causeId: `c${Math.floor(rand() * n)}`, pFail: 0.5 + rand() / 2 }],
+      }));
+      const m: Model = { causes, symptoms: [], links: [], checks };
+      const u = 0.05;
+      const plan = planChecks(m, { observations: [], findings: [] }, { unlistedPrior: u });
+      // Independent computation: hypotheses c0..c(n−1) and U, survival products written out.
+      const total = causes.reduce((s, c) => s + c.prior, 0);
+      const hyps = [...causes.map((c) => ({ id: c.id, p: ((1 - u) * c.prior) / total })), { id: "U", p: u }];
+      const q = (checkId: string, h: string) => {
+        const k = checks.find((x) => x.id === checkId)!;
+        return k.bears.find((b) => b.causeId === h)?.pFail ?? k.falseAlarm;
+      };
+      let expected = 0;
+      for (const h of hyps) {
+        let reach = h.p;
+        for (const s of plan.steps) {
+          expected += s.cost * reach;
+          reach *= 1 - q(s.checkId, h.id);
+        }
+      }
+      expect(plan.expectedCost).toBeCloseTo(expected, 9);
+    }
+  });
+
+  it("a check that always fails (false alarm 1) ends the plan for every cause it does not bear on", () => {
+    // k0 fails surely unless the fault is A (then it fails with .5). P(A) = .5 of listed, U = 0.
+    const m: Model = {
+      causes: [
+        { id: "A", prior: 1 },
+        { id: "B", prior: 1 },
+      ],
+      symptoms: [],
+      links: [],
+      checks: [
+        { id: "k0", cost: 1, falseAlarm: 1, bears: [{ causeId: "A", pFail: 0.5 }] },
+        { id: "k1", cost: 100, falseAlarm: 0, bears: [{ causeId: "B", pFail: 1 }] },
+      ],
+    };
+    // k0 first (ratio .75 / 1); P(k0 passes) = .5 × .5 = .25 → ECR = 1 + .25 × 100 = 26
+    const plan = planChecks(m, { observations: [], findings: [] }, { unlistedPrior: 0 });
+    expect(plan.steps.map((s) => s.checkId)).toEqual(["k0", "k1"]);
+    expect(plan.expectedCost).toBeCloseTo(26, 12);
+  });
+
+  it("when the fault is outside the knowledge base, checks fail only by false alarm", () => {
+    // Evidence rules out every listed cause (P(s | A) = 0, s present, leak .3): only U is left.
+    const m: Model = { ...model, symptoms: [{ id: "s", leak: 0.3 }], links: [{ symptomId: "s", causeId: "A", p: 0 }, { symptomId: "s", causeId: "B", p: 0 }] };
+    const plan = planChecks(m, { observations: [{ symptomId: "s", present: true }], findings: [] });
+    expect(plan.steps.find((s) => s.checkId === "k1")!.pFind).toBeCloseTo(0.2, 12);
+    expect(plan.steps.find((s) => s.checkId === "k2")!.pFind).toBeCloseTo(0.05, 12);
+  });
+});
