@@ -3,7 +3,6 @@
 // plan stays linear in its size. Every range and cross-reference is checked here, so the maths
 // downstream never sees NaN. Priors depend on the unlisted share, so they are added per call.
 import { checkCostValue, checkProbability, fail } from "./errors";
-// (checkProbability/checkCostValue build their message only on failure: callers pass a function.)
 import { LeafExpander } from "./expand";
 import { DEFAULT_CHECK_SKILL, skillRank } from "./options";
 import type { Model } from "./schema";
@@ -65,7 +64,8 @@ export function buildIndex(model: Model): BaseIndex {
     if (s === undefined) fail("UNKNOWN_ID", `A link names symptom "${l.symptomId}", which is not in the model.`);
     const c = tree.causeIndex.get(l.causeId);
     if (c === undefined) fail("UNKNOWN_ID", `A link names cause "${l.causeId}", which is not in the model.`);
-    if (typeof l.p !== "number" || !(l.p >= 0 && l.p <= 1)) checkProbability(l.p, () => `P(${l.symptomId} | ${l.causeId})`); // inline: hot loop
+    // Tested inline so the per-link cost is one comparison; checkProbability only builds the error.
+    if (typeof l.p !== "number" || !(l.p >= 0 && l.p <= 1)) checkProbability(l.p, () => `P(${l.symptomId} | ${l.causeId})`);
     linkSym[i] = s;
     linkCause[i] = c;
   }

@@ -30,7 +30,7 @@ function measure(fn: () => number, warmup: number, runs: number, maxMs: number):
   return { ms: median(times), runs: times.length };
 }
 
-const LINKS_SWEEP_MS = 8000; // kept back for the links-only sweep at the end
+const LINKS_SWEEP_MS = 12_000; // kept back for the links-only and checks-only sweeps at the end
 const began = performance.now();
 type Row = Record<string, string>;
 const rows: Row[] = [];
@@ -108,4 +108,14 @@ const linkHead = ["links", "compile ms", "diagnose(Model) ms", "rank+plan (compi
 const lw = linkHead.map((h, i) => Math.max(h.length, ...linkRows.map((r) => r[i].length)));
 console.log(linkHead.map((h, i) => h.padStart(lw[i])).join("  "));
 for (const r of linkRows) console.log(r.map((c, i) => c.padStart(lw[i])).join("  "));
+
+// Checks only: the plan's share, with causes and links fixed, to separate its growth from the
+// garbage collection and cache effects that the full-size rows above also contain.
+const checkCells: string[] = [];
+for (const scale of SCALES) {
+  const { model, evidence } = generateCase({ ...BASE, checks: BASE.checks * scale }, 7);
+  const compiled = compileModel(model);
+  checkCells.push(`${BASE.checks * scale} checks ${measure(() => planChecks(compiled, evidence).steps.length, 30, 300, 800).ms.toFixed(3)}`);
+}
+console.log(`\nplanChecks alone (compiled; ${BASE.causes} causes, ${BASE.links} links), median ms: ${checkCells.join(" | ")}`);
 console.log(`total ${((performance.now() - began) / 1000).toFixed(1)} s${sink === -1 ? "" : ""}`);
