@@ -19,6 +19,18 @@ export function failProbability(index: ModelIndex, cl: CheckLeaves, prob: Float6
   return Math.min(1, Math.max(0, p));
 }
 
+/**
+ * P(the check fails because of the fault it bears on) = Σ_{borne leaves} P(h)·q(h). This is what
+ * the plan calls the chance of finding the fault: a false alarm stops the search without finding
+ * anything, so it must not make an unrelated cheap check look worth doing. For perfect
+ * single-cause checks (no false alarms) it equals P(fail), so the ordering theorem is unchanged.
+ */
+export function detectProbability(cl: CheckLeaves, prob: Float64Array, k: number): number {
+  let p = 0;
+  for (let j = cl.start[k]; j < cl.start[k + 1]; j++) p += prob[cl.leaf[j]] * cl.pFail[j];
+  return Math.min(1, Math.max(0, p));
+}
+
 export type OrderCost = { total: number; reached: Float64Array }; // reached[i] = P(step i is run)
 
 export function expectedCost(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, order: ArrayLike<number>): OrderCost {

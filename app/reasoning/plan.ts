@@ -6,7 +6,7 @@
 import { fail } from "./errors";
 import { resolveEvidence } from "./evidence";
 import { toCompiled, type CompiledModel } from "./compiled";
-import { expectedCost, failProbability } from "./expected-cost";
+import { detectProbability, expectedCost } from "./expected-cost";
 import { compareIds } from "./ids";
 import type { ModelIndex } from "./model-index";
 import { resolveOptions, type PlanOptions } from "./options";
@@ -20,7 +20,7 @@ const RATIO_TIE_BITS = 20;
 export type PlanStep = {
   checkId: string;
   name?: string;
-  pFind: number; // P(this check fails) under the current posterior
+  pFind: number; // P(this check fails because of a fault it bears on), false alarms left out
   cost: number;
   ratio: number; // pFind / cost
   skill: Skill;
@@ -75,7 +75,7 @@ export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: E
   const ratio = new Float64Array(K);
   for (let k = 0; k < K; k++) {
     if (done[k]) continue;
-    pFind[k] = failProbability(index, cl, post.prob, k);
+    pFind[k] = detectProbability(cl, post.prob, k);
     ratio[k] = pFind[k] / index.cost[k]; // cost > 0 is enforced when indexing
   }
   // Best ratio first. Ratios that agree to 2^−32 (about 10 significant digits) tie, so that pairs

@@ -22,14 +22,23 @@ describe("imperfect checks", () => {
   };
   const none = { observations: [], findings: [] };
 
-  it("P(fail) = Σ P(c)·P(fail|c), false alarm for the rest (hand values)", () => {
-    // k1: .6 × .9 + .3 × .2 + .1 × .2 = .54 + .06 + .02 = .62 → ratio .062
-    // k2: .6 × .05 + .3 × .8 + .1 × .05 = .03 + .24 + .005 = .275 → ratio .0091667
+  it("the chance of finding the fault counts only the causes a check bears on (hand values)", () => {
+    // k1: P(A) × .9 = .6 × .9 = .54 → ratio .054   (its false alarms, .3 × .2 + .1 × .2, find nothing)
+    // k2: P(B) × .8 = .3 × .8 = .24 → ratio .008
     const plan = planChecks(model, none, { unlistedPrior: 0.1 });
     expect(plan.steps.map((s) => s.checkId)).toEqual(["k1", "k2"]);
-    expect(plan.steps[0].pFind).toBeCloseTo(0.62, 14);
-    expect(plan.steps[1].pFind).toBeCloseTo(0.275, 14);
-    expect(plan.steps[1].ratio).toBeCloseTo(0.275 / 30, 14);
+    expect(plan.steps[0].pFind).toBeCloseTo(0.54, 14);
+    expect(plan.steps[1].pFind).toBeCloseTo(0.24, 14);
+    expect(plan.steps[1].ratio).toBeCloseTo(0.24 / 30, 14);
+  });
+
+  it("a cheap check with a high false-alarm rate does not jump ahead of a relevant one", () => {
+    // k3 bears on nothing likely (B' with prior 0) and fails 30% of the time by false alarm.
+    // By P(fail) it would score .3 / 5 = .06 and lead; by detection it scores 0 and comes last.
+    const m: Model = { ...model, causes: [...model.causes, { id: "C", prior: 0 }], checks: [...model.checks, { id: "k3", cost: 5, falseAlarm: 0.3, bears: [{ causeId: "C", pFail: 1 }] }] };
+    const plan = planChecks(m, none, { unlistedPrior: 0.1 });
+    expect(plan.steps.map((s) => s.checkId)).toEqual(["k1", "k2", "k3"]);
+    expect(plan.steps[2].pFind).toBe(0);
   });
 
   it("ECR: step 2 is reached only when k1 passed", () => {
@@ -88,17 +97,18 @@ describe("imperfect checks", () => {
         { id: "k1", cost: 100, falseAlarm: 0, bears: [{ causeId: "B", pFail: 1 }] },
       ],
     };
-    // k0 first (ratio .75 / 1); P(k0 passes) = .5 × .5 = .25 → ECR = 1 + .25 × 100 = 26
+    // k0 first (detection .5 × .5 = .25 per 1, against k1's .5 per 100); P(k0 passes) = .5 × .5 = .25 → ECR = 1 + .25 × 100 = 26
     const plan = planChecks(m, { observations: [], findings: [] }, { unlistedPrior: 0 });
     expect(plan.steps.map((s) => s.checkId)).toEqual(["k0", "k1"]);
     expect(plan.expectedCost).toBeCloseTo(26, 12);
   });
 
-  it("when the fault is outside the knowledge base, checks fail only by false alarm", () => {
+  it("when the fault is outside the knowledge base, no check can find it", () => {
     // Evidence rules out every listed cause (P(s | A) = 0, s present, leak .3): only U is left.
     const m: Model = { ...model, symptoms: [{ id: "s", leak: 0.3 }], links: [{ symptomId: "s", causeId: "A", p: 0 }, { symptomId: "s", causeId: "B", p: 0 }] };
     const plan = planChecks(m, { observations: [{ symptomId: "s", present: true }], findings: [] });
-    expect(plan.steps.find((s) => s.checkId === "k1")!.pFind).toBeCloseTo(0.2, 12);
-    expect(plan.steps.find((s) => s.checkId === "k2")!.pFind).toBeCloseTo(0.05, 12);
+    // Each would fail only by false alarm (k1 .2, k2 .05), which finds nothing: both score 0,
+    // and equal chances fall back to cheapest first.
+    expect(plan.steps.map((s) => [s.checkId, s.pFind])).toEqual([["k1", 0], ["k2", 0]]);
   });
 });

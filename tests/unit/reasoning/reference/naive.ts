@@ -78,12 +78,14 @@ export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.
     .map((l, c) => ({ id: l.id, probability: post[c], contributions: contributions[c] }))
     .sort((a, b) => b.probability - a.probability || (a.id < b.id ? -1 : 1));
 
-  // Plan: every check not yet done, by P(fail)/cost; ECR with survival per hypothesis.
+  // Plan: every check not yet done, by P(fails because of a fault it bears on)/cost; ECR with
+  // survival per hypothesis, where false alarms do stop the search.
   const remaining = model.checks
     .filter((k) => !evidence.findings.some((f) => f.checkId === k.id))
     .map((k) => {
       const q = checkLik(k.id);
-      const pFind = post.reduce((s, p, h) => s + p * q[h], 0);
+      const borne = prior.map((_, h) => h !== H - 1 && chains[h].some((a) => k.bears.some((b) => b.causeId === a)));
+      const pFind = post.reduce((s, p, h) => s + (borne[h] ? p * q[h] : 0), 0);
       return { check: k, q, pFind, ratio: pFind / k.cost };
     })
     .sort((a, b) => b.ratio - a.ratio || a.check.cost - b.check.cost || (a.check.id < b.check.id ? -1 : 1));
