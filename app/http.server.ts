@@ -18,3 +18,12 @@ export async function refusalMessage(error: unknown): Promise<{ status: number; 
     return { status: error.status, message: text };
   }
 }
+
+/** For a resource route's other method: 405 in our JSON shape, with the Allow header (RFC 9110 §15.5.6). */
+export function methodNotAllowed(allow: string, hint: string) {
+  return () => {
+    const res = httpError(405, hint);
+    res.headers.set("Allow", allow);
+    return res;
+  };
+}

@@ -23,5 +23,6 @@ export default [
   route("api/cases/:caseId/diagnosis", "routes/api/diagnosis.ts"),
   route("api/cases/:caseId/observations/:itemId?", "routes/api/observations.ts"),
   route("api/cases/:caseId/findings/:itemId?", "routes/api/findings.ts"),
+  route("api/*", "routes/api/not-found.ts"),
   route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

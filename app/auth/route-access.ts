@@ -48,5 +48,6 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/api/diagnosis.ts": { path: "/api/cases/{case}/diagnosis", api: true, record: true, GET: "case:read" },
   "routes/api/observations.ts": { path: "/api/cases/{case}/observations", api: true, record: true, POST: "case:work" },
   "routes/api/findings.ts": { path: "/api/cases/{case}/findings", api: true, record: true, POST: "case:work" },
+  "routes/api/not-found.ts": { path: "/api/no-such-thing", GET: "public" },
   "routes/not-found.tsx": { path: "/no-such-page", GET: "public" },
 };

@@ -9,6 +9,7 @@ import { evaluateRule, MeasureError } from "~/measure";
 import type { CaseBundle } from "./case.server";
 
 const SKILL_RANK = { apprentice: 0, technician: 1, senior: 2 } as const;
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Who may add evidence: technicians and seniors on any case, an apprentice on the cases given to them. */
 export function assertCanWork(member: Member, c: Pick<CaseBundle, "assignedMemberId" | "state">) {
@@ -35,6 +36,7 @@ export async function recordObservation(db: Db, member: Member, c: CaseBundle, i
 
 export async function removeObservation(db: Db, member: Member, c: CaseBundle, observationId: string) {
   assertCanWork(member, c);
+  if (!UUID.test(observationId)) refuse(404, "That observation is not on this case.");
   await db.transaction(async (tx) => {
     const gone = await tx.delete(observations).where(and(eq(observations.id, observationId), eq(observations.caseId, c.id), eq(observations.workshopId, member.workshopId))).returning();
     if (gone.length === 0) refuse(404, "That observation is not on this case.");
@@ -84,6 +86,7 @@ export async function recordFinding(db: Db, member: Member, c: CaseBundle, input
 
 export async function removeFinding(db: Db, member: Member, c: CaseBundle, findingId: string) {
   assertCanWork(member, c);
+  if (!UUID.test(findingId)) refuse(404, "That finding is not on this case.");
   await db.transaction(async (tx) => {
     const gone = await tx.delete(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, c.id), eq(findings.workshopId, member.workshopId))).returning();
     if (gone.length === 0) refuse(404, "That finding is not on this case.");

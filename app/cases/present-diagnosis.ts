@@ -3,6 +3,11 @@
 import type { Plan, Ranking, WhatIf } from "~/reasoning";
 import type { Knowledge } from "./build-model";
 
+const WHY_CAUSES = 10; // causes whose evidence is listed
+const WHY_ITEMS = 8; // pieces of evidence per cause
+const WHY_MIN = 0.01; // |log likelihood ratio| below this moves nothing visible
+const DETAILED_STEPS = 12;
+
 export type ShownCause = { id: string; name: string; probability: number; priority: string | null; why: { label: string; weight: number }[] };
 
 export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
@@ -13,20 +18,28 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
     const [kind, id] = [key.slice(0, key.indexOf(":")), key.slice(key.indexOf(":") + 1)];
     return kind === "symptom" ? symptom.get(id)?.name ?? id : check.get(id)?.name ?? id;
   };
-  const causes: ShownCause[] = ranking.causes.map((c) => ({
+  // The "why" is read for the causes a person looks at: the top ones, their strongest few pieces of
+  // evidence. All of it for every cause would be causes × evidence numbers on every re-rank.
+  const causes: ShownCause[] = ranking.causes.map((c, i) => ({
     id: c.id,
     name: cause.get(c.id)?.name ?? c.id,
     probability: c.probability,
     priority: cause.get(c.id)?.priority ?? null,
-    why: Object.entries(c.contributions)
-      .filter(([, w]) => Number.isFinite(w) && Math.abs(w) > 1e-9)
-      .map(([k, w]) => ({ label: label(k), weight: w }))
-      .sort((a, b) => Math.abs(b.weight) - Math.abs(a.weight)),
+    why:
+      i < WHY_CAUSES
+        ? Object.entries(c.contributions)
+            .filter(([, w]) => Number.isFinite(w) && Math.abs(w) >= WHY_MIN)
+            .map(([k, w]) => ({ label: label(k), weight: w }))
+            .sort((a, b) => Math.abs(b.weight) - Math.abs(a.weight))
+            .slice(0, WHY_ITEMS)
+        : [],
   }));
   const name = (id: string | null) => (id ? cause.get(id)?.name ?? id : "Not in the knowledge base");
   const outcome = (o: WhatIf["ifFail"]) => (o ? { topCause: name(o.topCauseId), probability: o.probability } : null);
-  const step = <T extends { checkId: string }>(s: T) => {
+  // Full instructions only for the steps the screen opens; the rest carry what the folded list shows.
+  const step = <T extends { checkId: string }>(s: T, i: number) => {
     const k = check.get(s.checkId);
+    if (i >= DETAILED_STEPS) return { ...s, name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: [], access: [], cautions: [], instructions: [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, rule: k?.rule ?? null, failMeans: "" };
     return { ...s, name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: k?.tools ?? [], access: k?.access ?? [], cautions: k?.cautions ?? [], instructions: k?.instructions ?? [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, rule: k?.rule ?? null, failMeans: k?.failMeans ?? "" };
   };
   const whatIfFor = (w: WhatIf | null) => (w ? { checkId: w.checkId, pFail: w.pFail, ifFail: outcome(w.ifFail), ifPass: outcome(w.ifPass) } : null);

@@ -63,7 +63,7 @@ export async function signOff(db: Db, member: Member, c: CaseBundle, input: { ac
   if (c.state !== "awaiting_signoff") refuse(409, "This case is not waiting for a sign-off.");
   const set = input.accept
     ? { state: "concluded" as const, signedOffById: member.memberId, needsSenior: false }
-    : { state: "open" as const, conclusionCauseId: null, concludedById: null, concludedAt: null, needsSenior: false };
+    : { state: "open" as const, conclusionCauseId: null, conclusionNotes: null, concludedById: null, concludedAt: null, needsSenior: false };
   await db.transaction(async (tx) => {
     await versionedUpdate(tx, c, input.version, set);
     await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: input.accept ? "case.signoff" : "case.send_back", entity: "case", entityId: c.id, before: { state: c.state, cause: c.conclusionCause }, after: { state: set.state, note: input.note } });

@@ -74,7 +74,7 @@ describe("authorization matrix", () => {
 
   const base = inject("baseUrl");
   for (const [file, rule] of Object.entries(ROUTE_ACCESS)) {
-    if (file === "routes/not-found.tsx") continue;
+    if (file === "routes/not-found.tsx" || file === "routes/api/not-found.ts") continue;
     const methods: ["GET" | "POST", string | undefined, Access][] = [];
     if (rule.GET) methods.push(["GET", undefined, rule.GET]);
     if (typeof rule.POST === "string") methods.push(["POST", undefined, rule.POST]);
@@ -105,10 +105,13 @@ describe("authorization matrix", () => {
     }
   }
 
-  it("answers an unknown page with 404 for everyone", async () => {
+  it("answers an unknown page, or an unknown API address, with 404 for everyone", async () => {
     for (const actor of actors) {
       const res = await fetch(`${base}/no-such-page`, { headers: actor.cookie ? { cookie: actor.cookie } : {} });
       expect(res.status, actor.name).toBe(404);
+      const api = await fetch(`${base}/api/no-such-thing`, { headers: actor.cookie ? { cookie: actor.cookie } : {} });
+      expect(api.status, actor.name).toBe(404);
+      expect((await api.json()).error).toMatch(/no such API address/);
     }
   });
 

@@ -1,3 +1,4 @@
+import { methodNotAllowed } from "~/http.server";
 import { api } from "~/api.server";
 import { loadCase } from "~/cases/case.server";
 import { diagnoseCase } from "~/cases/diagnosis.server";
@@ -13,3 +14,5 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
     return { case: bundle, diagnosis };
   });
 }
+
+export const action = methodNotAllowed("GET", "This address is read with GET.");

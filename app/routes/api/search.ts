@@ -1,3 +1,4 @@
+import { methodNotAllowed } from "~/http.server";
 import { z } from "zod";
 import { api } from "~/api.server";
 import { kbVersion } from "~/cases/knowledge.server";
@@ -21,3 +22,5 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     return { query: q.q, groups: search(indexes, q.q, { kinds: q.kinds, limit: q.limit }) };
   });
 }
+
+export const action = methodNotAllowed("GET", "This address is read with GET.");

@@ -1,3 +1,4 @@
+import { methodNotAllowed } from "~/http.server";
 import { z } from "zod";
 import { api, jsonBody } from "~/api.server";
 import { dbContext } from "~/context";
@@ -22,3 +23,5 @@ export async function action({ request, context }: Route.ActionArgs) {
     return { ranking: rankCauses(model, evidence, options), plan: planChecks(model, evidence, options), whatIf: checkId ? whatIf(model, evidence, checkId, options) : null };
   });
 }
+
+export const loader = methodNotAllowed("POST", "Send a model and evidence with POST.");
