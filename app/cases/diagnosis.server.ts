@@ -1,10 +1,16 @@
 import type { Member } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
-import { diagnose, type Skill } from "~/reasoning";
+import { compileModel, diagnose, type CompiledModel, type Model, type Skill } from "~/reasoning";
 import { buildModel, vehicleFacts } from "./build-model";
 import { evidenceOf, type CaseBundle } from "./case.server";
 import { presentDiagnosis } from "./present-diagnosis";
 import { loadKnowledge, outcomeCounts } from "./knowledge.server";
+
+// The model depends on the knowledge base, the vehicle's facts, the labour rate and the outcome
+// counts; everything else is the case's evidence. Vehicles of the same kind share a compiled model,
+// so a re-rank only redoes the arithmetic. Bounded; the oldest entry goes first.
+const CACHE_SIZE = 200;
+const compiled = new Map<string, { model: Model; compiled: CompiledModel }>();
 
 /** The likely causes, check plan and next-step what-if for a case, as the member may act on it. */
 export async function diagnoseCase(db: Db, member: Pick<Member, "role" | "skill" | "workshopId">, bundle: CaseBundle) {
@@ -12,10 +18,19 @@ export async function diagnoseCase(db: Db, member: Pick<Member, "role" | "skill"
     loadKnowledge(db, bundle.workshop.id, bundle.workshop.kbVersion),
     outcomeCounts(db, bundle.workshop.id, bundle.vehicle.fuelType),
   ]);
-  const model = buildModel(kb, vehicleFacts({ ...bundle.vehicle, mileageKm: bundle.mileageKm }), bundle.workshop.labourRatePerHour, outcomes);
+  const facts = vehicleFacts({ ...bundle.vehicle, mileageKm: bundle.mileageKm });
+  const key = JSON.stringify([bundle.workshop.id, kb.kbVersion, facts, bundle.workshop.labourRatePerHour, outcomes]);
+  let entry = compiled.get(key);
+  if (!entry) {
+    const model = buildModel(kb, facts, bundle.workshop.labourRatePerHour, outcomes);
+    entry = { model, compiled: compileModel(model) };
+    if (compiled.size >= CACHE_SIZE) compiled.delete(compiled.keys().next().value!);
+    compiled.set(key, entry);
+  }
+  const { model } = entry;
   const evidence = evidenceOf(bundle);
   // An apprentice's plan holds only what they may do; everyone else sees every check.
   const maxSkill: Skill = member.role === "apprentice" ? "apprentice" : "senior";
-  const { ranking, plan } = diagnose(model, evidence, { maxSkill });
+  const { ranking, plan } = diagnose(entry.compiled, evidence, { maxSkill });
   return { ...presentDiagnosis(kb, ranking, plan), model, evidence };
 }

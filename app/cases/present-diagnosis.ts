@@ -7,6 +7,8 @@ const WHY_CAUSES = 10; // causes whose evidence is listed
 const WHY_ITEMS = 8; // pieces of evidence per cause
 const WHY_MIN = 0.01; // |log likelihood ratio| below this moves nothing visible
 const DETAILED_STEPS = 12;
+const SENT_CAUSES = 30; // the screen shows five and folds the rest; past thirty the shares round to 0%
+const SENT_STEPS = 30;
 
 export type ShownCause = { id: string; name: string; probability: number; priority: string | null; why: { label: string; weight: number }[] };
 
@@ -20,7 +22,7 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
   };
   // The "why" is read for the causes a person looks at: the top ones, their strongest few pieces of
   // evidence. All of it for every cause would be causes × evidence numbers on every re-rank.
-  const causes: ShownCause[] = ranking.causes.map((c, i) => ({
+  const causes: ShownCause[] = ranking.causes.slice(0, SENT_CAUSES).map((c, i) => ({
     id: c.id,
     name: cause.get(c.id)?.name ?? c.id,
     probability: c.probability,
@@ -48,7 +50,8 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
     unlisted: ranking.unlisted,
     nodes: ranking.nodes,
     plan: {
-      steps: plan.steps.map(step),
+      steps: plan.steps.slice(0, SENT_STEPS).map(step),
+      moreSteps: Math.max(0, plan.steps.length - SENT_STEPS),
       aboveSkill: plan.aboveSkill.map(step),
       expectedCost: plan.expectedCost,
       cheapestFirstExpectedCost: plan.cheapestFirstExpectedCost,

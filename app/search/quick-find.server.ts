@@ -4,10 +4,18 @@ import { cases, owners, vehicles } from "~/db/schema";
 import { loadKnowledge } from "~/cases/knowledge.server";
 import { caseEntry, entriesFromKnowledgeBase, getIndex, quickFindKey, vehicleEntry, type Entry, type QuickFindIndex } from "~/quick-find";
 
+const entryCache = new Map<string, Entry[]>();
+
 /** The knowledge-base entries, built once per workshop and knowledge-base version. */
 export async function knowledgeEntries(db: Db, workshopId: string, kbVersion: number): Promise<Entry[]> {
+  const key = `${workshopId}#${kbVersion}`;
+  const hit = entryCache.get(key);
+  if (hit) return hit;
   const kb = await loadKnowledge(db, workshopId, kbVersion);
-  return entriesFromKnowledgeBase({ symptoms: kb.symptoms, causes: kb.causes, checks: kb.checks });
+  const entries = entriesFromKnowledgeBase({ symptoms: kb.symptoms, causes: kb.causes, checks: kb.checks });
+  for (const old of entryCache.keys()) if (old.startsWith(`${workshopId}#`)) entryCache.delete(old);
+  entryCache.set(key, entries);
+  return entries;
 }
 
 /** Vehicles and the latest cases: they change all day, so they are read fresh (one query each). */

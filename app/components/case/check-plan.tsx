@@ -77,7 +77,7 @@ export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagn
       {later.length ? (
         <details className="mt-3">
           <summary className="min-h-tap cursor-pointer content-center text-graphite-700">
-            {later.length} more checks, unlikely to find it now
+            {later.length + plan.moreSteps} more checks, unlikely to find it now
           </summary>
           <ul className="mt-1 grid gap-1 text-sm text-graphite-700">
             {later.map((s) => (
@@ -86,6 +86,7 @@ export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagn
                 <span className="tabular">{formatPercent(s.pFind, 1)} · {formatMoney(s.cost, currency)}</span>
               </li>
             ))}
+            {plan.moreSteps ? <li>… and {plan.moreSteps} more with almost no chance of finding it.</li> : null}
           </ul>
         </details>
       ) : null}

@@ -26,9 +26,12 @@ export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlis
       {rest.length ? (
         <details className="mt-3">
           <summary className="min-h-tap cursor-pointer content-center text-graphite-700">{rest.length} less likely causes</summary>
-          <ol className="mt-2 grid gap-2">
-            {rest.map((c, i) => (
-              <CauseRow key={c.id} cause={c} rank={SHOWN + i + 1} moved={moved.has(c.id)} open={false} />
+          <ol className="mt-2 grid gap-1 text-graphite-700" start={SHOWN + 1}>
+            {rest.map((c) => (
+              <li key={c.id} className="flex justify-between gap-3">
+                <span>{c.name}</span>
+                <span className="tabular">{formatPercent(c.probability, 1)}</span>
+              </li>
             ))}
           </ol>
         </details>
