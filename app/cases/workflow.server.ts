@@ -19,7 +19,8 @@ async function versionedUpdate(db: Pick<Db, "update" | "select">, c: CaseBundle,
     .returning({ version: cases.version });
   if (updated.length === 0) {
     const [now] = await db.select({ complaint: cases.complaint, state: cases.state, conclusionNotes: cases.conclusionNotes, version: cases.version }).from(cases).where(eq(cases.id, c.id));
-    refuse(409, "Someone else changed this case while you were editing. Here is what it says now; apply your change again if it still stands.", { current: now });
+    const says = now ? ` It is now ${now.state === "open" ? "open" : now.state.replace("_", " ")}; the complaint reads “${now.complaint}”${now.conclusionNotes ? ` and the conclusion “${now.conclusionNotes}”` : ""}.` : "";
+    refuse(409, `Someone else changed this case while you were editing.${says} Apply your change again if it still stands.`, { current: now });
   }
   return updated[0].version;
 }

@@ -145,3 +145,29 @@ describe("a senior signs off an apprentice's conclusion", () => {
     await page.close();
   });
 });
+
+describe("two people edit one case", () => {
+  it("tells the second writer of the complaint what changed, and the history shows who did what", async () => {
+    await browser.clearCookies();
+    const first = await browser.newPage();
+    await signInAs(first.page, "dana-reyes");
+    const second = await browser.newPage(); // same browser profile: same advisor, second tab
+    await first.page.goto(caseUrl("b2"));
+    await second.page.goto(caseUrl("b2"));
+    for (const { page } of [first, second]) await page.getByText("Edit the complaint").click();
+
+    await first.page.getByLabel("In the owner's words").fill("Squeal when braking, worst in the morning.");
+    await first.page.getByRole("button", { name: "Save complaint" }).click();
+    await first.page.getByRole("status").filter({ hasText: "Complaint updated." }).waitFor();
+
+    await second.page.getByLabel("In the owner's words").fill("Squeal when braking.");
+    await second.page.getByRole("button", { name: "Save complaint" }).click();
+    await second.page.getByRole("alert").filter({ hasText: "Someone else changed this case" }).filter({ hasText: "worst in the morning" }).waitFor();
+
+    await first.page.reload();
+    await first.page.getByText("History").click();
+    await first.page.getByRole("list", { name: "Case history" }).getByText("edited the complaint").waitFor();
+    await first.page.close();
+    await second.page.close();
+  });
+});

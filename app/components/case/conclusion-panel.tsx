@@ -10,17 +10,15 @@ type Props = {
   mayConclude: boolean;
   maySignOff: boolean;
   isApprentice: boolean;
-  error?: string | null;
 };
 
 const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base";
 
 /** Concluding, and a senior's sign-off of an apprentice's conclusion. */
-export function ConclusionPanel({ state, version, causes, conclusion, mayConclude, maySignOff, isApprentice, error }: Props) {
+export function ConclusionPanel({ state, version, causes, conclusion, mayConclude, maySignOff, isApprentice }: Props) {
   return (
     <section aria-labelledby="conclusion" className="rounded-card border border-rule bg-card p-4">
       <h2 id="conclusion" className="text-xl font-semibold">Conclusion</h2>
-      {error ? <p role="alert" className="mt-2 rounded-lg border-2 border-stop p-3">{error}</p> : null}
       {conclusion.cause ? (
         <p className="mt-2">
           Confirmed cause: <strong>{conclusion.cause}</strong>

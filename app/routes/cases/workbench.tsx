@@ -1,9 +1,11 @@
 import { useQuery } from "@tanstack/react-query";
-import { data, Link, useRevalidator } from "react-router";
+import { data, Form, Link, useRevalidator } from "react-router";
 import { useEffect } from "react";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { can } from "~/auth/permissions";
 import { loadCase } from "~/cases/case.server";
+import { caseHistory } from "~/cases/history.server";
+import { CaseHistory } from "~/components/case/case-history";
 import { diagnoseCase } from "~/cases/diagnosis.server";
 import { assertIntentAllowed, runWorkbenchForm, WorkbenchForm } from "~/cases/workbench-actions.server";
 import { ApprenticeMode } from "~/components/case/apprentice-mode";
@@ -29,13 +31,15 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const { model: _m, evidence: _e, ...diagnosis } = await diagnoseCase(db, member, bundle);
   const entries = (await knowledgeEntries(db, member.workshopId, bundle.workshop.kbVersion)).filter((e) => e.kind === "symptom");
   // The browser keeps one built index per knowledge-base version instead of rebuilding on every revalidation.
+  const history = await caseHistory(db, member.workshopId, bundle.id);
   const quickFindCacheKey = quickFindKey(member.workshopId, bundle.workshop.kbVersion, "case-symptoms");
   const canWork = bundle.state === "open" && (can(member.role, "case:work") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId));
   return {
     view: { case: bundle, diagnosis } satisfies CaseView as CaseView,
     entries,
     quickFindCacheKey,
-    me: { role: member.role, canWork, mayConclude: can(member.role, "case:conclude") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId), maySignOff: can(member.role, "case:signoff") },
+    history,
+    me: { role: member.role, canWork, mayConclude: can(member.role, "case:conclude") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId), maySignOff: can(member.role, "case:signoff"), mayEditComplaint: can(member.role, "case:open") && bundle.state !== "closed" },
   };
 }
 
@@ -88,9 +92,24 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
             {c.mileageKm != null ? <span className="tabular"> · {c.mileageKm.toLocaleString("en-GB")} km</span> : null} · owner {c.owner.name}
           </p>
           <blockquote className="mt-2 border-l-4 border-uv-500 pl-3 text-lg">“{c.complaint}”</blockquote>
+          {me.mayEditComplaint ? (
+            <details className="mt-1">
+              <summary className="cursor-pointer text-sm text-graphite-600">Edit the complaint</summary>
+              <Form method="post" className="mt-1 flex flex-wrap items-end gap-2">
+                <input type="hidden" name="intent" value="complaint" />
+                <input type="hidden" name="version" value={c.version} />
+                <label className="flex flex-col text-sm font-medium">
+                  In the owner's words
+                  <textarea name="complaint" defaultValue={c.complaint} rows={2} className="mt-1 w-96 max-w-full rounded-lg border border-rule bg-card p-2 text-base" />
+                </label>
+                <button type="submit" className="min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper">Save complaint</button>
+              </Form>
+            </details>
+          ) : null}
         </div>
         {me.canWork ? <CaseQuickFind entries={entries} cacheKey={quickFindCacheKey} recent={c.observations.map((o) => o.symptomId)} onAdd={(e, present) => evidence.mutate({ kind: "observe", symptomId: e.id, name: e.title, present })} /> : null}
       </header>
+      {actionData?.error ? <p role="alert" className="rounded-lg border-2 border-stop bg-card p-3">{actionData.error}</p> : null}
       {actionData?.notice ? <p role="status" className="rounded-lg border border-sound bg-card p-3">{actionData.notice}</p> : null}
       {revalidator.state === "loading" ? <p className="sr-only">Updating…</p> : null}
       <div className="grid gap-4 lg:grid-cols-[1fr_1.1fr]">
@@ -112,8 +131,8 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
             mayConclude={me.mayConclude}
             maySignOff={me.maySignOff}
             isApprentice={me.role === "apprentice"}
-            error={actionData?.error}
           />
+          <CaseHistory entries={loaderData.history} />
         </div>
       </div>
     </div>
