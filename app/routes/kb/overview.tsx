@@ -2,6 +2,7 @@ import { memberContext } from "~/auth/guards.server";
 import { PriorityMark } from "~/components/priority";
 import { dbContext } from "~/context";
 import { kbOverview } from "~/kb/overview.server";
+import { SYSTEM_LABEL } from "~/quick-find";
 import type { Route } from "./+types/overview";
 
 export async function loader({ context }: Route.LoaderArgs) {
@@ -13,16 +14,6 @@ export function meta() {
   return [{ title: "Knowledge base — Ramplight" }];
 }
 
-const SYSTEM_LABEL: Record<string, string> = {
-  brakes: "Brakes",
-  suspension_steering: "Suspension and steering",
-  wheels_tyres: "Wheels and tyres",
-  driveline: "Driveline",
-  engine_fuel_emissions: "Engine, fuelling and emissions",
-  cooling: "Cooling",
-  electrical: "Electrical",
-  exhaust: "Exhaust",
-};
 
 export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
   const { counts, tree, symptoms } = loaderData;
