@@ -50,7 +50,11 @@ pick_dir() {
   fi
 }
 
-is_running() { as_pg "$bindir/pg_ctl" -D "$datadir" status >/dev/null 2>&1; }
+# Running means answering on our port: after a crash the pid file can name a process that is gone
+# (or a zombie nobody reaped), which pg_ctl alone would still call running.
+is_running() {
+  as_pg "$bindir/pg_ctl" -D "$datadir" status >/dev/null 2>&1 && as_pg "$bindir/pg_isready" -q -h 127.0.0.1 -p "$port" -t 3
+}
 
 cmd_start() {
   ensure_server; pick_dir
