@@ -50,7 +50,7 @@ node_modules/.bin/tsx tests/setup/build-template.ts || exit 1
 echo "== vitest: unit, dom, integration, e2e"
 report=".tmp/vitest-report.json"
 mkdir -p .tmp
-node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$report" "$@" || status=1
+node_modules/.bin/vitest run --config tests/vitest.config.ts --reporter=default --reporter=json --outputFile.json="$report" "$@" || status=1
 
 node_modules/.bin/tsx scripts/test-summary.ts "$report" "$typecheck_failed" "$drift_failed" || status=1
 exit $status

@@ -2,9 +2,12 @@ import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
 
 // Separate from vite.config.ts: the React Router plugin is for the app build, not for tests.
-const alias = { "~": fileURLToPath(new URL("./app", import.meta.url)) };
+// It lives in tests/ to keep the top level of the repo to the app's own files; paths are from the root.
+const root = fileURLToPath(new URL("..", import.meta.url));
+const alias = { "~": fileURLToPath(new URL("../app", import.meta.url)) };
 
 export default defineConfig({
+  root,
   resolve: { alias },
   test: {
     projects: [
