@@ -18,6 +18,7 @@ export default [
     route("settings/audit", "routes/settings/audit.tsx"),
   ]),
   route("api/search", "routes/api/search.ts"),
+  route("api/quick-find", "routes/api/quick-find.ts"),
   route("api/what-if", "routes/api/what-if.ts"),
   route("api/cases/:caseId", "routes/api/case.ts"),
   route("api/cases/:caseId/diagnosis", "routes/api/diagnosis.ts"),

@@ -43,6 +43,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
     POST: { conclude: "case:conclude", signoff: "case:signoff", "send-back": "case:signoff", "ask-senior": "case:ask-senior", complaint: "case:open" },
   },
   "routes/api/search.ts": { path: "/api/search?q=brake", api: true, GET: "case:read" },
+  "routes/api/quick-find.ts": { path: "/api/quick-find?kinds=symptom", api: true, GET: "case:read" },
   "routes/api/what-if.ts": { path: "/api/what-if", api: true, POST: "case:read" },
   "routes/api/case.ts": { path: "/api/cases/{case}", api: true, record: true, GET: "case:read" },
   "routes/api/diagnosis.ts": { path: "/api/cases/{case}/diagnosis", api: true, record: true, GET: "case:read" },

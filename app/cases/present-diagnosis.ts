@@ -8,7 +8,7 @@ const WHY_ITEMS = 8; // pieces of evidence per cause
 const WHY_MIN = 0.01; // |log likelihood ratio| below this moves nothing visible
 const DETAILED_STEPS = 12;
 const SENT_CAUSES = 30; // the screen shows five and folds the rest; past thirty the shares round to 0%
-const SENT_STEPS = 30;
+const SENT_STEPS = 20;
 
 export type ShownCause = { id: string; name: string; probability: number; priority: string | null; why: { label: string; weight: number }[] };
 
@@ -45,8 +45,11 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
     return { ...s, name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: k?.tools ?? [], access: k?.access ?? [], cautions: k?.cautions ?? [], instructions: k?.instructions ?? [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, rule: k?.rule ?? null, failMeans: k?.failMeans ?? "" };
   };
   const whatIfFor = (w: WhatIf | null) => (w ? { checkId: w.checkId, pFail: w.pFail, ifFail: outcome(w.ifFail), ifPass: outcome(w.ifPass) } : null);
+  const rest = ranking.causes.slice(SENT_CAUSES);
   return {
     causes,
+    // What the causes not sent add up to, so the shares on screen still account for everything.
+    otherCauses: { count: rest.length, probability: rest.reduce((sum, c) => sum + c.probability, 0) },
     unlisted: ranking.unlisted,
     nodes: ranking.nodes,
     plan: {

@@ -60,7 +60,8 @@ describe("sign-in round trip against the fake provider", () => {
     await page.getByLabel("Labour rate per hour").fill("72.50");
     await page.getByRole("button", { name: "Create the workshop" }).click();
     await page.waitForURL(`${baseUrl()}/settings`);
-    await expect(page.getByText("Newcomer Test Bay").first().isVisible()).resolves.toBe(true);
+    await page.getByRole("heading", { level: 1, name: "Workshop settings" }).waitFor();
+    await expect(page.getByLabel("Name", { exact: true }).inputValue()).resolves.toBe("Newcomer Test Bay");
     await page.getByRole("navigation", { name: "Areas" }).getByRole("link", { name: "Knowledge base" }).click();
     await page.waitForURL(`${baseUrl()}/kb`);
     await page.getByRole("heading", { level: 1, name: "Knowledge base" }).waitFor();

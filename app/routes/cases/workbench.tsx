@@ -20,7 +20,6 @@ import { STATE_LABEL } from "~/components/format";
 import { dbContext } from "~/context";
 import { refusalMessage } from "~/http.server";
 import { quickFindKey } from "~/quick-find";
-import { knowledgeEntries } from "~/search/quick-find.server";
 import { isRouteErrorResponse } from "react-router";
 import type { Route } from "./+types/workbench";
 
@@ -29,14 +28,12 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const db = context.get(dbContext);
   const bundle = await loadCase(db, member, params.caseId);
   const { model: _m, evidence: _e, ...diagnosis } = await diagnoseCase(db, member, bundle);
-  const entries = (await knowledgeEntries(db, member.workshopId, bundle.workshop.kbVersion)).filter((e) => e.kind === "symptom");
   // The browser keeps one built index per knowledge-base version instead of rebuilding on every revalidation.
-  const history = await caseHistory(db, member.workshopId, bundle.id);
+  const history = await caseHistory(db, member.workshopId, bundle.id, 30);
   const quickFindCacheKey = quickFindKey(member.workshopId, bundle.workshop.kbVersion, "case-symptoms");
   const canWork = bundle.state === "open" && (can(member.role, "case:work") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId));
   return {
     view: { case: bundle, diagnosis } satisfies CaseView as CaseView,
-    entries,
     quickFindCacheKey,
     history,
     me: { role: member.role, canWork, mayConclude: can(member.role, "case:conclude") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId), maySignOff: can(member.role, "case:signoff"), mayEditComplaint: can(member.role, "case:open") && bundle.state !== "closed" },
@@ -66,7 +63,7 @@ export function meta({ loaderData }: Route.MetaArgs) {
 }
 
 export default function Workbench({ loaderData, actionData }: Route.ComponentProps) {
-  const { me, entries, quickFindCacheKey } = loaderData;
+  const { me, quickFindCacheKey } = loaderData;
   const initial = loaderData.view;
   const id = initial.case.id;
   const query = useQuery({ ...caseQuery(id), initialData: initial });
@@ -107,7 +104,7 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
             </details>
           ) : null}
         </div>
-        {me.canWork ? <CaseQuickFind entries={entries} cacheKey={quickFindCacheKey} recent={c.observations.map((o) => o.symptomId)} onAdd={(e, present) => evidence.mutate({ kind: "observe", symptomId: e.id, name: e.title, present })} /> : null}
+        {me.canWork ? <CaseQuickFind cacheKey={quickFindCacheKey} recent={c.observations.map((o) => o.symptomId)} onAdd={(e, present) => evidence.mutate({ kind: "observe", symptomId: e.id, name: e.title, present })} /> : null}
       </header>
       {actionData?.error ? <p role="alert" className="rounded-lg border-2 border-stop bg-card p-3">{actionData.error}</p> : null}
       {actionData?.notice ? <p role="status" className="rounded-lg border border-sound bg-card p-3">{actionData.notice}</p> : null}

@@ -28,10 +28,10 @@ describe("GET /api/cases/:caseId", () => {
     expect(c).toMatchObject({ id: caseId("b1"), number: 1041, state: "open" });
     expect(c.observations.map((o) => [o.symptomId, o.present, o.source])).toEqual([[symptomId("vibration_braking"), true, "owner"]]);
     expect(c.findings).toEqual([]);
-    const d = a.body.diagnosis as { causes: { id: string; probability: number }[]; unlisted: number; plan: { steps: unknown[] } };
+    const d = a.body.diagnosis as { causes: { id: string; probability: number }[]; otherCauses: { count: number; probability: number }; unlisted: number; plan: { steps: unknown[] } };
     expect(d.causes.length).toBeGreaterThan(0);
     // A posterior over leaves plus "not in the knowledge base" sums to 1 (probability axiom).
-    expect(d.causes.reduce((s, x) => s + x.probability, 0) + d.unlisted).toBeCloseTo(1, 9);
+    expect(d.causes.reduce((s, x) => s + x.probability, 0) + d.otherCauses.probability + d.unlisted).toBeCloseTo(1, 9);
     expect(d.plan.steps.length).toBeGreaterThan(0);
   });
 
