@@ -5,12 +5,21 @@ export const STATE_LABEL: Record<string, string> = {
   closed: "Closed",
 };
 
+// Building an Intl formatter costs far more than using one: keep one per locale and currency.
+const money = new Map<string, Intl.NumberFormat>();
+const dates = new Map<string, Intl.DateTimeFormat>();
+
 export function formatMoney(amount: number, currency: string, locale = "en-GB") {
-  return new Intl.NumberFormat(locale, { style: "currency", currency }).format(amount);
+  const key = `${locale}|${currency}`;
+  let f = money.get(key);
+  if (!f) money.set(key, (f = new Intl.NumberFormat(locale, { style: "currency", currency })));
+  return f.format(amount);
 }
 
 export function formatDate(value: string | Date, locale = "en-GB") {
-  return new Intl.DateTimeFormat(locale, { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" }).format(new Date(value));
+  let f = dates.get(locale);
+  if (!f) dates.set(locale, (f = new Intl.DateTimeFormat(locale, { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", timeZone: "UTC" })));
+  return f.format(new Date(value));
 }
 
 export const formatPercent = (p: number, digits = 0) => `${(p * 100).toFixed(digits)}%`;
