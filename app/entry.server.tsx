@@ -9,6 +9,10 @@ import { NonceProvider } from "./components/nonce";
 import { env, isSecure } from "./env.server";
 import { securityHeaders } from "./security-headers.server";
 
+// Validate the environment as the server loads this module, so a missing secret stops the start
+// with a clear message instead of failing the first request.
+env();
+
 export const streamTimeout = 5_000;
 
 export const handleDataRequest: HandleDataRequestFunction = (response) => {

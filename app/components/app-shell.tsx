@@ -1,6 +1,7 @@
 import { Form, NavLink } from "react-router";
 import type { Permission } from "~/auth/permissions";
 import { Wordmark } from "./brand";
+import { GlobalQuickFind } from "./global-quick-find";
 
 type Area = { to: string; label: string; needs: Permission };
 // The areas of the workbench; an area a role cannot use is not shown at all.
@@ -42,6 +43,7 @@ export function AppShell({
             ))}
           </nav>
           <div className="ml-auto flex items-center gap-3">
+            {permissions.includes("case:read") ? <GlobalQuickFind /> : null}
             <p className="text-right text-sm leading-tight">
               <span className="block font-semibold">{member.name}</span>
               <span className="text-graphite-600">

@@ -171,3 +171,20 @@ describe("two people edit one case", () => {
     await second.page.close();
   });
 });
+
+describe("Quick find outside a case", () => {
+  it("jumps from the board to a case by its number, keyboard only", async () => {
+    await browser.clearCookies();
+    const { page, errors } = await browser.newPage();
+    await signInAs(page, "tomas-varga");
+    await page.getByRole("heading", { level: 1, name: "Board" }).waitFor();
+    await page.keyboard.press("Control+k");
+    await page.keyboard.type("#1041");
+    await page.getByRole("option").first().filter({ hasText: "1041" }).waitFor();
+    await page.keyboard.press("Enter");
+    await page.waitForURL(caseUrl("b1"));
+    await page.getByRole("heading", { name: "Likely causes" }).waitFor();
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+});

@@ -23,6 +23,9 @@ import { quickFindKey } from "~/quick-find";
 import { isRouteErrorResponse } from "react-router";
 import type { Route } from "./+types/workbench";
 
+// This page's Quick find turns symptoms into evidence; the shell's general one steps aside.
+export const handle = { quickFind: "own" };
+
 export async function loader({ params, context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "case:read");
   const db = context.get(dbContext);
@@ -30,7 +33,7 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const { model: _m, evidence: _e, ...diagnosis } = await diagnoseCase(db, member, bundle);
   // The browser keeps one built index per knowledge-base version instead of rebuilding on every revalidation.
   const history = await caseHistory(db, member.workshopId, bundle.id, 30);
-  const quickFindCacheKey = quickFindKey(member.workshopId, bundle.workshop.kbVersion, "case-symptoms");
+  const quickFindCacheKey = quickFindKey(member.workshopId, `${bundle.workshop.kbVersion}-${bundle.id}`, "case");
   const canWork = bundle.state === "open" && (can(member.role, "case:work") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId));
   return {
     view: { case: bundle, diagnosis } satisfies CaseView as CaseView,

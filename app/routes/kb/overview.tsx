@@ -48,7 +48,7 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
                     <p className="font-medium">{comp.name}</p>
                     <ul className="ml-4 grid gap-1">
                       {childrenOf(comp.id).map((fm) => (
-                        <li key={fm.id} className="flex items-center justify-between gap-2 text-graphite-800">
+                        <li key={fm.id} id={`cause-${fm.id}`} className="flex items-center justify-between gap-2 text-graphite-800">
                           <span>{fm.name}</span>
                           {fm.priority ? <PriorityMark priority={fm.priority} /> : null}
                         </li>
@@ -64,7 +64,7 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
           <h2 id="symptoms" className="text-xl font-semibold">Symptoms</h2>
           <ul className="mt-3 grid gap-2">
             {symptoms.map((s) => (
-              <li key={s.id} className="rounded-lg border border-rule bg-card p-3">
+              <li key={s.id} id={`symptom-${s.id}`} className="rounded-lg border border-rule bg-card p-3">
                 <p className="font-medium">{s.name}</p>
                 {s.synonyms.length ? <p className="text-sm text-graphite-600">Also: {s.synonyms.join(", ")}</p> : null}
               </li>
