@@ -1,6 +1,17 @@
-import { Form } from "react-router";
+import { Form, redirect } from "react-router";
+import { getAccount } from "~/auth/guards.server";
+import { ROLE_HOME } from "~/auth/permissions";
+import { dbContext } from "~/context";
+import type { Route } from "./+types/landing";
 import { Wordmark } from "~/components/brand";
 import { PriorityMark } from "~/components/priority";
+
+// A signed-in member goes straight to where their day starts.
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const account = await getAccount(request, context.get(dbContext));
+  if (account?.role && account.status === "active") throw redirect(ROLE_HOME[account.role]);
+  return null;
+}
 
 export function meta() {
   return [

@@ -117,7 +117,8 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
           <LikelyCauses causes={d.causes} unlisted={d.unlisted} />
           <EvidenceList c={c} canWork={me.canWork} remove={(kind, itemId) => evidence.mutate({ kind, id: itemId })} />
         </div>
-        <div className="grid content-start gap-4">
+        {/* Under a car on a phone, the apprentice needs the next check before the statistics. */}
+        <div className={`grid content-start gap-4 ${me.role === "apprentice" ? "order-first lg:order-none" : ""}`}>
           {me.canWork && me.role === "apprentice" ? (
             <ApprenticeMode plan={d.plan} currency={c.workshop.currency} record={record} busy={evidence.isPending} error={error} needsSenior={c.needsSenior} />
           ) : me.canWork ? (
