@@ -3,6 +3,7 @@
 //   log odds(c | evidence) = log odds(c) before evidence + Σ contributions.
 import { describe, expect, it } from "vitest";
 import { rankCauses, type Evidence, type Model } from "~/reasoning";
+import { dentist } from "./reference/dentist";
 import { generateCase } from "./reference/generate";
 
 const logit = (p: number) => Math.log(p / (1 - p));
@@ -44,23 +45,6 @@ describe("contributions", () => {
 
   it("two causes: the contribution is the textbook likelihood ratio (dentist, Russell & Norvig ch. 13)", () => {
     // P(toothache|cavity) = .6, P(toothache|¬cavity) = .1 → log 6; catch .9 / .2 → log 4.5
-    const dentist: Model = {
-      causes: [
-        { id: "cavity", prior: 0.2 },
-        { id: "no-cavity", prior: 0.8 },
-      ],
-      symptoms: [
-        { id: "toothache", leak: 0.5 },
-        { id: "catch", leak: 0.5 },
-      ],
-      links: [
-        { symptomId: "toothache", causeId: "cavity", p: 0.6 },
-        { symptomId: "toothache", causeId: "no-cavity", p: 0.1 },
-        { symptomId: "catch", causeId: "cavity", p: 0.9 },
-        { symptomId: "catch", causeId: "no-cavity", p: 0.2 },
-      ],
-      checks: [],
-    };
     const e: Evidence = { observations: [{ symptomId: "toothache", present: true }, { symptomId: "catch", present: true }], findings: [] };
     const cavity = rankCauses(dentist, e, { unlistedPrior: 0 }).causes[0];
     expect(cavity.contributions).toEqual({ "symptom:toothache": expect.closeTo(Math.log(6), 12), "symptom:catch": expect.closeTo(Math.log(4.5), 12) });

@@ -3,6 +3,7 @@
 // A Modern Approach, ch. 13), so the textbook figures must come out to floating-point precision.
 import { describe, expect, it } from "vitest";
 import { rankCauses, type Model } from "~/reasoning";
+import { dentist } from "./reference/dentist";
 
 const prob = (r: ReturnType<typeof rankCauses>, id: string) => r.causes.find((c) => c.id === id)!.probability;
 
@@ -17,23 +18,6 @@ const prob = (r: ReturnType<typeof rankCauses>, id: string) => r.causes.find((c)
 //   P(catch | cavity)     = (.108+.072)/.2 = .9;  P(catch | ¬cavity)     = (.016+.144)/.8 = .2
 // The table makes toothache and catch independent given cavity (.108/.2 = .54 = .6 × .9;
 // .016/.8 = .02 = .1 × .2), which is the engine's assumption, so the answers are exact.
-const dentist: Model = {
-  causes: [
-    { id: "cavity", prior: 0.2 },
-    { id: "no-cavity", prior: 0.8 },
-  ],
-  symptoms: [
-    { id: "toothache", leak: 0.5 },
-    { id: "catch", leak: 0.5 },
-  ],
-  links: [
-    { symptomId: "toothache", causeId: "cavity", p: 0.6 },
-    { symptomId: "toothache", causeId: "no-cavity", p: 0.1 },
-    { symptomId: "catch", causeId: "cavity", p: 0.9 },
-    { symptomId: "catch", causeId: "no-cavity", p: 0.2 },
-  ],
-  checks: [],
-};
 const exact = { unlistedPrior: 0 };
 
 describe("Russell & Norvig ch. 13 dentist example", () => {
