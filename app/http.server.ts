@@ -4,6 +4,14 @@ export function httpError(status: number, message: string, extra: Record<string,
   return Response.json({ error: message, ...extra }, { status });
 }
 
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** A malformed id names nothing: answer 404 before PostgreSQL refuses the cast with a 500. */
+export function requireId(id: string, notFound: string): string {
+  if (!UUID.test(id)) refuse(404, notFound);
+  return id;
+}
+
 export function refuse(status: number, message: string, extra?: Record<string, unknown>): never {
   throw httpError(status, message, extra);
 }

@@ -6,9 +6,9 @@ import "./app.css";
 
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { useState } from "react";
-import { isRouteErrorResponse, Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
+import { Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
 import type { Route } from "./+types/root";
-import { ErrorPage } from "./components/error-page";
+import { RouteErrorPage } from "./components/error-page";
 import { useNonce } from "./components/nonce";
 import { dbContext } from "./context";
 import { serverDb } from "./db/pool.server";
@@ -52,7 +52,6 @@ export default function App() {
 }
 
 export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  if (isRouteErrorResponse(error)) return <ErrorPage status={error.status} message={typeof error.data === "string" ? error.data : undefined} />;
   if (import.meta.env.DEV && error instanceof Error) console.error(error);
-  return <ErrorPage status={500} />;
+  return <RouteErrorPage error={error} />;
 }

@@ -3,6 +3,7 @@ import { audit } from "~/audit.server";
 import type { Db } from "~/db/client.server";
 import { identities, invitations, members, users, workshops } from "~/db/schema";
 import type { ProviderProfile } from "./github.server";
+import { skillForRole } from "./permissions";
 
 /**
  * Finds the user behind a provider identity, creating it on first sign-in, and accepts a
@@ -41,8 +42,7 @@ export async function signInFromProfile(db: Db, profile: ProviderProfile, now = 
         .orderBy(invitations.createdAt)
         .limit(1);
       if (invite) {
-        const skill = invite.role === "apprentice" ? "apprentice" : invite.role === "senior" ? "senior" : "technician";
-        await tx.insert(members).values({ workshopId: invite.workshopId, userId, role: invite.role, skill });
+        await tx.insert(members).values({ workshopId: invite.workshopId, userId, role: invite.role, skill: skillForRole(invite.role) });
         await tx.update(invitations).set({ acceptedAt: now }).where(eq(invitations.id, invite.id));
         await audit(tx, { workshopId: invite.workshopId, actorUserId: userId, action: "member.join", entity: "member", entityId: userId, after: { role: invite.role } });
       }

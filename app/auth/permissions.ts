@@ -38,6 +38,11 @@ export function can(role: Role, permission: Permission): boolean {
   return ROLE_PERMISSIONS[role].includes(permission);
 }
 
+/** The skill level a new member of a role starts with; an admin or advisor counts as a technician. */
+export function skillForRole(role: Role): "apprentice" | "technician" | "senior" {
+  return role === "apprentice" ? "apprentice" : role === "senior" ? "senior" : "technician";
+}
+
 // Where each role lands after signing in: the screen its day starts on.
 export const ROLE_HOME: Record<Role, string> = {
   apprentice: "/board",

@@ -3,9 +3,8 @@ import { alias } from "drizzle-orm/pg-core";
 import type { Member } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
 import { cases, causes, checks, findings, members, observations, owners, symptoms, users, vehicles, workshops } from "~/db/schema";
-import { refuse } from "~/http.server";
+import { refuse, requireId } from "~/http.server";
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const assigned = alias(members, "assigned");
 const assignedUser = alias(users, "assigned_user");
 
@@ -15,7 +14,7 @@ const assignedUser = alias(users, "assigned_user");
  * another workshop is "not found", never "forbidden", so ids reveal nothing.
  */
 export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseId: string) {
-  if (!UUID.test(caseId)) refuse(404, "No such case in this workshop.");
+  requireId(caseId, "No such case in this workshop.");
   const [row] = await db
     .select({
       id: cases.id,

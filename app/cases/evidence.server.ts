@@ -4,12 +4,11 @@ import type { Member } from "~/auth/guards.server";
 import { can } from "~/auth/permissions";
 import type { Db } from "~/db/client.server";
 import { checks, findings, observations, symptoms } from "~/db/schema";
-import { refuse } from "~/http.server";
+import { refuse, requireId } from "~/http.server";
 import { evaluateRule, MeasureError } from "~/measure";
+import { SKILL_LEVELS } from "~/reasoning";
 import type { CaseBundle } from "./case.server";
 
-const SKILL_RANK = { apprentice: 0, technician: 1, senior: 2 } as const;
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Who may add evidence: technicians and seniors on any case, an apprentice on the cases given to them. */
 export function assertCanWork(member: Member, c: Pick<CaseBundle, "assignedMemberId" | "state">) {
@@ -36,7 +35,7 @@ export async function recordObservation(db: Db, member: Member, c: CaseBundle, i
 
 export async function removeObservation(db: Db, member: Member, c: CaseBundle, observationId: string) {
   assertCanWork(member, c);
-  if (!UUID.test(observationId)) refuse(404, "That observation is not on this case.");
+  requireId(observationId, "That observation is not on this case.");
   await db.transaction(async (tx) => {
     const gone = await tx.delete(observations).where(and(eq(observations.id, observationId), eq(observations.caseId, c.id), eq(observations.workshopId, member.workshopId))).returning();
     if (gone.length === 0) refuse(404, "That observation is not on this case.");
@@ -51,7 +50,7 @@ export async function recordFinding(db: Db, member: Member, c: CaseBundle, input
     .from(checks)
     .where(and(eq(checks.id, input.checkId), eq(checks.workshopId, member.workshopId)));
   if (!check) refuse(400, "That check is not in this workshop's knowledge base.");
-  if (member.role === "apprentice" && SKILL_RANK[check.skill] > SKILL_RANK[member.skill]) refuse(403, `“${check.name}” needs a ${check.skill}. Ask a senior.`);
+  if (member.role === "apprentice" && SKILL_LEVELS.indexOf(check.skill) > SKILL_LEVELS.indexOf(member.skill)) refuse(403, `“${check.name}” needs a ${check.skill}. Ask a senior.`);
   if (c.findings.some((f) => f.checkId === check.id)) refuse(409, `“${check.name}” is recorded on this case already. Remove that finding first to record it again.`);
 
   let result = input.result;
@@ -86,7 +85,7 @@ export async function recordFinding(db: Db, member: Member, c: CaseBundle, input
 
 export async function removeFinding(db: Db, member: Member, c: CaseBundle, findingId: string) {
   assertCanWork(member, c);
-  if (!UUID.test(findingId)) refuse(404, "That finding is not on this case.");
+  requireId(findingId, "That finding is not on this case.");
   await db.transaction(async (tx) => {
     const gone = await tx.delete(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, c.id), eq(findings.workshopId, member.workshopId))).returning();
     if (gone.length === 0) refuse(404, "That finding is not on this case.");

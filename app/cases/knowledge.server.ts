@@ -1,4 +1,4 @@
-import { and, count, eq, inArray, isNotNull } from "drizzle-orm";
+import { and, count, eq, isNotNull } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { cases, causes, checkLinks, checks, symptomLinks, symptoms, vehicles, workshops } from "~/db/schema";
 import type { Knowledge } from "./build-model";
@@ -56,7 +56,7 @@ export async function outcomeCounts(db: Db, workshopId: string, fuelType: string
     .select({ causeId: cases.conclusionCauseId, n: count() })
     .from(cases)
     .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
-    .where(and(eq(cases.workshopId, workshopId), inArray(cases.state, ["closed"]), isNotNull(cases.conclusionCauseId), eq(vehicles.fuelType, fuelType as "petrol")))
+    .where(and(eq(cases.workshopId, workshopId), eq(cases.state, "closed"), isNotNull(cases.conclusionCauseId), eq(vehicles.fuelType, fuelType as typeof vehicles.$inferSelect.fuelType)))
     .groupBy(cases.conclusionCauseId);
   return Object.fromEntries(rows.map((r) => [r.causeId!, r.n]));
 }

@@ -1,4 +1,4 @@
-import { Link } from "react-router";
+import { isRouteErrorResponse, Link } from "react-router";
 
 const COPY: Record<number, { title: string; body: string }> = {
   400: { title: "That request did not make sense", body: "Something in it was missing or malformed. Go back and check what you entered." },
@@ -25,4 +25,12 @@ export function ErrorPage({ status, message }: { status: number; message?: strin
       </div>
     </main>
   );
+}
+
+/** What every route's ErrorBoundary shows: the status, and the refusal's own words when it has them. */
+export function RouteErrorPage({ error }: { error: unknown }) {
+  if (!isRouteErrorResponse(error)) return <ErrorPage status={500} />;
+  const data = error.data as unknown;
+  const message = typeof data === "string" ? data : (data as { error?: string } | null)?.error;
+  return <ErrorPage status={error.status} message={message || undefined} />;
 }

@@ -4,9 +4,8 @@ import { causes, checkLinks, checks, symptomLinks, symptoms } from "~/db/schema"
 
 /** The knowledge base at a glance: counts, and the systems with their failure-mode counts. */
 export async function kbOverview(db: Db, workshopId: string) {
-  const [[s], [c], [k], [sl], [cl]] = await Promise.all([
-    db.select({ n: count() }).from(symptoms).where(eq(symptoms.workshopId, workshopId)),
-    db.select({ n: count() }).from(causes).where(eq(causes.workshopId, workshopId)),
+  // Symptoms and causes are listed in full anyway, so only checks and links need counting.
+  const [[k], [sl], [cl]] = await Promise.all([
     db.select({ n: count() }).from(checks).where(eq(checks.workshopId, workshopId)),
     db.select({ n: count() }).from(symptomLinks).where(eq(symptomLinks.workshopId, workshopId)),
     db.select({ n: count() }).from(checkLinks).where(eq(checkLinks.workshopId, workshopId)),
@@ -22,7 +21,7 @@ export async function kbOverview(db: Db, workshopId: string) {
     .where(eq(symptoms.workshopId, workshopId))
     .orderBy(asc(symptoms.system), asc(symptoms.name));
   return {
-    counts: { symptoms: s.n, causes: c.n, checks: k.n, symptomLinks: sl.n, checkLinks: cl.n },
+    counts: { symptoms: symptomList.length, causes: tree.length, checks: k.n, symptomLinks: sl.n, checkLinks: cl.n },
     tree,
     symptoms: symptomList,
   };

@@ -1,12 +1,12 @@
 import { and, desc, eq, isNull, ne, sql } from "drizzle-orm";
 import { audit } from "~/audit.server";
 import type { Member } from "~/auth/guards.server";
+import { skillForRole } from "~/auth/permissions";
 import type { Db } from "~/db/client.server";
 import { identities, invitations, members, users } from "~/db/schema";
 import type { Role } from "../../seeds/demo/people";
 
 const INVITE_DAYS = 14;
-const skillFor = (role: Role) => (role === "apprentice" ? "apprentice" : role === "senior" ? "senior" : "technician");
 
 export async function listMembers(db: Db, workshopId: string) {
   return db
@@ -59,7 +59,7 @@ export async function updateMember(db: Db, by: Member, memberId: string, change:
       if (n === 0) throw new Response("This is the workshop's only active admin. Make someone else admin first.", { status: 409 });
     }
     const next = { role: change.role ?? target.role, status: change.status ?? target.status };
-    await tx.update(members).set({ ...next, skill: change.role ? skillFor(change.role) : target.skill }).where(eq(members.id, memberId));
+    await tx.update(members).set({ ...next, skill: change.role ? skillForRole(change.role) : target.skill }).where(eq(members.id, memberId));
     await audit(tx, {
       workshopId: by.workshopId,
       actorUserId: by.userId,

@@ -2,9 +2,8 @@ import { Outlet } from "react-router";
 import { memberContext, requireMember } from "~/auth/guards.server";
 import { ROLE_PERMISSIONS } from "~/auth/permissions";
 import { AppShell } from "~/components/app-shell";
-import { ErrorPage } from "~/components/error-page";
+import { RouteErrorPage } from "~/components/error-page";
 import { dbContext } from "~/context";
-import { isRouteErrorResponse } from "react-router";
 import type { Route } from "./+types/layout";
 
 // One guard for the whole signed-in section: every route below gets the member from the context.
@@ -32,7 +31,5 @@ export default function SignedInLayout({ loaderData }: Route.ComponentProps) {
 }
 
 export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  const status = isRouteErrorResponse(error) ? error.status : 500;
-  const message = isRouteErrorResponse(error) && typeof error.data === "string" ? error.data : undefined;
-  return <ErrorPage status={status} message={message} />;
+  return <RouteErrorPage error={error} />;
 }

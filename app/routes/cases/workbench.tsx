@@ -1,5 +1,5 @@
 import { useQuery } from "@tanstack/react-query";
-import { data, Form, Link, useRevalidator } from "react-router";
+import { data, Form, Link } from "react-router";
 import { useEffect } from "react";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { can } from "~/auth/permissions";
@@ -15,12 +15,11 @@ import { ConclusionPanel } from "~/components/case/conclusion-panel";
 import { EvidenceList } from "~/components/case/evidence-list";
 import { LikelyCauses } from "~/components/case/likely-causes";
 import { CaseQuickFind } from "~/components/case/case-quick-find";
-import { ErrorPage } from "~/components/error-page";
+import { RouteErrorPage } from "~/components/error-page";
 import { STATE_LABEL } from "~/components/format";
 import { dbContext } from "~/context";
 import { refusalMessage } from "~/http.server";
 import { quickFindKey } from "~/quick-find";
-import { isRouteErrorResponse } from "react-router";
 import type { Route } from "./+types/workbench";
 
 // This page's Quick find turns symptoms into evidence; the shell's general one steps aside.
@@ -72,7 +71,6 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
   const query = useQuery({ ...caseQuery(id), initialData: initial });
   const view = query.data ?? initial;
   const evidence = useEvidence(id);
-  const revalidator = useRevalidator();
   // A form post (conclude, sign-off) changes the case: refresh the live copy from the new loader data.
   useEffect(() => {
     if (actionData?.notice) void query.refetch();
@@ -111,7 +109,6 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
       </header>
       {actionData?.error ? <p role="alert" className="rounded-lg border-2 border-stop bg-card p-3">{actionData.error}</p> : null}
       {actionData?.notice ? <p role="status" className="rounded-lg border border-sound bg-card p-3">{actionData.notice}</p> : null}
-      {revalidator.state === "loading" ? <p className="sr-only">Updating…</p> : null}
       <div className="grid gap-4 lg:grid-cols-[1fr_1.1fr]">
         <div className="grid content-start gap-4">
           <LikelyCauses causes={d.causes} unlisted={d.unlisted} />
@@ -141,6 +138,5 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
 }
 
 export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  if (isRouteErrorResponse(error)) return <ErrorPage status={error.status} message={typeof error.data === "string" ? error.data : (error.data as { error?: string })?.error} />;
-  return <ErrorPage status={500} />;
+  return <RouteErrorPage error={error} />;
 }

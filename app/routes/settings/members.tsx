@@ -2,6 +2,7 @@ import { data, Form, useNavigation } from "react-router";
 import { z } from "zod";
 import { type Member, memberContext, requirePermission } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
+import { refusalMessage, refuse } from "~/http.server";
 import { dbContext } from "~/context";
 import { env } from "~/env.server";
 import { sendMail } from "~/mail.server";
@@ -39,7 +40,8 @@ export async function action({ request, context }: Route.ActionArgs) {
     return await perform(db, member, parsed.data);
   } catch (error) {
     // Refusals of the server module (last admin, unknown member) are shown on the form, not as an error page.
-    if (error instanceof Response && error.status < 500) return data({ error: await error.text(), notice: null }, { status: error.status });
+    const refused = await refusalMessage(error);
+    if (refused) return data({ error: refused.message, notice: null }, { status: refused.status });
     throw error;
   }
 }
@@ -48,8 +50,8 @@ async function perform(db: Db, member: Member, input: z.infer<typeof ActionSchem
   switch (input.intent) {
     case "invite": {
       const isEmail = input.target.includes("@");
-      if (isEmail && !z.email().safeParse(input.target).success) throw new Response("That e-mail address does not look right", { status: 400 });
-      if (!isEmail && !LOGIN.test(input.target)) throw new Response("A GitHub login has letters, digits and dashes only", { status: 400 });
+      if (isEmail && !z.email().safeParse(input.target).success) refuse(400, "That e-mail address does not look right");
+      if (!isEmail && !LOGIN.test(input.target)) refuse(400, "A GitHub login has letters, digits and dashes only");
       await inviteMember(db, member, isEmail ? { email: input.target, role: input.role } : { githubLogin: input.target, role: input.role });
       const mailed = isEmail
         ? await sendMail({
