@@ -1,7 +1,8 @@
 import { and, eq, gt, isNull, or, sql } from "drizzle-orm";
 import { audit } from "~/audit.server";
 import type { Db } from "~/db/client.server";
-import { identities, invitations, members, users, workshops } from "~/db/schema";
+import { identities, invitations, members, sessions, users, workshops } from "~/db/schema";
+import { hashToken } from "./session.server";
 import type { ProviderProfile } from "./github.server";
 import { skillForRole } from "./permissions";
 
@@ -51,25 +52,50 @@ export async function signInFromProfile(db: Db, profile: ProviderProfile, now = 
   });
 }
 
+const accountFields = {
+  userId: users.id,
+  name: users.name,
+  email: users.email,
+  memberId: members.id,
+  role: members.role,
+  skill: members.skill,
+  status: members.status,
+  workshopId: workshops.id,
+  workshopName: workshops.name,
+  workshopSlug: workshops.slug,
+};
+
 /** The signed-in person and, when they have one, their workshop membership. */
 export async function loadAccount(db: Db, userId: string) {
   const [row] = await db
-    .select({
-      userId: users.id,
-      name: users.name,
-      email: users.email,
-      memberId: members.id,
-      role: members.role,
-      skill: members.skill,
-      status: members.status,
-      workshopId: workshops.id,
-      workshopName: workshops.name,
-      workshopSlug: workshops.slug,
-    })
+    .select(accountFields)
     .from(users)
     .leftJoin(members, eq(members.userId, users.id))
     .leftJoin(workshops, eq(workshops.id, members.workshopId))
     .where(eq(users.id, userId));
+  return row ?? null;
+}
+
+// Every signed-in request starts here, so it is one prepared query per database handle:
+// session, person and membership together.
+function sessionAccountQuery(db: Db) {
+  return db
+    .select(accountFields)
+    .from(sessions)
+    .innerJoin(users, eq(users.id, sessions.userId))
+    .leftJoin(members, eq(members.userId, users.id))
+    .leftJoin(workshops, eq(workshops.id, members.workshopId))
+    .where(and(eq(sessions.tokenHash, sql.placeholder("tokenHash")), gt(sessions.expiresAt, sql.placeholder("now"))))
+    .limit(1)
+    .prepare("session_account");
+}
+const sessionAccount = new WeakMap<Db, ReturnType<typeof sessionAccountQuery>>();
+
+/** The account behind an unexpired session token, or null. */
+export async function accountForSession(db: Db, token: string, now = new Date()) {
+  let query = sessionAccount.get(db);
+  if (!query) sessionAccount.set(db, (query = sessionAccountQuery(db)));
+  const [row] = await query.execute({ tokenHash: hashToken(token), now });
   return row ?? null;
 }
 

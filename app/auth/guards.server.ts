@@ -1,9 +1,9 @@
 import { createContext, redirect } from "react-router";
 import type { Db } from "~/db/client.server";
 import { env, isSecure } from "~/env.server";
-import { loadAccount, type Account } from "./accounts.server";
+import { accountForSession, type Account } from "./accounts.server";
 import { can, type Permission } from "./permissions";
-import { findSessionUser, readSessionToken } from "./session.server";
+import { readSessionToken } from "./session.server";
 import type { Role } from "../../seeds/demo/people";
 
 export type Member = Account & { memberId: string; workshopId: string; role: Role; skill: "apprentice" | "technician" | "senior"; workshopName: string };
@@ -14,8 +14,7 @@ export const memberContext = createContext<Member>();
 export async function getAccount(request: Request, db: Db): Promise<Account | null> {
   const token = readSessionToken(request, isSecure(env()));
   if (!token) return null;
-  const session = await findSessionUser(db, token);
-  return session ? loadAccount(db, session.userId) : null;
+  return accountForSession(db, token);
 }
 
 function signInRedirect(request: Request) {

@@ -1,21 +1,77 @@
-import { and, asc, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import type { Member } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
-import { cases, causes, checks, findings, members, observations, owners, symptoms, users, vehicles, workshops } from "~/db/schema";
+import { auditLog, cases, causes, checks, findings, members, observations, owners, symptoms, users, vehicles, workshops } from "~/db/schema";
 import { refuse, requireId } from "~/http.server";
 
 const assigned = alias(members, "assigned");
 const assignedUser = alias(users, "assigned_user");
+// Aliases for the outcome-count subquery, which reads other rows of the tables the case comes from.
+const closedCase = alias(cases, "closed_case");
+const closedVehicle = alias(vehicles, "closed_vehicle");
 
-/**
- * Everything a case screen shows, in three queries however many observations and findings there
- * are: the case with its vehicle, owner and workshop; its observations; its findings. A case of
- * another workshop is "not found", never "forbidden", so ids reveal nothing.
- */
-export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseId: string) {
-  requireId(caseId, "No such case in this workshop.");
-  const [row] = await db
+/** How many history rows a case screen shows; the full trail is in the audit log. */
+export const CASE_HISTORY_ROWS = 30;
+
+type Json<T> = T extends Date ? string : T extends object ? { [K in keyof T]: Json<T[K]> } : T;
+type ObservationRow = { id: string; symptomId: string; name: string; present: boolean; source: (typeof observations.$inferSelect)["source"]; note: string | null; recordedAt: Date; by: string | null };
+type FindingRow = { id: string; checkId: string; name: string; result: (typeof findings.$inferSelect)["result"]; reading: string | null; note: string | null; recordedAt: Date; by: string | null };
+type HistoryRow = { id: number; at: Date; action: string; after: unknown; actor: string | null };
+
+// The rows under a case come back as JSON arrays inside the case's own row: one round trip to
+// PostgreSQL however many observations and findings there are (each query costs more in the
+// driver and the loopback network than in the database). Column references go through the schema
+// so a rename breaks the build, not the page.
+const observationsJson = sql<Json<ObservationRow>[]>`coalesce((
+  select json_agg(json_build_object(
+    'id', ${observations.id}, 'symptomId', ${observations.symptomId}, 'name', ${symptoms.name}, 'present', ${observations.present},
+    'source', ${observations.source}, 'note', ${observations.note}, 'recordedAt', ${observations.recordedAt}, 'by', ${users.name}
+  ) order by ${observations.recordedAt}, ${observations.id})
+  from ${observations}
+  join ${symptoms} on ${symptoms.id} = ${observations.symptomId}
+  left join ${members} on ${members.id} = ${observations.recordedById}
+  left join ${users} on ${users.id} = ${members.userId}
+  where ${observations.caseId} = ${cases.id} and ${observations.workshopId} = ${cases.workshopId}
+), '[]'::json)`;
+
+const findingsJson = sql<Json<FindingRow>[]>`coalesce((
+  select json_agg(json_build_object(
+    'id', ${findings.id}, 'checkId', ${findings.checkId}, 'name', ${checks.name}, 'result', ${findings.result}, 'reading', ${findings.reading},
+    'note', ${findings.note}, 'recordedAt', ${findings.recordedAt}, 'by', ${users.name}
+  ) order by ${findings.recordedAt}, ${findings.id})
+  from ${findings}
+  join ${checks} on ${checks.id} = ${findings.checkId}
+  left join ${members} on ${members.id} = ${findings.recordedById}
+  left join ${users} on ${users.id} = ${members.userId}
+  where ${findings.caseId} = ${cases.id} and ${findings.workshopId} = ${cases.workshopId}
+), '[]'::json)`;
+
+// Newest first, as the history panel reads; the audit rows written with every change of the case.
+const historyJson = sql<Json<HistoryRow>[]>`coalesce((
+  select json_agg(h order by h."at" desc, h."id" desc) from (
+    select ${auditLog.id} as "id", ${auditLog.at} as "at", ${auditLog.action} as "action", ${auditLog.after} as "after", ${users.name} as "actor"
+    from ${auditLog} left join ${users} on ${users.id} = ${auditLog.actorUserId}
+    where ${auditLog.workshopId} = ${cases.workshopId} and ${auditLog.entity} = 'case' and ${auditLog.entityId} = ${cases.id}::text
+    order by ${auditLog.at} desc, ${auditLog.id} desc
+    limit ${sql.raw(String(CASE_HISTORY_ROWS))}
+  ) h
+), '[]'::json)`;
+
+// How often each cause was the confirmed one on this workshop's closed cases of the same fuel:
+// the priors learn from the workshop's own history (see docs/reasoning.md).
+const outcomesJson = sql<Record<string, number>>`coalesce((
+  select json_object_agg(o.cause_id, o.n) from (
+    select ${closedCase.conclusionCauseId} as cause_id, count(*)::int as n
+    from ${cases} ${sql.identifier("closed_case")} join ${vehicles} ${sql.identifier("closed_vehicle")} on ${closedVehicle.id} = ${closedCase.vehicleId}
+    where ${closedCase.workshopId} = ${cases.workshopId} and ${closedCase.state} = 'closed' and ${closedCase.conclusionCauseId} is not null
+      and ${closedVehicle.fuelType} = ${vehicles.fuelType}
+    group by ${closedCase.conclusionCauseId}
+  ) o
+), '{}'::json)`;
+
+function caseQuery(db: Db) {
+  return db
     .select({
       id: cases.id,
       number: cases.number,
@@ -36,6 +92,10 @@ export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseI
       vehicle: { id: vehicles.id, registration: vehicles.registration, vin: vehicles.vin, make: vehicles.make, model: vehicles.model, year: vehicles.year, engine: vehicles.engine, fuelType: vehicles.fuelType, drivetrain: vehicles.drivetrain },
       owner: { id: owners.id, name: owners.name, phone: owners.phone, email: owners.email },
       workshop: { id: workshops.id, kbVersion: workshops.kbVersion, labourRatePerHour: workshops.labourRatePerHour, currency: workshops.currency, units: workshops.units },
+      observations: observationsJson,
+      findings: findingsJson,
+      history: historyJson,
+      outcomes: outcomesJson,
     })
     .from(cases)
     .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
@@ -44,31 +104,42 @@ export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseI
     .leftJoin(causes, eq(causes.id, cases.conclusionCauseId))
     .leftJoin(assigned, eq(assigned.id, cases.assignedMemberId))
     .leftJoin(assignedUser, eq(assignedUser.id, assigned.userId))
-    .where(and(eq(cases.id, caseId), eq(cases.workshopId, member.workshopId)));
-  if (!row) refuse(404, "No such case in this workshop.");
+    .where(and(eq(cases.id, sql.placeholder("caseId")), eq(cases.workshopId, sql.placeholder("workshopId"))))
+    .prepare("load_case");
+}
 
-  const [obs, fnd] = await Promise.all([
-    db
-      .select({ id: observations.id, symptomId: observations.symptomId, name: symptoms.name, present: observations.present, source: observations.source, note: observations.note, recordedAt: observations.recordedAt, by: users.name })
-      .from(observations)
-      .innerJoin(symptoms, eq(symptoms.id, observations.symptomId))
-      .leftJoin(members, eq(members.id, observations.recordedById))
-      .leftJoin(users, eq(users.id, members.userId))
-      .where(and(eq(observations.caseId, caseId), eq(observations.workshopId, member.workshopId)))
-      .orderBy(asc(observations.recordedAt), asc(observations.id)),
-    db
-      .select({ id: findings.id, checkId: findings.checkId, name: checks.name, result: findings.result, reading: findings.reading, note: findings.note, recordedAt: findings.recordedAt, by: users.name })
-      .from(findings)
-      .innerJoin(checks, eq(checks.id, findings.checkId))
-      .leftJoin(members, eq(members.id, findings.recordedById))
-      .leftJoin(users, eq(users.id, members.userId))
-      .where(and(eq(findings.caseId, caseId), eq(findings.workshopId, member.workshopId)))
-      .orderBy(asc(findings.recordedAt), asc(findings.id)),
-  ]);
-  return { ...row, observations: obs, findings: fnd };
+// Built once per database handle: drizzle then skips rebuilding the SQL, and each pooled
+// connection parses and plans it once.
+const prepared = new WeakMap<Db, ReturnType<typeof caseQuery>>();
+
+const at = <T extends { recordedAt: string }>(r: T) => ({ ...r, recordedAt: new Date(r.recordedAt) });
+
+/**
+ * Everything a case screen shows in one query: the case with its vehicle, owner and workshop, its
+ * observations, findings, recent history and the workshop's outcome counts. A case of another
+ * workshop is "not found", never "forbidden", so ids reveal nothing.
+ */
+export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseId: string) {
+  requireId(caseId, "No such case in this workshop.");
+  let query = prepared.get(db);
+  if (!query) prepared.set(db, (query = caseQuery(db)));
+  const [row] = await query.execute({ caseId, workshopId: member.workshopId });
+  if (!row) refuse(404, "No such case in this workshop.");
+  return {
+    ...row,
+    observations: row.observations.map(at) as ObservationRow[],
+    findings: row.findings.map(at) as FindingRow[],
+    history: row.history.map((h) => ({ ...h, at: new Date(h.at) })) as HistoryRow[],
+  };
 }
 
 export type CaseBundle = Awaited<ReturnType<typeof loadCase>>;
+export type CaseFields = Omit<CaseBundle, "history" | "outcomes">;
+
+/** The case as its screens and the API show it; history and outcome counts travel on their own. */
+export function caseFields({ history: _h, outcomes: _o, ...fields }: CaseBundle): CaseFields {
+  return fields;
+}
 
 export function evidenceOf(c: Pick<CaseBundle, "observations" | "findings">) {
   return {

@@ -4,7 +4,7 @@ import { compileModel, diagnose, type CompiledModel, type Model, type Skill } fr
 import { buildModel, vehicleFacts } from "./build-model";
 import { evidenceOf, type CaseBundle } from "./case.server";
 import { presentDiagnosis } from "./present-diagnosis";
-import { loadKnowledge, outcomeCounts } from "./knowledge.server";
+import { loadKnowledge } from "./knowledge.server";
 
 // The model depends on the knowledge base, the vehicle's facts, the labour rate and the outcome
 // counts; everything else is the case's evidence. Vehicles of the same kind share a compiled model,
@@ -14,10 +14,9 @@ const compiled = new Map<string, { model: Model; compiled: CompiledModel }>();
 
 /** The likely causes, check plan and next-step what-if for a case, as the member may act on it. */
 export async function diagnoseCase(db: Db, member: Pick<Member, "role" | "skill" | "workshopId">, bundle: CaseBundle) {
-  const [kb, outcomes] = await Promise.all([
-    loadKnowledge(db, bundle.workshop.id, bundle.workshop.kbVersion),
-    outcomeCounts(db, bundle.workshop.id, bundle.vehicle.fuelType),
-  ]);
+  const kb = await loadKnowledge(db, bundle.workshop.id, bundle.workshop.kbVersion);
+  // Read with the case (loadCase), so the page costs no extra query for them.
+  const outcomes = bundle.outcomes;
   const facts = vehicleFacts({ ...bundle.vehicle, mileageKm: bundle.mileageKm });
   const key = JSON.stringify([bundle.workshop.id, kb.kbVersion, facts, bundle.workshop.labourRatePerHour, outcomes]);
   let entry = compiled.get(key);

@@ -3,19 +3,29 @@
 import type { Plan, Ranking, WhatIf } from "~/reasoning";
 import type { Knowledge } from "./build-model";
 
-const WHY_CAUSES = 10; // causes whose evidence is listed
+const WHY_CAUSES = 5; // causes whose evidence is listed: the ones the screen shows with a "why"
 const WHY_ITEMS = 8; // pieces of evidence per cause
 const WHY_MIN = 0.01; // |log likelihood ratio| below this moves nothing visible
-const DETAILED_STEPS = 12;
+const DETAILED_STEPS = 12; // steps sent with instructions: more than the plan offers at once (it skips unlikely ones)
 const SENT_CAUSES = 30; // the screen shows five and folds the rest; past thirty the shares round to 0%
 const SENT_STEPS = 20;
 
 export type ShownCause = { id: string; name: string; probability: number; priority: string | null; why: { label: string; weight: number }[] };
 
+// Look-ups by id, built once per loaded knowledge base (which is itself cached per version).
+const lookups = new WeakMap<Knowledge, ReturnType<typeof byId>>();
+function byId(kb: Knowledge) {
+  return {
+    cause: new Map(kb.causes.map((c) => [c.id, c])),
+    symptom: new Map(kb.symptoms.map((s) => [s.id, s])),
+    check: new Map(kb.checks.map((k) => [k.id, k])),
+  };
+}
+
 export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
-  const cause = new Map(kb.causes.map((c) => [c.id, c]));
-  const symptom = new Map(kb.symptoms.map((s) => [s.id, s]));
-  const check = new Map(kb.checks.map((k) => [k.id, k]));
+  let maps = lookups.get(kb);
+  if (!maps) lookups.set(kb, (maps = byId(kb)));
+  const { cause, symptom, check } = maps;
   const label = (key: string) => {
     const [kind, id] = [key.slice(0, key.indexOf(":")), key.slice(key.indexOf(":") + 1)];
     return kind === "symptom" ? symptom.get(id)?.name ?? id : check.get(id)?.name ?? id;

@@ -1,11 +1,11 @@
 import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
-import type { CaseBundle } from "~/cases/case.server";
+import type { CaseFields } from "~/cases/case.server";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 
 // The browser's own fetches for the workbench: the live re-rank after every piece of evidence.
 // Over the wire dates arrive as strings; the screens only format them, so either is fine.
 type Wire<T> = { [K in keyof T]: T[K] extends Date ? string | Date : T[K] extends Date | null ? string | Date | null : T[K] extends (infer U)[] ? Wire<U>[] : T[K] };
-export type CaseView = { case: Wire<CaseBundle>; diagnosis: Diagnosis };
+export type CaseView = { case: Wire<CaseFields>; diagnosis: Diagnosis };
 
 export class ApiError extends Error {
   constructor(readonly status: number, message: string) {

@@ -1,6 +1,6 @@
 import { methodNotAllowed } from "~/http.server";
 import { api } from "~/api.server";
-import { loadCase } from "~/cases/case.server";
+import { caseFields, loadCase } from "~/cases/case.server";
 import { diagnoseCase } from "~/cases/diagnosis.server";
 import { dbContext } from "~/context";
 import type { Route } from "./+types/case";
@@ -11,7 +11,7 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   return api(request, db, "case:read", async (member) => {
     const bundle = await loadCase(db, member, params.caseId);
     const { model: _model, evidence: _evidence, ...diagnosis } = await diagnoseCase(db, member, bundle);
-    return { case: bundle, diagnosis };
+    return { case: caseFields(bundle), diagnosis };
   });
 }
 

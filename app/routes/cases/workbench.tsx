@@ -1,10 +1,9 @@
 import { useQuery } from "@tanstack/react-query";
 import { data, Form, Link } from "react-router";
-import { useEffect } from "react";
+import { useEffect, useMemo } from "react";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { can } from "~/auth/permissions";
-import { loadCase } from "~/cases/case.server";
-import { caseHistory } from "~/cases/history.server";
+import { caseFields, loadCase } from "~/cases/case.server";
 import { CaseHistory } from "~/components/case/case-history";
 import { diagnoseCase } from "~/cases/diagnosis.server";
 import { assertIntentAllowed, runWorkbenchForm, WorkbenchForm } from "~/cases/workbench-actions.server";
@@ -17,6 +16,7 @@ import { LikelyCauses } from "~/components/case/likely-causes";
 import { CaseQuickFind } from "~/components/case/case-quick-find";
 import { RouteErrorPage } from "~/components/error-page";
 import { STATE_LABEL } from "~/components/format";
+import { fromPayload, toPayload } from "~/components/json-payload";
 import { dbContext } from "~/context";
 import { refusalMessage } from "~/http.server";
 import { quickFindKey } from "~/quick-find";
@@ -31,13 +31,14 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const bundle = await loadCase(db, member, params.caseId);
   const { model: _m, evidence: _e, ...diagnosis } = await diagnoseCase(db, member, bundle);
   // The browser keeps one built index per knowledge-base version instead of rebuilding on every revalidation.
-  const history = await caseHistory(db, member.workshopId, bundle.id, 30);
   const quickFindCacheKey = quickFindKey(member.workshopId, `${bundle.workshop.kbVersion}-${bundle.id}`, "case");
   const canWork = bundle.state === "open" && (can(member.role, "case:work") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId));
+  const view: CaseView = { case: caseFields(bundle), diagnosis };
   return {
-    view: { case: bundle, diagnosis } satisfies CaseView as CaseView,
+    // The same shape the browser later fetches from /api/cases/:id, so the live copy starts from it.
+    page: toPayload({ view, history: bundle.history }),
     quickFindCacheKey,
-    history,
+    number: bundle.number,
     me: { role: member.role, canWork, mayConclude: can(member.role, "case:conclude") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId), maySignOff: can(member.role, "case:signoff"), mayEditComplaint: can(member.role, "case:open") && bundle.state !== "closed" },
   };
 }
@@ -60,13 +61,12 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 }
 
 export function meta({ loaderData }: Route.MetaArgs) {
-  const c = loaderData?.view.case as { number?: number } | undefined;
-  return [{ title: c?.number ? `Case #${c.number} — Ramplight` : "Case — Ramplight" }];
+  return [{ title: loaderData?.number ? `Case #${loaderData.number} — Ramplight` : "Case — Ramplight" }];
 }
 
 export default function Workbench({ loaderData, actionData }: Route.ComponentProps) {
   const { me, quickFindCacheKey } = loaderData;
-  const initial = loaderData.view;
+  const { view: initial, history } = useMemo(() => fromPayload(loaderData.page), [loaderData.page]);
   const id = initial.case.id;
   const query = useQuery({ ...caseQuery(id), initialData: initial });
   const view = query.data ?? initial;
@@ -130,7 +130,7 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
             maySignOff={me.maySignOff}
             isApprentice={me.role === "apprentice"}
           />
-          <CaseHistory entries={loaderData.history} />
+          <CaseHistory entries={history} />
         </div>
       </div>
     </div>
