@@ -1,3 +1,4 @@
+import { Fold } from "../fold";
 import { formatDate } from "../format";
 
 // Audit actions in the words of the workshop floor.
@@ -17,8 +18,7 @@ const SAID: Record<string, (after: Record<string, unknown>) => string> = {
 export function CaseHistory({ entries }: { entries: { id: number; at: string | Date; action: string; after: unknown; actor: string | null }[] }) {
   return (
     <section aria-labelledby="history" className="rounded-card border border-rule bg-card p-4">
-      <details>
-        <summary id="history" className="min-h-tap cursor-pointer content-center text-xl font-semibold">History</summary>
+      <Fold summaryClassName="min-h-tap cursor-pointer content-center text-xl font-semibold" summary={<span id="history">History</span>}>
         <ol className="mt-2 grid gap-1 text-sm" aria-label="Case history">
           {entries.map((e) => (
             <li key={e.id}>
@@ -27,7 +27,7 @@ export function CaseHistory({ entries }: { entries: { id: number; at: string | D
             </li>
           ))}
         </ol>
-      </details>
+      </Fold>
     </section>
   );
 }

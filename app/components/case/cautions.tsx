@@ -13,16 +13,46 @@ export const CAUTION_TEXT: Record<string, string> = {
   battery_acid: "Battery: acid and explosive gas; eye protection, no sparks, disconnect the negative first.",
 };
 
+const CAUTION_WORD: Record<string, string> = {
+  lifting: "lifting",
+  hot_parts: "hot parts",
+  fuel: "fuel",
+  brake_hydraulics: "brake hydraulics",
+  airbag: "airbags",
+  high_voltage: "high voltage",
+  rotating_parts: "rotating parts",
+  pressurised_cooling: "cooling under pressure",
+  exhaust_fumes: "exhaust fumes",
+  battery_acid: "battery",
+};
+
+function Warning() {
+  return (
+    <svg viewBox="0 0 24 24" className="h-5 w-5 shrink-0" aria-hidden="true">
+      <path d="M12 2.5 L22.5 21 H1.5 Z" fill="var(--color-soon)" stroke="#16181b" strokeWidth="1.5" strokeLinejoin="round" />
+      <rect x="11" y="9" width="2" height="6.5" fill="#16181b" />
+      <rect x="11" y="17" width="2" height="2" fill="#16181b" />
+    </svg>
+  );
+}
+
+/** The hazards of a check in a word each, for a check further down the plan; the full text opens with it. */
+export function CautionLine({ cautions }: { cautions: string[] }) {
+  if (cautions.length === 0) return null;
+  return (
+    <p role="note" aria-label="Cautions" className="mt-2 flex items-center gap-2 text-sm font-medium">
+      <Warning />
+      Take care: {cautions.map((c) => CAUTION_WORD[c] ?? c).join(" · ")}
+    </p>
+  );
+}
+
 export function Cautions({ cautions }: { cautions: string[] }) {
   if (cautions.length === 0) return null;
   return (
     <div role="note" aria-label="Cautions" className="mt-2 rounded-lg border-2 border-soon bg-card p-3">
       <p className="flex items-center gap-2 font-semibold">
-        <svg viewBox="0 0 24 24" className="h-5 w-5" aria-hidden="true">
-          <path d="M12 2.5 L22.5 21 H1.5 Z" fill="var(--color-soon)" stroke="#16181b" strokeWidth="1.5" strokeLinejoin="round" />
-          <rect x="11" y="9" width="2" height="6.5" fill="#16181b" />
-          <rect x="11" y="17" width="2" height="2" fill="#16181b" />
-        </svg>
+        <Warning />
         Take care
       </p>
       <ul className="mt-1 list-disc pl-6 text-sm">

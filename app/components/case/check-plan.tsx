@@ -1,7 +1,8 @@
 import { useEffect, useRef, useState } from "react";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 import { formatMoney, formatPercent } from "../format";
-import { Cautions } from "./cautions";
+import { Fold } from "../fold";
+import { CautionLine, Cautions } from "./cautions";
 
 type Step = Diagnosis["plan"]["steps"][number];
 export type RecordResult = (step: Step, result: { result?: "pass" | "fail"; reading?: string }) => void;
@@ -75,10 +76,7 @@ export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagn
         ))}
       </ol>
       {later.length ? (
-        <details className="mt-3">
-          <summary className="min-h-tap cursor-pointer content-center text-graphite-700">
-            {later.length + plan.moreSteps} more checks, unlikely to find it now
-          </summary>
+        <Fold className="mt-3" summaryClassName="min-h-tap cursor-pointer content-center text-graphite-700" summary={`${later.length + plan.moreSteps} more checks, unlikely to find it now`}>
           <ul className="mt-1 grid gap-1 text-sm text-graphite-700">
             {later.map((s) => (
               <li key={s.checkId} className="flex justify-between gap-2">
@@ -88,7 +86,7 @@ export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagn
             ))}
             {plan.moreSteps ? <li>… and {plan.moreSteps} more with almost no chance of finding it.</li> : null}
           </ul>
-        </details>
+        </Fold>
       ) : null}
       {plan.aboveSkill.length ? (
         <div className="mt-4 border-t border-rule pt-3">
@@ -122,14 +120,17 @@ function PlanStep({ step, first, currency, record, busy }: { step: Step; first: 
       <p className="text-sm text-graphite-600">
         {[step.skill, ...step.access.map((a) => ACCESS_LABEL[a] ?? a), ...step.tools].join(" · ")}
       </p>
-      <Cautions cautions={step.cautions} />
+      {/* The next check shows its cautions in full; the ones after it name the hazards, and the
+          full text opens with their instructions. */}
+      {first ? <Cautions cautions={step.cautions} /> : <CautionLine cautions={step.cautions} />}
       {step.instructions.length ? (
-        <details className="mt-2" open={first}>
-          <summary className="cursor-pointer text-sm font-medium">How to do it</summary>
+        <Fold className="mt-2" open={first} summaryClassName="cursor-pointer text-sm font-medium" summary="How to do it">
+          {first ? null : <Cautions cautions={step.cautions} />}
           <ol className="mt-1 list-decimal pl-6 text-sm">
             {step.instructions.map((line, i) => <li key={i}>{line}</li>)}
           </ol>
-        </details>
+          {step.failMeans && !first ? <p className="mt-1 text-sm text-graphite-600">A fail means: {step.failMeans}</p> : null}
+        </Fold>
       ) : null}
       {step.resultKind === "measurement" ? (
         <form
@@ -155,7 +156,7 @@ function PlanStep({ step, first, currency, record, busy }: { step: Step; first: 
           </button>
         </div>
       )}
-      {step.failMeans ? <p className="mt-1 text-sm text-graphite-600">A fail means: {step.failMeans}</p> : null}
+      {step.failMeans && (first || !step.instructions.length) ? <p className="mt-1 text-sm text-graphite-600">A fail means: {step.failMeans}</p> : null}
     </li>
   );
 }

@@ -1,5 +1,11 @@
 import type { CaseView } from "./case-queries";
+import { Fold } from "../fold";
 import { formatDate } from "../format";
+
+type Finding = CaseView["case"]["findings"][number];
+
+// A long case keeps its latest findings in view; the earlier ones open on request.
+const RECENT_FINDINGS = 10;
 
 /** What has been noticed and found so far, newest last, each removable while the case is open. */
 export function EvidenceList({ c, canWork, remove }: { c: CaseView["case"]; canWork: boolean; remove: (kind: "unobserve" | "unfind", id: string) => void }) {
@@ -23,20 +29,31 @@ export function EvidenceList({ c, canWork, remove }: { c: CaseView["case"]; canW
       </ul>
       <h3 className="mt-4 font-semibold">Findings</h3>
       {c.findings.length === 0 ? <p className="text-graphite-600">No checks done yet.</p> : null}
+      {c.findings.length > RECENT_FINDINGS ? (
+        <Fold className="mt-1" summaryClassName="min-h-tap cursor-pointer content-center text-sm text-graphite-700" summary={`${c.findings.length - RECENT_FINDINGS} earlier findings`}>
+          <ol className="grid gap-1" aria-label="Earlier findings">
+            {c.findings.slice(0, -RECENT_FINDINGS).map((f) => <FindingRow key={f.id} f={f} canWork={canWork} remove={remove} />)}
+          </ol>
+        </Fold>
+      ) : null}
       <ol className="mt-1 grid gap-1" aria-label="Findings">
-        {c.findings.map((f) => (
-          <li key={f.id} className="flex items-center justify-between gap-2">
-            <span>
-              <strong className={f.result === "fail" ? "text-stop" : ""}>{f.id.startsWith("pending") ? "Recording…" : f.result === "fail" ? "Fault found" : "Passed"}</strong>: {f.name}
-              {f.reading ? <span className="tabular"> — {f.reading}</span> : null}{" "}
-              <span className="tabular text-sm text-graphite-600">{f.by ? `${f.by}, ` : ""}{formatDate(f.recordedAt)}</span>
-            </span>
-            {canWork && !f.id.startsWith("pending") ? (
-              <button type="button" onClick={() => remove("unfind", f.id)} className="min-h-tap rounded-lg px-2 text-sm text-graphite-600 hover:bg-paper" aria-label={`Remove finding ${f.name}`}>Remove</button>
-            ) : null}
-          </li>
-        ))}
+        {c.findings.slice(-RECENT_FINDINGS).map((f) => <FindingRow key={f.id} f={f} canWork={canWork} remove={remove} />)}
       </ol>
     </section>
+  );
+}
+
+function FindingRow({ f, canWork, remove }: { f: Finding; canWork: boolean; remove: (kind: "unfind", id: string) => void }) {
+  return (
+    <li className="flex items-center justify-between gap-2">
+      <span>
+        <strong className={f.result === "fail" ? "text-stop" : ""}>{f.id.startsWith("pending") ? "Recording…" : f.result === "fail" ? "Fault found" : "Passed"}</strong>: {f.name}
+        {f.reading ? <span className="tabular"> — {f.reading}</span> : null}{" "}
+        <span className="tabular text-sm text-graphite-600">{f.by ? `${f.by}, ` : ""}{formatDate(f.recordedAt)}</span>
+      </span>
+      {canWork && !f.id.startsWith("pending") ? (
+        <button type="button" onClick={() => remove("unfind", f.id)} className="min-h-tap rounded-lg px-2 text-sm text-graphite-600 hover:bg-paper" aria-label={`Remove finding ${f.name}`}>Remove</button>
+      ) : null}
+    </li>
   );
 }

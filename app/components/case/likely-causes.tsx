@@ -1,5 +1,6 @@
 import { useEffect, useRef } from "react";
 import type { ShownCause } from "~/cases/present-diagnosis";
+import { Fold } from "../fold";
 import { formatPercent } from "../format";
 import { PriorityMark } from "../priority";
 
@@ -24,8 +25,7 @@ export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlis
         ))}
       </ol>
       {rest.length ? (
-        <details className="mt-3">
-          <summary className="min-h-tap cursor-pointer content-center text-graphite-700">{rest.length} less likely causes</summary>
+        <Fold className="mt-3" summaryClassName="min-h-tap cursor-pointer content-center text-graphite-700" summary={`${rest.length} less likely causes`}>
           <ol className="mt-2 grid gap-1 text-graphite-700" start={SHOWN + 1}>
             {rest.map((c) => (
               <li key={c.id} className="flex justify-between gap-3">
@@ -34,7 +34,7 @@ export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlis
               </li>
             ))}
           </ol>
-        </details>
+        </Fold>
       ) : null}
       <div className="mt-4 border-t border-rule pt-3" data-testid="unlisted">
         <Bar label="Not in the knowledge base" value={unlisted} muted />
@@ -63,10 +63,12 @@ function CauseRow({ cause, rank, moved, open }: { cause: ShownCause; rank: numbe
   return (
     <li data-cause={cause.name} data-moved={moved || undefined}>
       <Bar label={`${rank}. ${cause.name}`} value={cause.probability} moved={moved} />
-      <details open={open} className="mt-1">
-        <summary className="cursor-pointer text-sm text-graphite-700">
-          Why {cause.priority ? <span className="ml-2 inline-block align-middle"><PriorityMark priority={cause.priority as "stop"} /></span> : null}
-        </summary>
+      <Fold
+        open={open}
+        className="mt-1"
+        summaryClassName="cursor-pointer text-sm text-graphite-700"
+        summary={<>Why {cause.priority ? <span className="ml-2 inline-block align-middle"><PriorityMark priority={cause.priority as "stop"} /></span> : null}</>}
+      >
         {cause.why.length === 0 ? (
           <p className="text-sm text-graphite-600">No evidence bears on it yet: its share is its usual frequency.</p>
         ) : (
@@ -87,7 +89,7 @@ function CauseRow({ cause, rank, moved, open }: { cause: ShownCause; rank: numbe
             ))}
           </ul>
         )}
-      </details>
+      </Fold>
     </li>
   );
 }

@@ -1,0 +1,17 @@
+import { useState, type ReactNode } from "react";
+
+/**
+ * A disclosure whose contents are rendered only once it has been opened. The workbench holds many
+ * of these (the why of every cause, the instructions of every check); rendering them all on every
+ * page view would cost more than everything the technician actually reads. Native <details>, so
+ * it opens with Enter or Space and announces its state without extra ARIA.
+ */
+export function Fold({ summary, open = false, className = "", summaryClassName = "cursor-pointer", children }: { summary: ReactNode; open?: boolean; className?: string; summaryClassName?: string; children: ReactNode }) {
+  const [shown, setShown] = useState(open);
+  return (
+    <details open={open} className={className} onToggle={(e) => e.currentTarget.open && setShown(true)}>
+      <summary className={summaryClassName}>{summary}</summary>
+      {shown ? children : null}
+    </details>
+  );
+}
