@@ -1,8 +1,5 @@
 import { randomBytes } from "node:crypto";
-import { PassThrough } from "node:stream";
-import { createReadableStreamFromReadable } from "@react-router/node";
-import { isbot } from "isbot";
-import type { RenderToPipeableStreamOptions } from "react-dom/server";
+import { Writable } from "node:stream";
 import { renderToPipeableStream } from "react-dom/server";
 import { type EntryContext, type HandleDataRequestFunction, ServerRouter } from "react-router";
 import { NonceProvider } from "./components/nonce";
@@ -31,37 +28,38 @@ export default function handleRequest(request: Request, status: number, headers:
   });
   if (request.method.toUpperCase() === "HEAD") return new Response(null, { status, headers });
 
+  // The whole document is rendered before it is sent, in one body. Our loaders defer nothing, so
+  // streaming the shell early would win no time, while sending a page in React's small chunks
+  // through Node and web streams cost more than rendering it (npm run bench prints the figures).
   return new Promise<Response>((resolve, reject) => {
-    let shellRendered = false;
-    const userAgent = request.headers.get("user-agent");
-    // Crawlers get the whole page at once; people get the shell as soon as it is ready.
-    const readyOption: keyof RenderToPipeableStreamOptions =
-      (userAgent && isbot(userAgent)) || routerContext.isSpaMode ? "onAllReady" : "onShellReady";
+    const chunks: Buffer[] = [];
     let timeoutId: ReturnType<typeof setTimeout> | undefined = setTimeout(() => abort(), streamTimeout + 1000);
-
+    const sink = new Writable({
+      write(chunk: Buffer, _encoding, callback) {
+        chunks.push(chunk);
+        callback();
+      },
+      final(callback) {
+        clearTimeout(timeoutId);
+        timeoutId = undefined;
+        headers.set("Content-Type", "text/html; charset=utf-8");
+        resolve(new Response(Buffer.concat(chunks), { headers, status }));
+        callback();
+      },
+    });
     const { pipe, abort } = renderToPipeableStream(
       <NonceProvider value={nonce}>
         <ServerRouter context={routerContext} url={request.url} nonce={nonce} />
       </NonceProvider>,
       {
         nonce,
-        [readyOption]() {
-          shellRendered = true;
-          const body = new PassThrough({
-            final(callback) {
-              clearTimeout(timeoutId);
-              timeoutId = undefined;
-              callback();
-            },
-          });
-          headers.set("Content-Type", "text/html; charset=utf-8");
-          pipe(body);
-          resolve(new Response(createReadableStreamFromReadable(body), { headers, status }));
+        onAllReady() {
+          pipe(sink);
         },
         onShellError: reject,
         onError(error: unknown) {
           status = 500;
-          if (shellRendered) console.error(error);
+          console.error(error);
         },
       },
     );

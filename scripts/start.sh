@@ -31,5 +31,5 @@ if [ "$mode" = "--dev" ]; then
 else
   node_modules/.bin/react-router build >/dev/null
   echo "Ramplight is serving on $APP_URL — sign in as any demo member from the sign-in page." >&2
-  NODE_ENV=production node_modules/.bin/react-router-serve ./build/server/index.js
+  NODE_ENV=production node scripts/serve.mjs
 fi

@@ -130,9 +130,17 @@ try {
     DATABASE_URL: databaseUrl,
     NODE_ENV: "production",
   };
-  server = spawn(process.execPath, ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"], { env, stdio: ["ignore", "ignore", "pipe"] });
-  server.stderr?.on("data", (d) => (stderr = (stderr + String(d)).slice(-4000)));
-  await waitFor(`${APP_URL}/`, server);
+  // Ours first (what npm start runs), then the framework's stock server as a reference, same build.
+  const servers = {
+    ours: ["scripts/serve.mjs"],
+    stock: ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"],
+  } as const;
+  const start = async (args: readonly string[]) => {
+    server = spawn(process.execPath, [...args], { env, stdio: ["ignore", "ignore", "pipe"] });
+    server.stderr?.on("data", (d) => (stderr = (stderr + String(d)).slice(-4000)));
+    await waitFor(`${APP_URL}/`, server);
+  };
+  await start(servers.ours);
 
   const signedIn = { cookie: seeded.cookie };
   // The requests measured must be the real thing: a 200 document and the case's JSON.
@@ -145,22 +153,28 @@ try {
 
   console.log(`case-page bench: ${CONNECTIONS} connections, ${WARMUP_S} s warm-up + ${DURATION_S} s each, case with ${seeded.findings} findings, production build on ${APP_URL}`);
   console.log(`response sizes: case page ${(pageBytes / 1024).toFixed(0)} KiB, case API ${(apiBytes / 1024).toFixed(0)} KiB`);
+  const casePath = `/cases/${seeded.caseId}`;
   const trivial = await measure("landing page GET / (trivial)", "/", {});
-  const casePage = await measure("case page GET /cases/:id (signed in)", `/cases/${seeded.caseId}`, signedIn);
+  const casePage = await measure("case page GET /cases/:id (signed in)", casePath, signedIn);
   const caseApi = await measure("case API GET /api/cases/:id", `/api/cases/${seeded.caseId}`, signedIn);
   // One connection: the time one request takes with nobody queueing ahead of it.
-  const serial = await measure("case page, 1 connection (service time)", `/cases/${seeded.caseId}`, signedIn, 1, 5);
+  const serial = await measure("case page, 1 connection (service time)", casePath, signedIn, 1, 5);
+  await stopServer(server);
+  await start(servers.stock);
+  const stockTrivial = await measure("landing page, stock react-router-serve", "/", {});
+  const stockPage = await measure("case page, stock react-router-serve", casePath, signedIn);
 
   const pad = (s: string, n: number) => s.padEnd(n);
-  console.log(`${pad("route", 42)} ${pad("p50 ms", 8)} ${pad("p99 ms", 8)} ${pad("req/s", 10)} non-2xx/errors`);
-  for (const r of [trivial, casePage, caseApi, serial]) console.log(`${pad(r.name, 42)} ${pad(String(r.p50), 8)} ${pad(String(r.p99), 8)} ${pad(r.rps.toFixed(0), 10)} ${r.bad}`);
+  console.log(`${pad("route (scripts/serve.mjs unless named)", 42)} ${pad("p50 ms", 8)} ${pad("p99 ms", 8)} ${pad("req/s", 10)} non-2xx/errors`);
+  for (const r of [trivial, casePage, caseApi, serial, stockTrivial, stockPage]) console.log(`${pad(r.name, 42)} ${pad(String(r.p50), 8)} ${pad(String(r.p99), 8)} ${pad(r.rps.toFixed(0), 10)} ${r.bad}`);
   const ratio = casePage.rps / trivial.rps;
   const mark = (ok: boolean) => (ok ? "PASS" : "MISS");
   console.log(`case page throughput / trivial: ${ratio.toFixed(2)}×`);
   console.log(`target case page p99 ≤ ${TARGET_P99_MS} ms: ${casePage.p99} ms — ${mark(casePage.p99 <= TARGET_P99_MS)}`);
   console.log(`target case page throughput ≥ ${TARGET_RATIO}× trivial: ${ratio.toFixed(2)}× — ${mark(ratio >= TARGET_RATIO)}`);
   console.log(`(reference) case API p99 ${caseApi.p99} ms, ${(caseApi.rps / trivial.rps).toFixed(2)}× trivial throughput`);
-  if (casePage.bad + caseApi.bad + trivial.bad > 0) console.log("warning: some responses were not 2xx; the figures above include them");
+  console.log(`(reference) our server vs the stock one: case page ${(casePage.rps / stockPage.rps).toFixed(2)}× the throughput, landing ${(trivial.rps / stockTrivial.rps).toFixed(2)}×`);
+  if ([trivial, casePage, caseApi, serial, stockTrivial, stockPage].some((r) => r.bad > 0)) console.log("warning: some responses were not 2xx; the figures above include them");
 } catch (error) {
   console.error("case-page bench failed:", (error as Error).message);
   if (stderr.trim()) console.error(`app server stderr:\n${stderr}`);

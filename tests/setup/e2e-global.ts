@@ -32,7 +32,7 @@ export default async function setup(project: TestProject) {
   const dbName = "rl_e2e";
   const databaseUrl = await cloneTemplate(dbName);
   const fakes = await startAllFakes({ ...E2E_ENV });
-  const server = spawn(process.execPath, ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"], {
+  const server = spawn(process.execPath, ["scripts/serve.mjs"], {
     env: { ...process.env, ...E2E_ENV, DATABASE_URL: databaseUrl, NODE_ENV: "production" },
     stdio: ["ignore", "ignore", "pipe"],
   });

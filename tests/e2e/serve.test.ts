@@ -1,0 +1,39 @@
+// The production server (scripts/serve.mjs) in front of the build: caching of hashed assets,
+// compression on request, and a plain 404 for an asset that does not exist. Caching values follow
+// RFC 9111 §5.2.2.1 (max-age) and RFC 8246 (immutable); compression negotiation RFC 9110 §12.5.3.
+import { describe, expect, it } from "vitest";
+import { baseUrl } from "./browser";
+
+async function firstAsset(): Promise<string> {
+  const html = await (await fetch(`${baseUrl()}/`)).text();
+  const href = html.match(/\/assets\/[^"]+\.css/)?.[0];
+  expect(href, "the landing page links a stylesheet under /assets/").toBeTruthy();
+  return href!;
+}
+
+describe("the production server", () => {
+  it("serves hashed assets for a year as immutable", async () => {
+    const res = await fetch(`${baseUrl()}${await firstAsset()}`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toMatch(/text\/css/);
+    expect(res.headers.get("cache-control")).toBe("public, max-age=31536000, immutable");
+  });
+
+  it("compresses a page when the client accepts gzip, and not otherwise", async () => {
+    const gz = await fetch(`${baseUrl()}/`, { headers: { "accept-encoding": "gzip" } });
+    expect(gz.headers.get("content-encoding")).toBe("gzip");
+    // fetch decodes gzip itself; the page still reads whole.
+    await expect(gz.text()).resolves.toMatch(/complaint to a confirmed cause/);
+    const plain = await fetch(`${baseUrl()}/`, { headers: { "accept-encoding": "identity" } });
+    expect(plain.headers.get("content-encoding")).toBeNull();
+  });
+
+  it("answers 404 for an asset that is not in the build, and pages never fall into the file server", async () => {
+    const missing = await fetch(`${baseUrl()}/assets/no-such-file-123.js`);
+    expect(missing.status).toBe(404);
+    // A page path that looks like nothing on disk reaches the app's own 404 page.
+    const page = await fetch(`${baseUrl()}/no-such-page`);
+    expect(page.status).toBe(404);
+    expect(page.headers.get("content-type")).toMatch(/text\/html/);
+  });
+});
