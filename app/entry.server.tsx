@@ -12,6 +12,10 @@ env();
 
 export const streamTimeout = 5_000;
 
+// The production server (scripts/serve.mjs) builds each request's context with this, so the
+// caller's socket address reaches the sign-in rate limit.
+export { requestContext } from "./context";
+
 export const handleDataRequest: HandleDataRequestFunction = (response) => {
   response.headers.set("X-Content-Type-Options", "nosniff");
   return response;

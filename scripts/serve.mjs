@@ -22,7 +22,12 @@ const assets = serveStatic(client, { immutable: true, maxAge: "1y", index: false
 const files = serveStatic(client, { maxAge: "1h", index: false });
 const compress = compression();
 const log = process.env.RL_ACCESS_LOG === "0" ? (_req, _res, next) => next() : morgan("tiny");
-const app = createRequestListener({ build, mode: process.env.NODE_ENV ?? "production" });
+// Each request's context carries the socket's address (for the sign-in rate limit, app/context.ts).
+const app = createRequestListener({
+  build,
+  mode: process.env.NODE_ENV ?? "production",
+  getLoadContext: (_request, client) => build.entry.module.requestContext(client.address ?? null),
+});
 
 // Only a path with a file extension can be a public file; pages and the API never touch the disk.
 const looksLikeFile = (url) => /\.[a-z0-9]+$/i.test(url.split("?")[0]);

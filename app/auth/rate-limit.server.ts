@@ -24,9 +24,13 @@ export async function limitSignIn(db: Db, bucket: string, limit: number, windowS
   if (Math.random() < 0.05) await db.delete(signInAttempts).where(lt(signInAttempts.at, since));
 }
 
-export function clientIp(request: Request): string {
-  // X-Forwarded-For is only believed behind our own proxy (TRUST_PROXY=1): anyone can send it.
-  // Without a proxy every caller shares one bucket, which errs on the side of refusing.
+/**
+ * The address a sign-in attempt is counted against. X-Forwarded-For is only believed behind our own
+ * proxy (TRUST_PROXY=1): anyone can send it. Otherwise the socket's address, as the production
+ * server reports it; where no server reports one (the dev server), every caller shares one bucket,
+ * which errs on the side of refusing.
+ */
+export function clientIp(request: Request, socketAddress: string | null): string {
   if (process.env.TRUST_PROXY === "1") return request.headers.get("x-forwarded-for")?.split(",")[0]?.trim() || "unknown";
-  return "direct";
+  return socketAddress ?? "direct";
 }

@@ -9,18 +9,18 @@ import { clientIp, limitSignIn } from "./rate-limit.server";
 import { createSession, readSessionToken, revokeSession, sessionCookie } from "./session.server";
 
 /** Step one: send the browser to the provider (remix-auth throws the redirect with the state cookie). */
-export async function startSignIn(db: Db, request: Request) {
+export async function startSignIn(db: Db, request: Request, socketAddress: string | null) {
   const e = env();
-  await limitSignIn(db, `ip:${clientIp(request)}`, e.SIGN_IN_LIMIT_PER_IP, e.SIGN_IN_WINDOW_S);
+  await limitSignIn(db, `ip:${clientIp(request, socketAddress)}`, e.SIGN_IN_LIMIT_PER_IP, e.SIGN_IN_WINDOW_S);
   return getAuthenticator().authenticate("github", request);
 }
 
 export class SignInRefused extends Error {}
 
 /** Step two: the provider sent the browser back. Verify state and code, then open a fresh session. */
-export async function finishSignIn(db: Db, request: Request) {
+export async function finishSignIn(db: Db, request: Request, socketAddress: string | null) {
   const e = env();
-  await limitSignIn(db, `ip:${clientIp(request)}`, e.SIGN_IN_LIMIT_PER_IP, e.SIGN_IN_WINDOW_S);
+  await limitSignIn(db, `ip:${clientIp(request, socketAddress)}`, e.SIGN_IN_LIMIT_PER_IP, e.SIGN_IN_WINDOW_S);
   let profile;
   try {
     profile = await getAuthenticator().authenticate("github", request);

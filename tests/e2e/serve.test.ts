@@ -1,7 +1,10 @@
 // The production server (scripts/serve.mjs) in front of the build: caching of hashed assets,
 // compression on request, and a plain 404 for an asset that does not exist. Caching values follow
 // RFC 9111 §5.2.2.1 (max-age) and RFC 8246 (immutable); compression negotiation RFC 9110 §12.5.3.
-import { describe, expect, it } from "vitest";
+import { count, eq } from "drizzle-orm";
+import { describe, expect, inject, it } from "vitest";
+import { createDb } from "~/db/client.server";
+import { signInAttempts } from "~/db/schema";
 import { baseUrl } from "./browser";
 
 async function firstAsset(): Promise<string> {
@@ -35,5 +38,21 @@ describe("the production server", () => {
     const page = await fetch(`${baseUrl()}/no-such-page`);
     expect(page.status).toBe(404);
     expect(page.headers.get("content-type")).toMatch(/text\/html/);
+  });
+});
+
+describe("the caller's address reaches the sign-in rate limit", () => {
+  it("counts a sign-in start against the socket's address, not one shared bucket", async () => {
+    const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 1 });
+    try {
+      const bucket = "ip:127.0.0.1"; // the browser tests and this fetch all come from loopback
+      const before = (await db.select({ n: count() }).from(signInAttempts).where(eq(signInAttempts.bucket, bucket)))[0].n;
+      const res = await fetch(`${baseUrl()}/auth/github`, { method: "POST", redirect: "manual", headers: { origin: baseUrl() } });
+      expect(res.status).toBe(302);
+      const after = (await db.select({ n: count() }).from(signInAttempts).where(eq(signInAttempts.bucket, bucket)))[0].n;
+      expect(after).toBe(before + 1);
+    } finally {
+      await pool.end();
+    }
   });
 });

@@ -1,12 +1,12 @@
 import { data } from "react-router";
 import { finishSignIn, SignInRefused } from "~/auth/sign-in.server";
-import { dbContext } from "~/context";
+import { clientAddressContext, dbContext } from "~/context";
 import { SignInPanel } from "./sign-in-panel";
 import type { Route } from "./+types/callback";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
   try {
-    return await finishSignIn(context.get(dbContext), request);
+    return await finishSignIn(context.get(dbContext), request, context.get(clientAddressContext));
   } catch (error) {
     if (error instanceof SignInRefused) return data({ message: error.message }, { status: 400 });
     throw error;
