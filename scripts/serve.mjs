@@ -1,9 +1,12 @@
 // The production server: Node's own http server in front of the React Router build.
-//   node scripts/serve.mjs            (PORT, HOST from the environment; npm start runs it)
+//   node scripts/serve.mjs                      PORT and HOST from the environment; npm start runs it
+//   WEB_CONCURRENCY=4 node scripts/serve.mjs    four worker processes sharing the port (node:cluster);
+//                                               they keep no state of their own (docs/architecture.md)
 // Hashed build assets are served with a year's immutable caching, the other public files for an
 // hour; everything else goes straight to React Router. Compression follows the client's
 // Accept-Encoding. Compared with a general-purpose framework server, a page request here does no
 // file-system look-up and no middleware chain of its own: `npm run bench` prints what that buys.
+import cluster from "node:cluster";
 import http from "node:http";
 import path from "node:path";
 import { createRequestListener } from "@react-router/node";
@@ -11,55 +14,84 @@ import compression from "compression";
 import morgan from "morgan";
 import serveStatic from "serve-static";
 
-const root = process.cwd();
-const build = await import(path.join(root, "build/server/index.js"));
-const client = path.join(root, "build/client");
 const port = Number(process.env.PORT ?? 3000);
 const host = process.env.HOST ?? "127.0.0.1";
+const workers = Math.max(1, Number(process.env.WEB_CONCURRENCY ?? 1) || 1);
 
-// serve-static maps the whole URL path under its root, so both read from build/client.
-const assets = serveStatic(client, { immutable: true, maxAge: "1y", index: false, fallthrough: false });
-const files = serveStatic(client, { maxAge: "1h", index: false });
-const compress = compression();
-const log = process.env.RL_ACCESS_LOG === "0" ? (_req, _res, next) => next() : morgan("tiny");
-// Each request's context carries the socket's address (for the sign-in rate limit, app/context.ts).
-const app = createRequestListener({
-  build,
-  mode: process.env.NODE_ENV ?? "production",
-  getLoadContext: (_request, client) => build.entry.module.requestContext(client.address ?? null),
-});
+if (workers > 1 && cluster.isPrimary) supervise();
+else await serve();
 
-// Only a path with a file extension can be a public file; pages and the API never touch the disk.
-const looksLikeFile = (url) => /\.[a-z0-9]+$/i.test(url.split("?")[0]);
+/** Starts the workers, replaces one that dies, and stops them all on SIGTERM or SIGINT. */
+function supervise() {
+  let stopping = false;
+  for (let i = 0; i < workers; i++) cluster.fork();
+  cluster.on("online", (worker) => worker.id === workers && console.log(`[ramplight] serving on http://${host}:${port} with ${workers} worker processes`));
+  cluster.on("exit", (worker, code, signal) => {
+    if (stopping) {
+      if (Object.keys(cluster.workers ?? {}).length === 0) process.exit(0);
+      return;
+    }
+    console.error(`[ramplight] worker ${worker.process.pid} exited (${signal ?? code}); starting another`);
+    cluster.fork();
+  });
+  for (const signal of ["SIGTERM", "SIGINT"]) {
+    process.on(signal, () => {
+      stopping = true;
+      for (const worker of Object.values(cluster.workers ?? {})) worker?.kill("SIGTERM");
+      setTimeout(() => process.exit(0), 6_000).unref();
+    });
+  }
+}
 
-const server = http.createServer((req, res) => {
-  log(req, res, () =>
-    compress(req, res, () => {
-      const url = req.url ?? "/";
-      if (url.startsWith("/assets/")) return assets(req, res, (error) => notFound(res, error));
-      if (looksLikeFile(url)) return files(req, res, () => app(req, res));
-      return app(req, res);
-    }),
-  );
-});
+async function serve() {
+  const root = process.cwd();
+  const build = await import(path.join(root, "build/server/index.js"));
+  const client = path.join(root, "build/client");
+
+  // serve-static maps the whole URL path under its root, so both read from build/client.
+  const assets = serveStatic(client, { immutable: true, maxAge: "1y", index: false, fallthrough: false });
+  const files = serveStatic(client, { maxAge: "1h", index: false });
+  const compress = compression();
+  const log = process.env.RL_ACCESS_LOG === "0" ? (_req, _res, next) => next() : morgan("tiny");
+  // Each request's context carries the socket's address (for the sign-in rate limit, app/context.ts).
+  const app = createRequestListener({
+    build,
+    mode: process.env.NODE_ENV ?? "production",
+    getLoadContext: (_request, client) => build.entry.module.requestContext(client.address ?? null),
+  });
+  // Only a path with a file extension can be a public file; pages and the API never touch the disk.
+  const looksLikeFile = (url) => /\.[a-z0-9]+$/i.test(url.split("?")[0]);
+
+  const server = http.createServer((req, res) => {
+    log(req, res, () =>
+      compress(req, res, () => {
+        const url = req.url ?? "/";
+        if (url.startsWith("/assets/")) return assets(req, res, (error) => notFound(res, error));
+        if (looksLikeFile(url)) return files(req, res, () => app(req, res));
+        return app(req, res);
+      }),
+    );
+  });
+  server.keepAliveTimeout = 65_000; // longer than common proxies' idle timeouts, so they close first
+  server.listen(port, host, () => {
+    if (cluster.isPrimary) console.log(`[ramplight] serving on http://${host}:${port}`);
+  });
+
+  let closing = false;
+  for (const signal of ["SIGTERM", "SIGINT"]) {
+    process.on(signal, () => {
+      if (closing) return;
+      closing = true;
+      // Finish what is in flight, then leave; a stuck connection does not hold the exit for long.
+      server.close(() => process.exit(0));
+      server.closeIdleConnections();
+      setTimeout(() => process.exit(0), 5_000).unref();
+    });
+  }
+}
 
 function notFound(res, error) {
   res.statusCode = error?.statusCode ?? 404;
   res.setHeader("content-type", "text/plain; charset=utf-8");
   res.end("Not found");
-}
-
-server.keepAliveTimeout = 65_000; // longer than common proxies' idle timeouts, so they close first
-server.listen(port, host, () => console.log(`[ramplight] serving on http://${host}:${port}`));
-
-let closing = false;
-for (const signal of ["SIGTERM", "SIGINT"]) {
-  process.on(signal, () => {
-    if (closing) return;
-    closing = true;
-    // Finish what is in flight, then leave; a stuck connection does not hold the exit for long.
-    server.close(() => process.exit(0));
-    server.closeIdleConnections();
-    setTimeout(() => process.exit(0), 5_000).unref();
-  });
 }

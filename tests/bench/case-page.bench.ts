@@ -1,10 +1,12 @@
 // Benchmark of the case page under load: the production build on loopback against its own
 // PostgreSQL cluster, a signed-in technician's document request for a case with 30 findings,
-// its JSON API, and the landing page as the trivial baseline, all in the same run.
+// its JSON API, and the landing page as the trivial baseline, all in the same run; then the same
+// server with one worker process per core, and the framework's stock server, as references.
 // Run: npx tsx tests/bench/case-page.bench.ts (also part of npm run bench). Reports; never fails.
 import { type ChildProcess, execFileSync, spawn } from "node:child_process";
 import { existsSync, readdirSync, statSync } from "node:fs";
 import { createRequire } from "node:module";
+import { availableParallelism } from "node:os";
 import { join } from "node:path";
 import { eq } from "drizzle-orm";
 
@@ -135,8 +137,8 @@ try {
     ours: ["scripts/serve.mjs"],
     stock: ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"],
   } as const;
-  const start = async (args: readonly string[]) => {
-    server = spawn(process.execPath, [...args], { env, stdio: ["ignore", "ignore", "pipe"] });
+  const start = async (args: readonly string[], extra: Record<string, string> = {}) => {
+    server = spawn(process.execPath, [...args], { env: { ...env, ...extra }, stdio: ["ignore", "ignore", "pipe"] });
     server.stderr?.on("data", (d) => (stderr = (stderr + String(d)).slice(-4000)));
     await waitFor(`${APP_URL}/`, server);
   };
@@ -160,13 +162,20 @@ try {
   // One connection: the time one request takes with nobody queueing ahead of it.
   const serial = await measure("case page, 1 connection (service time)", casePath, signedIn, 1, 5);
   await stopServer(server);
+  // The same server with one worker process per core (this machine's count), sharing the port.
+  const cores = String(availableParallelism());
+  await start(servers.ours, { WEB_CONCURRENCY: cores });
+  const multiTrivial = await measure(`landing page, ${cores} worker processes`, "/", {});
+  const multiPage = await measure(`case page, ${cores} worker processes`, casePath, signedIn);
+  await stopServer(server);
   await start(servers.stock);
   const stockTrivial = await measure("landing page, stock react-router-serve", "/", {});
   const stockPage = await measure("case page, stock react-router-serve", casePath, signedIn);
 
   const pad = (s: string, n: number) => s.padEnd(n);
   console.log(`${pad("route (scripts/serve.mjs unless named)", 42)} ${pad("p50 ms", 8)} ${pad("p99 ms", 8)} ${pad("req/s", 10)} non-2xx/errors`);
-  for (const r of [trivial, casePage, caseApi, serial, stockTrivial, stockPage]) console.log(`${pad(r.name, 42)} ${pad(String(r.p50), 8)} ${pad(String(r.p99), 8)} ${pad(r.rps.toFixed(0), 10)} ${r.bad}`);
+  const rows = [trivial, casePage, caseApi, serial, multiTrivial, multiPage, stockTrivial, stockPage];
+  for (const r of rows) console.log(`${pad(r.name, 42)} ${pad(String(r.p50), 8)} ${pad(String(r.p99), 8)} ${pad(r.rps.toFixed(0), 10)} ${r.bad}`);
   const ratio = casePage.rps / trivial.rps;
   const mark = (ok: boolean) => (ok ? "PASS" : "MISS");
   console.log(`case page throughput / trivial: ${ratio.toFixed(2)}×`);
@@ -174,7 +183,9 @@ try {
   console.log(`target case page throughput ≥ ${TARGET_RATIO}× trivial: ${ratio.toFixed(2)}× — ${mark(ratio >= TARGET_RATIO)}`);
   console.log(`(reference) case API p99 ${caseApi.p99} ms, ${(caseApi.rps / trivial.rps).toFixed(2)}× trivial throughput`);
   console.log(`(reference) our server vs the stock one: case page ${(casePage.rps / stockPage.rps).toFixed(2)}× the throughput, landing ${(trivial.rps / stockTrivial.rps).toFixed(2)}×`);
-  if ([trivial, casePage, caseApi, serial, stockTrivial, stockPage].some((r) => r.bad > 0)) console.log("warning: some responses were not 2xx; the figures above include them");
+  console.log(`(reference) with ${cores} worker processes: case page p99 ${multiPage.p99} ms, ${(multiPage.rps / multiTrivial.rps).toFixed(2)}× trivial throughput, landing p99 ${multiTrivial.p99} ms`);
+  console.log(`(reference) the trivial route's own p99 in this run: ${trivial.p99} ms (one process), ${multiTrivial.p99} ms (${cores} processes)`);
+  if (rows.some((r) => r.bad > 0)) console.log("warning: some responses were not 2xx; the figures above include them");
 } catch (error) {
   console.error("case-page bench failed:", (error as Error).message);
   if (stderr.trim()) console.error(`app server stderr:\n${stderr}`);
