@@ -1,8 +1,9 @@
-import { and, eq, sql } from "drizzle-orm";
+import { and, eq, type SQL, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import type { Member } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
 import { auditLog, cases, causes, checks, findings, members, observations, owners, symptoms, users, vehicles, workshops } from "~/db/schema";
+import type { Json } from "~/components/json-payload";
 import { refuse, requireId } from "~/http.server";
 
 const assigned = alias(members, "assigned");
@@ -14,7 +15,6 @@ const closedVehicle = alias(vehicles, "closed_vehicle");
 /** How many history rows a case screen shows; the full trail is in the audit log. */
 export const CASE_HISTORY_ROWS = 30;
 
-type Json<T> = T extends Date ? string : T extends object ? { [K in keyof T]: Json<T[K]> } : T;
 type ObservationRow = { id: string; symptomId: string; name: string; present: boolean; source: (typeof observations.$inferSelect)["source"]; note: string | null; recordedAt: Date; by: string | null };
 type FindingRow = { id: string; checkId: string; name: string; result: (typeof findings.$inferSelect)["result"]; reading: string | null; note: string | null; recordedAt: Date; by: string | null };
 type HistoryRow = { id: number; at: Date; action: string; after: unknown; actor: string | null };
@@ -46,6 +46,11 @@ const findingsJson = sql<Json<FindingRow>[]>`coalesce((
   left join ${users} on ${users.id} = ${members.userId}
   where ${findings.caseId} = ${cases.id} and ${findings.workshopId} = ${cases.workshopId}
 ), '[]'::json)`;
+
+// A screen reads everything; a change (evidence, conclusion, sign-off) needs the case and its
+// evidence but neither the history nor the outcome counts, so those two are only computed when
+// the "screen" parameter is true (PostgreSQL evaluates a CASE branch's subquery only when taken).
+const forScreen = (aggregate: SQL, empty: string) => sql`case when ${sql.placeholder("screen")}::boolean then ${aggregate} else ${sql.raw(`'${empty}'::json`)} end`;
 
 // Newest first, as the history panel reads; the audit rows written with every change of the case.
 const historyJson = sql<Json<HistoryRow>[]>`coalesce((
@@ -94,8 +99,8 @@ function caseQuery(db: Db) {
       workshop: { id: workshops.id, kbVersion: workshops.kbVersion, labourRatePerHour: workshops.labourRatePerHour, currency: workshops.currency, units: workshops.units },
       observations: observationsJson,
       findings: findingsJson,
-      history: historyJson,
-      outcomes: outcomesJson,
+      history: sql<Json<HistoryRow>[]>`${forScreen(historyJson, "[]")}`,
+      outcomes: sql<Record<string, number>>`${forScreen(outcomesJson, "{}")}`,
     })
     .from(cases)
     .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
@@ -120,10 +125,19 @@ const at = <T extends { recordedAt: string }>(r: T) => ({ ...r, recordedAt: new 
  * workshop is "not found", never "forbidden", so ids reveal nothing.
  */
 export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseId: string) {
+  return read(db, member, caseId, true);
+}
+
+/** The case and its evidence, for a change to it: no history, no outcome counts. */
+export async function loadCaseForChange(db: Db, member: Pick<Member, "workshopId">, caseId: string): Promise<CaseFields> {
+  return caseFields(await read(db, member, caseId, false));
+}
+
+async function read(db: Db, member: Pick<Member, "workshopId">, caseId: string, screen: boolean) {
   requireId(caseId, "No such case in this workshop.");
   let query = prepared.get(db);
   if (!query) prepared.set(db, (query = caseQuery(db)));
-  const [row] = await query.execute({ caseId, workshopId: member.workshopId });
+  const [row] = await query.execute({ caseId, workshopId: member.workshopId, screen });
   if (!row) refuse(404, "No such case in this workshop.");
   return {
     ...row,
@@ -133,7 +147,7 @@ export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseI
   };
 }
 
-export type CaseBundle = Awaited<ReturnType<typeof loadCase>>;
+export type CaseBundle = Awaited<ReturnType<typeof read>>;
 export type CaseFields = Omit<CaseBundle, "history" | "outcomes">;
 
 /** The case as its screens and the API show it; history and outcome counts travel on their own. */

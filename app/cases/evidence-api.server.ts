@@ -3,7 +3,7 @@ import { api, jsonBody } from "~/api.server";
 import { dbContext } from "~/context";
 import { refuse } from "~/http.server";
 import { FindingBody, ObservationBody } from "./api-schemas";
-import { loadCase } from "./case.server";
+import { loadCaseForChange } from "./case.server";
 import { assertCanWork, recordFinding, recordObservation, removeFinding, removeObservation } from "./evidence.server";
 
 type Args = { request: Request; params: { caseId: string; itemId?: string }; context: Readonly<RouterContextProvider> };
@@ -18,7 +18,7 @@ export function evidenceAction({ request, params, context }: Args, kind: keyof t
   const db = context.get(dbContext);
   const k = KINDS[kind];
   return api(request, db, null, async (member) => {
-    const bundle = await loadCase(db, member, params.caseId);
+    const bundle = await loadCaseForChange(db, member, params.caseId);
     assertCanWork(member, bundle); // before the body is read: a refused role learns nothing from validation
     if (request.method === "POST" && !params.itemId) {
       const body = await jsonBody(request, k.body as typeof ObservationBody & typeof FindingBody);

@@ -7,17 +7,17 @@ import { checks, findings, observations, symptoms } from "~/db/schema";
 import { refuse, requireId } from "~/http.server";
 import { evaluateRule, MeasureError } from "~/measure";
 import { SKILL_LEVELS } from "~/reasoning";
-import type { CaseBundle } from "./case.server";
+import type { CaseFields } from "./case.server";
 
 
 /** Who may add evidence: technicians and seniors on any case, an apprentice on the cases given to them. */
-export function assertCanWork(member: Member, c: Pick<CaseBundle, "assignedMemberId" | "state">) {
+export function assertCanWork(member: Member, c: Pick<CaseFields, "assignedMemberId" | "state">) {
   const own = can(member.role, "case:work-assigned") && c.assignedMemberId === member.memberId;
   if (!can(member.role, "case:work") && !own) refuse(403, "Your role cannot record evidence on this case.");
   if (c.state !== "open") refuse(409, "This case is no longer open, so its evidence is fixed. A senior can reopen it.");
 }
 
-export async function recordObservation(db: Db, member: Member, c: CaseBundle, input: { symptomId: string; present: boolean; source: "owner" | "technician"; note?: string }) {
+export async function recordObservation(db: Db, member: Member, c: CaseFields, input: { symptomId: string; present: boolean; source: "owner" | "technician"; note?: string }) {
   assertCanWork(member, c);
   const [symptom] = await db.select({ id: symptoms.id, name: symptoms.name }).from(symptoms).where(and(eq(symptoms.id, input.symptomId), eq(symptoms.workshopId, member.workshopId)));
   if (!symptom) refuse(400, "That symptom is not in this workshop's knowledge base.");
@@ -33,7 +33,7 @@ export async function recordObservation(db: Db, member: Member, c: CaseBundle, i
   });
 }
 
-export async function removeObservation(db: Db, member: Member, c: CaseBundle, observationId: string) {
+export async function removeObservation(db: Db, member: Member, c: CaseFields, observationId: string) {
   assertCanWork(member, c);
   requireId(observationId, "That observation is not on this case.");
   await db.transaction(async (tx) => {
@@ -43,7 +43,7 @@ export async function removeObservation(db: Db, member: Member, c: CaseBundle, o
   });
 }
 
-export async function recordFinding(db: Db, member: Member, c: CaseBundle, input: { checkId: string; result?: "pass" | "fail"; reading?: string; note?: string }) {
+export async function recordFinding(db: Db, member: Member, c: CaseFields, input: { checkId: string; result?: "pass" | "fail"; reading?: string; note?: string }) {
   assertCanWork(member, c);
   const [check] = await db
     .select({ id: checks.id, name: checks.name, skill: checks.skill, resultKind: checks.resultKind, rule: checks.rule, unit: checks.unit })
@@ -83,7 +83,7 @@ export async function recordFinding(db: Db, member: Member, c: CaseBundle, input
   });
 }
 
-export async function removeFinding(db: Db, member: Member, c: CaseBundle, findingId: string) {
+export async function removeFinding(db: Db, member: Member, c: CaseFields, findingId: string) {
   assertCanWork(member, c);
   requireId(findingId, "That finding is not on this case.");
   await db.transaction(async (tx) => {

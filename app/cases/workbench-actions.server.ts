@@ -3,7 +3,7 @@ import type { Member } from "~/auth/guards.server";
 import { can } from "~/auth/permissions";
 import { refuse } from "~/http.server";
 import type { Db } from "~/db/client.server";
-import type { CaseBundle } from "./case.server";
+import type { CaseFields } from "./case.server";
 import { askSenior, conclude, signOff, updateComplaint } from "./workflow.server";
 
 // The forms of the case workbench, told apart by their intent.
@@ -15,7 +15,7 @@ export const WorkbenchForm = z.discriminatedUnion("intent", [
 ]);
 
 /** The role check comes before the form is read, so a refused role learns nothing from validation. */
-export function assertIntentAllowed(member: Member, c: Pick<CaseBundle, "assignedMemberId">, intent: unknown) {
+export function assertIntentAllowed(member: Member, c: Pick<CaseFields, "assignedMemberId">, intent: unknown) {
   const own = member.role === "apprentice" && c.assignedMemberId === member.memberId;
   const allowed =
     intent === "conclude" ? can(member.role, "case:conclude") || own
@@ -26,7 +26,7 @@ export function assertIntentAllowed(member: Member, c: Pick<CaseBundle, "assigne
   if (!allowed) refuse(403, `Your role (${member.role}) cannot do this on a case.`);
 }
 
-export async function runWorkbenchForm(db: Db, member: Member, c: CaseBundle, form: z.infer<typeof WorkbenchForm>) {
+export async function runWorkbenchForm(db: Db, member: Member, c: CaseFields, form: z.infer<typeof WorkbenchForm>) {
   switch (form.intent) {
     case "conclude": {
       const state = await conclude(db, member, c, form);

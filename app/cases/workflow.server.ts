@@ -5,13 +5,13 @@ import { can } from "~/auth/permissions";
 import type { Db } from "~/db/client.server";
 import { cases, causes, mileageReadings, owners, vehicles } from "~/db/schema";
 import { refuse } from "~/http.server";
-import type { CaseBundle } from "./case.server";
+import type { CaseFields } from "./case.server";
 
 /**
  * A shared text field is written only if nobody changed the case since the writer loaded it; the
  * loser is told what the case says now, instead of overwriting it.
  */
-async function versionedUpdate(db: Pick<Db, "update" | "select">, c: CaseBundle, expected: number, set: Partial<typeof cases.$inferInsert>) {
+async function versionedUpdate(db: Pick<Db, "update" | "select">, c: CaseFields, expected: number, set: Partial<typeof cases.$inferInsert>) {
   const updated = await db
     .update(cases)
     .set({ ...set, version: sql`${cases.version} + 1` })
@@ -25,7 +25,7 @@ async function versionedUpdate(db: Pick<Db, "update" | "select">, c: CaseBundle,
   return updated[0].version;
 }
 
-export async function updateComplaint(db: Db, member: Member, c: CaseBundle, complaint: string, expected: number) {
+export async function updateComplaint(db: Db, member: Member, c: CaseFields, complaint: string, expected: number) {
   if (!can(member.role, "case:open")) refuse(403, "Your role cannot edit the complaint.");
   if (c.state === "closed") refuse(409, "This case is closed.");
   return db.transaction(async (tx) => {
@@ -35,7 +35,7 @@ export async function updateComplaint(db: Db, member: Member, c: CaseBundle, com
   });
 }
 
-export async function askSenior(db: Db, member: Member, c: CaseBundle, note: string) {
+export async function askSenior(db: Db, member: Member, c: CaseFields, note: string) {
   if (!can(member.role, "case:ask-senior")) refuse(403, "Your role cannot ask for a senior on this case.");
   if (c.state === "closed") refuse(409, "This case is closed.");
   await db.transaction(async (tx) => {
@@ -45,7 +45,7 @@ export async function askSenior(db: Db, member: Member, c: CaseBundle, note: str
 }
 
 /** A technician's conclusion stands; an apprentice's waits for a senior's sign-off. */
-export async function conclude(db: Db, member: Member, c: CaseBundle, input: { causeId: string; notes: string; version: number }) {
+export async function conclude(db: Db, member: Member, c: CaseFields, input: { causeId: string; notes: string; version: number }) {
   const apprenticeOwn = member.role === "apprentice" && c.assignedMemberId === member.memberId;
   if (!can(member.role, "case:conclude") && !apprenticeOwn) refuse(403, "Your role cannot conclude this case.");
   if (c.state !== "open") refuse(409, "This case is concluded already.");
@@ -59,7 +59,7 @@ export async function conclude(db: Db, member: Member, c: CaseBundle, input: { c
   return state;
 }
 
-export async function signOff(db: Db, member: Member, c: CaseBundle, input: { accept: boolean; note: string; version: number }) {
+export async function signOff(db: Db, member: Member, c: CaseFields, input: { accept: boolean; note: string; version: number }) {
   if (!can(member.role, "case:signoff")) refuse(403, "Only a senior technician signs off.");
   if (c.state !== "awaiting_signoff") refuse(409, "This case is not waiting for a sign-off.");
   const set = input.accept

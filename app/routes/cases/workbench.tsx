@@ -3,7 +3,7 @@ import { data, Form, Link } from "react-router";
 import { useEffect, useMemo } from "react";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { can } from "~/auth/permissions";
-import { caseFields, loadCase } from "~/cases/case.server";
+import { caseFields, loadCase, loadCaseForChange } from "~/cases/case.server";
 import { CaseHistory } from "~/components/case/case-history";
 import { diagnoseCase } from "~/cases/diagnosis.server";
 import { assertIntentAllowed, runWorkbenchForm, WorkbenchForm } from "~/cases/workbench-actions.server";
@@ -46,7 +46,7 @@ export async function loader({ params, context }: Route.LoaderArgs) {
 export async function action({ request, params, context }: Route.ActionArgs) {
   const member = context.get(memberContext);
   const db = context.get(dbContext);
-  const bundle = await loadCase(db, member, params.caseId);
+  const bundle = await loadCaseForChange(db, member, params.caseId);
   const form = Object.fromEntries(await request.formData());
   assertIntentAllowed(member, bundle, form.intent);
   const parsed = WorkbenchForm.safeParse(form);
