@@ -3,7 +3,8 @@
 import type { Plan, Ranking, WhatIf } from "~/reasoning";
 import type { Knowledge } from "./build-model";
 
-const WHY_CAUSES = 5; // causes whose evidence is listed: the ones the screen shows with a "why"
+/** Causes the screen shows with their "why"; the evidence is listed for these only. */
+export const WHY_CAUSES = 5;
 const WHY_ITEMS = 8; // pieces of evidence per cause
 const WHY_MIN = 0.01; // |log likelihood ratio| below this moves nothing visible
 const DETAILED_STEPS = 12; // steps sent with instructions: more than the plan offers at once (it skips unlikely ones)
@@ -51,7 +52,8 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
   // Full instructions only for the steps the screen opens; the rest carry what the folded list shows.
   const step = <T extends { checkId: string }>(s: T, i: number) => {
     const k = check.get(s.checkId);
-    if (i >= DETAILED_STEPS) return { ...s, name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: [], access: [], cautions: [], instructions: [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, rule: k?.rule ?? null, failMeans: "" };
+    // Cautions, tools and access always travel: any step may end up on the screen.
+    if (i >= DETAILED_STEPS) return { ...s, name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: k?.tools ?? [], access: k?.access ?? [], cautions: k?.cautions ?? [], instructions: [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, rule: k?.rule ?? null, failMeans: "" };
     return { ...s, name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: k?.tools ?? [], access: k?.access ?? [], cautions: k?.cautions ?? [], instructions: k?.instructions ?? [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, rule: k?.rule ?? null, failMeans: k?.failMeans ?? "" };
   };
   const whatIfFor = (w: WhatIf | null) => (w ? { checkId: w.checkId, pFail: w.pFail, ifFail: outcome(w.ifFail), ifPass: outcome(w.ifPass) } : null);

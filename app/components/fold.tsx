@@ -1,4 +1,4 @@
-import { useState, type ReactNode } from "react";
+import { useEffect, useRef, useState, type ReactNode } from "react";
 
 /**
  * A disclosure whose contents are rendered only once it has been opened. The workbench holds many
@@ -7,9 +7,17 @@ import { useState, type ReactNode } from "react";
  * it opens with Enter or Space and announces its state without extra ARIA.
  */
 export function Fold({ summary, open = false, className = "", summaryClassName = "cursor-pointer", children }: { summary: ReactNode; open?: boolean; className?: string; summaryClassName?: string; children: ReactNode }) {
-  const [shown, setShown] = useState(open);
+  const ref = useRef<HTMLDetailsElement>(null);
+  const [opened, setOpened] = useState(open);
+  // Opened before the page's script had loaded: React never saw that toggle.
+  useEffect(() => {
+    if (ref.current?.open) setOpened(true);
+  }, []);
+  // A fold told to open (a step that became next) shows at once; once shown, contents stay.
+  if (open && !opened) setOpened(true);
+  const shown = opened || open;
   return (
-    <details open={open} className={className} onToggle={(e) => e.currentTarget.open && setShown(true)}>
+    <details ref={ref} open={open} className={className} onToggle={(e) => e.currentTarget.open && setOpened(true)}>
       <summary className={summaryClassName}>{summary}</summary>
       {shown ? children : null}
     </details>

@@ -107,7 +107,12 @@ describe("an apprentice follows the plan and asks a senior", () => {
     const step = await plan.locator("[data-step]").first().getAttribute("aria-label");
     // Checks above an apprentice's level wait for a senior and are never offered.
     await page.getByRole("heading", { name: "Waiting for a senior" }).waitFor();
-    await page.getByRole("note", { name: "Cautions" }).first().waitFor({ state: "attached" }).catch(() => undefined);
+    // The check on offer shows every caution the knowledge base gives it, in full.
+    const offered = await page.evaluate(async (url) => (await (await fetch(url)).json()).diagnosis.plan.steps[0] as { name: string; cautions: string[] }, `/api/cases/${seedId("case:b2")}`);
+    expect(offered.name).toBe(step);
+    const notes = plan.locator("[data-step]").first().getByRole("note", { name: "Cautions" });
+    await expect(notes.count()).resolves.toBe(offered.cautions.length ? 1 : 0);
+    if (offered.cautions.length) await expect(notes.locator("li").count()).resolves.toBe(offered.cautions.length);
     const measurement = plan.getByLabel(/^Reading for/);
     if (await measurement.count()) {
       // A reading in the check's own unit (from the limit shown in the field); the value is arbitrary.

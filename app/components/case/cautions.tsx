@@ -13,19 +13,6 @@ export const CAUTION_TEXT: Record<string, string> = {
   battery_acid: "Battery: acid and explosive gas; eye protection, no sparks, disconnect the negative first.",
 };
 
-const CAUTION_WORD: Record<string, string> = {
-  lifting: "lifting",
-  hot_parts: "hot parts",
-  fuel: "fuel",
-  brake_hydraulics: "brake hydraulics",
-  airbag: "airbags",
-  high_voltage: "high voltage",
-  rotating_parts: "rotating parts",
-  pressurised_cooling: "cooling under pressure",
-  exhaust_fumes: "exhaust fumes",
-  battery_acid: "battery",
-};
-
 function Warning() {
   return (
     <svg viewBox="0 0 24 24" className="h-5 w-5 shrink-0" aria-hidden="true">
@@ -33,17 +20,6 @@ function Warning() {
       <rect x="11" y="9" width="2" height="6.5" fill="#16181b" />
       <rect x="11" y="17" width="2" height="2" fill="#16181b" />
     </svg>
-  );
-}
-
-/** The hazards of a check in a word each, for a check further down the plan; the full text opens with it. */
-export function CautionLine({ cautions }: { cautions: string[] }) {
-  if (cautions.length === 0) return null;
-  return (
-    <p role="note" aria-label="Cautions" className="mt-2 flex items-center gap-2 text-sm font-medium">
-      <Warning />
-      Take care: {cautions.map((c) => CAUTION_WORD[c] ?? c).join(" · ")}
-    </p>
   );
 }
 

@@ -2,7 +2,7 @@ import { useEffect, useRef, useState } from "react";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 import { formatMoney, formatPercent } from "../format";
 import { Fold } from "../fold";
-import { CautionLine, Cautions } from "./cautions";
+import { Cautions } from "./cautions";
 
 type Step = Diagnosis["plan"]["steps"][number];
 export type RecordResult = (step: Step, result: { result?: "pass" | "fail"; reading?: string }) => void;
@@ -120,16 +120,14 @@ function PlanStep({ step, first, currency, record, busy }: { step: Step; first: 
       <p className="text-sm text-graphite-600">
         {[step.skill, ...step.access.map((a) => ACCESS_LABEL[a] ?? a), ...step.tools].join(" · ")}
       </p>
-      {/* The next check shows its cautions in full; the ones after it name the hazards, and the
-          full text opens with their instructions. */}
-      {first ? <Cautions cautions={step.cautions} /> : <CautionLine cautions={step.cautions} />}
+      {/* Every check on offer can be recorded straight away (buttons, P and F), so its cautions
+          are always shown in full; only the instructions fold. */}
+      <Cautions cautions={step.cautions} />
       {step.instructions.length ? (
         <Fold className="mt-2" open={first} summaryClassName="cursor-pointer text-sm font-medium" summary="How to do it">
-          {first ? null : <Cautions cautions={step.cautions} />}
           <ol className="mt-1 list-decimal pl-6 text-sm">
             {step.instructions.map((line, i) => <li key={i}>{line}</li>)}
           </ol>
-          {step.failMeans && !first ? <p className="mt-1 text-sm text-graphite-600">A fail means: {step.failMeans}</p> : null}
         </Fold>
       ) : null}
       {step.resultKind === "measurement" ? (
@@ -156,7 +154,7 @@ function PlanStep({ step, first, currency, record, busy }: { step: Step; first: 
           </button>
         </div>
       )}
-      {step.failMeans && (first || !step.instructions.length) ? <p className="mt-1 text-sm text-graphite-600">A fail means: {step.failMeans}</p> : null}
+      {step.failMeans ? <p className="mt-1 text-sm text-graphite-600">A fail means: {step.failMeans}</p> : null}
     </li>
   );
 }

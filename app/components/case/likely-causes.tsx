@@ -1,10 +1,11 @@
 import { useEffect, useRef } from "react";
-import type { ShownCause } from "~/cases/present-diagnosis";
+import { type ShownCause, WHY_CAUSES } from "~/cases/present-diagnosis";
 import { Fold } from "../fold";
 import { formatPercent } from "../format";
 import { PriorityMark } from "../priority";
 
-const SHOWN = 5;
+// The causes shown with their "why" are exactly those the server sends it for.
+const SHOWN = WHY_CAUSES;
 
 /** Likely causes as bars of their share; "not in the knowledge base" always has its own bar. */
 export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlisted: number }) {

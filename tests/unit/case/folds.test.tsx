@@ -1,10 +1,13 @@
 // The workbench renders what the technician reads first and leaves the rest folded until asked:
-// a folded "why" or set of instructions is not in the page at all until it is opened, and the
-// next check always shows its cautions in full while later checks name their hazards.
-import { fireEvent, render, screen, within } from "@testing-library/react";
+// a folded "why" or set of instructions is not in the page at all until it is opened. Cautions are
+// never folded: every check on offer can be recorded at once, so each shows them in full.
+import { act, fireEvent, render, screen, within } from "@testing-library/react";
+import { hydrateRoot } from "react-dom/client";
+import { renderToString } from "react-dom/server";
 import { describe, expect, it, vi } from "vitest";
 import { CheckPlan } from "~/components/case/check-plan";
 import { LikelyCauses } from "~/components/case/likely-causes";
+import { Fold } from "~/components/fold";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 
 type Step = Diagnosis["plan"]["steps"][number];
@@ -29,18 +32,47 @@ describe("likely causes", () => {
 });
 
 describe("check plan", () => {
-  it("gives the next check its full cautions and instructions, later checks a named hazard and folded steps", () => {
+  it("shows every offered check's cautions in full and folds only the later checks' instructions", () => {
     render(<CheckPlan plan={plan([step(1, ["lifting"]), step(2, ["hot_parts"])])} currency="GBP" record={vi.fn()} busy={false} error={null} />);
     const [first, second] = screen.getAllByRole("listitem").filter((li) => li.hasAttribute("data-step"));
     expect(within(first).getByText(/never work under a car held only by a jack/)).toBeTruthy();
     expect(within(first).getByText("Do step 1")).toBeTruthy();
-    expect(within(second).getByRole("note", { name: "Cautions" }).textContent).toContain("hot parts");
+    expect(within(second).getByRole("note", { name: "Cautions" }).textContent).toMatch(/exhaust, engine and brakes stay hot/);
+    expect(within(second).getByText(/A fail means: Fault 2/)).toBeTruthy();
     expect(within(second).queryByText("Do step 2")).toBeNull();
     const details = second.querySelector("details")!;
     details.open = true;
     fireEvent(details, new Event("toggle"));
     expect(within(second).getByText("Do step 2")).toBeTruthy();
-    expect(within(second).getByText(/exhaust, engine and brakes stay hot/)).toBeTruthy();
-    expect(within(second).getByText(/A fail means: Fault 2/)).toBeTruthy();
+  });
+
+  it("shows the cautions of a check that has no instructions", () => {
+    const bare = { ...step(2, ["high_voltage"]), instructions: [] };
+    render(<CheckPlan plan={plan([step(1), bare])} currency="GBP" record={vi.fn()} busy={false} error={null} />);
+    const second = screen.getAllByRole("listitem").filter((li) => li.hasAttribute("data-step"))[1];
+    expect(within(second).getByRole("note", { name: "Cautions" }).textContent).toMatch(/only trained and authorised people/);
+  });
+});
+
+describe("Fold", () => {
+  it("renders its contents at once when told to open, and keeps them", () => {
+    const { rerender } = render(<Fold summary="More" open={false}>inside</Fold>);
+    expect(screen.queryByText("inside")).toBeNull();
+    rerender(<Fold summary="More" open>inside</Fold>);
+    expect(screen.getByText("inside")).toBeTruthy();
+    rerender(<Fold summary="More" open={false}>inside</Fold>);
+    expect(screen.getByText("inside")).toBeTruthy();
+  });
+
+  it("fills a fold that was opened before the page's script took over", async () => {
+    const container = document.createElement("div");
+    container.innerHTML = renderToString(<Fold summary="More">inside</Fold>);
+    document.body.append(container);
+    container.querySelector("details")!.open = true; // the browser opened it; React was not there yet
+    await act(async () => {
+      hydrateRoot(container, <Fold summary="More">inside</Fold>);
+    });
+    expect(container.textContent).toContain("inside");
+    container.remove();
   });
 });
