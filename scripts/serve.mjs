@@ -15,30 +15,49 @@ import morgan from "morgan";
 import serveStatic from "serve-static";
 
 const port = Number(process.env.PORT ?? 3000);
-const host = process.env.HOST ?? "127.0.0.1";
+const host = process.env.HOST ?? "127.0.0.1"; // loopback unless told: set HOST=0.0.0.0 in a container
 const workers = Math.max(1, Number(process.env.WEB_CONCURRENCY ?? 1) || 1);
 
 if (workers > 1 && cluster.isPrimary) supervise();
 else await serve();
 
-/** Starts the workers, replaces one that dies, and stops them all on SIGTERM or SIGINT. */
+/**
+ * Starts the workers and replaces one that dies, waiting longer after each recent death; when they
+ * keep dying (a missing secret or build stops every start), it gives up with an error instead of
+ * looping. SIGTERM or SIGINT stops them all.
+ */
 function supervise() {
   let stopping = false;
+  let alive = 0;
+  const deaths = [];
   for (let i = 0; i < workers; i++) cluster.fork();
-  cluster.on("online", (worker) => worker.id === workers && console.log(`[ramplight] serving on http://${host}:${port} with ${workers} worker processes`));
+  cluster.on("online", () => ++alive === workers && console.log(`[ramplight] serving on http://${host}:${port} with ${workers} worker processes`));
   cluster.on("exit", (worker, code, signal) => {
-    if (stopping) {
-      if (Object.keys(cluster.workers ?? {}).length === 0) process.exit(0);
-      return;
+    if (stopping) return;
+    const now = Date.now();
+    deaths.push(now);
+    while (deaths[0] < now - 60_000) deaths.shift();
+    if (deaths.length > workers * 3) {
+      console.error(`[ramplight] ${deaths.length} worker processes died within a minute; stopping`);
+      process.exit(1);
     }
-    console.error(`[ramplight] worker ${worker.process.pid} exited (${signal ?? code}); starting another`);
-    cluster.fork();
+    const wait = Math.min(30_000, 250 * 2 ** (deaths.length - 1));
+    console.error(`[ramplight] worker ${worker.process.pid} exited (${signal ?? code}); another starts in ${wait} ms`);
+    setTimeout(() => !stopping && cluster.fork(), wait);
   });
   for (const signal of ["SIGTERM", "SIGINT"]) {
     process.on(signal, () => {
+      if (stopping) return;
       stopping = true;
-      for (const worker of Object.values(cluster.workers ?? {})) worker?.kill("SIGTERM");
-      setTimeout(() => process.exit(0), 6_000).unref();
+      const running = Object.values(cluster.workers ?? {}).filter(Boolean);
+      let left = running.length;
+      if (left === 0) process.exit(0);
+      for (const worker of running) {
+        worker.once("exit", () => --left === 0 && process.exit(0));
+        worker.kill("SIGTERM");
+      }
+      // Workers finish in-flight requests within 5 s; past 6 s the stop was forced.
+      setTimeout(() => process.exit(1), 6_000).unref();
     });
   }
 }
@@ -52,15 +71,21 @@ async function serve() {
   const assets = serveStatic(client, { immutable: true, maxAge: "1y", index: false, fallthrough: false });
   const files = serveStatic(client, { maxAge: "1h", index: false });
   const compress = compression();
-  const log = process.env.RL_ACCESS_LOG === "0" ? (_req, _res, next) => next() : morgan("tiny");
+  // The path without its query: sign-in callbacks carry one-time codes there.
+  morgan.token("path", (req) => (req.url ?? "/").split("?")[0]);
+  const log = process.env.RL_ACCESS_LOG === "0" ? (_req, _res, next) => next() : morgan(":method :path :status :res[content-length] - :response-time ms");
   // Each request's context carries the socket's address (for the sign-in rate limit, app/context.ts).
   const app = createRequestListener({
     build,
     mode: process.env.NODE_ENV ?? "production",
     getLoadContext: (_request, client) => build.entry.module.requestContext(client.address ?? null),
   });
-  // Only a path with a file extension can be a public file; pages and the API never touch the disk.
-  const looksLikeFile = (url) => /\.[a-z0-9]+$/i.test(url.split("?")[0]);
+  // Only a path with a file extension can be a public file; pages, their data requests (".data")
+  // and the API never touch the disk.
+  const looksLikeFile = (url) => {
+    const p = url.split("?")[0];
+    return !p.endsWith(".data") && /\.[a-z0-9]+$/i.test(p);
+  };
 
   const server = http.createServer((req, res) => {
     log(req, res, () =>
