@@ -15,6 +15,8 @@ export const streamTimeout = 5_000;
 // The production server (scripts/serve.mjs) builds each request's context with this, so the
 // caller's socket address reaches the sign-in rate limit.
 export { requestContext } from "./context";
+// …and closes the database pool on its way out; tests running the build close it the same way.
+export { closeServerDb } from "./db/pool.server";
 
 export const handleDataRequest: HandleDataRequestFunction = (response) => {
   response.headers.set("X-Content-Type-Options", "nosniff");

@@ -107,8 +107,9 @@ async function serve() {
     process.on(signal, () => {
       if (closing) return;
       closing = true;
-      // Finish what is in flight, then leave; a stuck connection does not hold the exit for long.
-      server.close(() => process.exit(0));
+      // Finish what is in flight, close the database pool, then leave; a stuck connection does
+      // not hold the exit for long.
+      server.close(() => void build.entry.module.closeServerDb().finally(() => process.exit(0)));
       server.closeIdleConnections();
       setTimeout(() => process.exit(0), 5_000).unref();
     });

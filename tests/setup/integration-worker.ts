@@ -1,5 +1,6 @@
 import { afterAll, beforeAll } from "vitest";
 import { createDb, type Db } from "../../app/db/client.server";
+import { closeServerDb } from "../../app/db/pool.server";
 import { cloneTemplate, dropDatabase } from "./pg-admin";
 import { TEST_ENV } from "./test-env";
 
@@ -18,6 +19,8 @@ beforeAll(async () => {
 afterAll(async () => {
   if (!current) return;
   await current.end();
+  // Route modules run through the router reach the database by the process's own pool.
+  await closeServerDb();
   await dropDatabase(current.name);
 });
 

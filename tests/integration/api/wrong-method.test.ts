@@ -6,20 +6,27 @@ import { existsSync } from "node:fs";
 import { resolve } from "node:path";
 import { pathToFileURL } from "node:url";
 import { createRequestHandler, type ServerBuild } from "react-router";
-import { beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { testDb } from "../../setup/integration-worker";
 import { APP, caseId, cookieFor } from "./helpers";
 
 const BUILD = resolve("build/server/index.js");
 let handle: (request: Request) => Promise<Response>;
 let cookie: string;
+let closePool: (() => Promise<void>) | undefined;
 
 beforeAll(async () => {
   if (!existsSync(BUILD)) return;
   // process.env.DATABASE_URL points at this file's database now, so the build's pool uses it.
   const build = (await import(/* @vite-ignore */ pathToFileURL(BUILD).href)) as ServerBuild;
   handle = createRequestHandler(build, "production");
+  closePool = (build.entry.module as { closeServerDb?: () => Promise<void> }).closeServerDb;
   cookie = await cookieFor(testDb(), "priya-hale");
+});
+
+// The build has its own pool; it closes before this file's database is dropped.
+afterAll(async () => {
+  await closePool?.();
 });
 
 async function send(method: string, path: string) {
