@@ -47,10 +47,12 @@ const findingsJson = sql<Json<FindingRow>[]>`coalesce((
   where ${findings.caseId} = ${cases.id} and ${findings.workshopId} = ${cases.workshopId}
 ), '[]'::json)`;
 
-// A screen reads everything; a change (evidence, conclusion, sign-off) needs the case and its
-// evidence but neither the history nor the outcome counts, so those two are only computed when
-// the "screen" parameter is true (PostgreSQL evaluates a CASE branch's subquery only when taken).
-const forScreen = (aggregate: SQL, empty: string) => sql`case when ${sql.placeholder("screen")}::boolean then ${aggregate} else ${sql.raw(`'${empty}'::json`)} end`;
+// Each read asks only for what it uses: the workbench page wants the history, a diagnosis the
+// outcome counts, a change (evidence, conclusion, sign-off) neither. One prepared query serves all
+// three, the aggregates switched by parameters (PostgreSQL evaluates a CASE branch's subquery only
+// when that branch is taken).
+const when = (flag: "history" | "outcomes", aggregate: SQL, empty: string) =>
+  sql`case when ${sql.placeholder(flag)}::boolean then ${aggregate} else ${sql.raw(`'${empty}'::json`)} end`;
 
 // Newest first, as the history panel reads; the audit rows written with every change of the case.
 const historyJson = sql<Json<HistoryRow>[]>`coalesce((
@@ -99,8 +101,8 @@ function caseQuery(db: Db) {
       workshop: { id: workshops.id, kbVersion: workshops.kbVersion, labourRatePerHour: workshops.labourRatePerHour, currency: workshops.currency, units: workshops.units },
       observations: observationsJson,
       findings: findingsJson,
-      history: sql<Json<HistoryRow>[]>`${forScreen(historyJson, "[]")}`,
-      outcomes: sql<Record<string, number>>`${forScreen(outcomesJson, "{}")}`,
+      history: sql<Json<HistoryRow>[]>`${when("history", historyJson, "[]")}`,
+      outcomes: sql<Record<string, number>>`${when("outcomes", outcomesJson, "{}")}`,
     })
     .from(cases)
     .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
@@ -120,24 +122,31 @@ const prepared = new WeakMap<Db, ReturnType<typeof caseQuery>>();
 const at = <T extends { recordedAt: string }>(r: T) => ({ ...r, recordedAt: new Date(r.recordedAt) });
 
 /**
- * Everything a case screen shows in one query: the case with its vehicle, owner and workshop, its
- * observations, findings, recent history and the workshop's outcome counts. A case of another
- * workshop is "not found", never "forbidden", so ids reveal nothing.
+ * A case with what its likely causes need: vehicle, owner, workshop, observations, findings and the
+ * workshop's outcome counts, in one query. A case of another workshop is "not found", never
+ * "forbidden", so ids reveal nothing.
  */
-export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseId: string) {
-  return read(db, member, caseId, true);
+export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseId: string): Promise<CaseBundle> {
+  const { history: _h, ...bundle } = await read(db, member, caseId, { history: false, outcomes: true });
+  return bundle;
+}
+
+/** The same, with the latest history rows: what the case workbench shows. */
+export async function loadCaseWithHistory(db: Db, member: Pick<Member, "workshopId">, caseId: string) {
+  return read(db, member, caseId, { history: true, outcomes: true });
 }
 
 /** The case and its evidence, for a change to it: no history, no outcome counts. */
 export async function loadCaseForChange(db: Db, member: Pick<Member, "workshopId">, caseId: string): Promise<CaseFields> {
-  return caseFields(await read(db, member, caseId, false));
+  const { history: _h, outcomes: _o, ...fields } = await read(db, member, caseId, { history: false, outcomes: false });
+  return fields;
 }
 
-async function read(db: Db, member: Pick<Member, "workshopId">, caseId: string, screen: boolean) {
+async function read(db: Db, member: Pick<Member, "workshopId">, caseId: string, want: { history: boolean; outcomes: boolean }) {
   requireId(caseId, "No such case in this workshop.");
   let query = prepared.get(db);
   if (!query) prepared.set(db, (query = caseQuery(db)));
-  const [row] = await query.execute({ caseId, workshopId: member.workshopId, screen });
+  const [row] = await query.execute({ caseId, workshopId: member.workshopId, ...want });
   if (!row) refuse(404, "No such case in this workshop.");
   return {
     ...row,
@@ -147,11 +156,11 @@ async function read(db: Db, member: Pick<Member, "workshopId">, caseId: string, 
   };
 }
 
-export type CaseBundle = Awaited<ReturnType<typeof read>>;
-export type CaseFields = Omit<CaseBundle, "history" | "outcomes">;
+export type CaseBundle = Omit<Awaited<ReturnType<typeof read>>, "history">;
+export type CaseFields = Omit<CaseBundle, "outcomes">;
 
-/** The case as its screens and the API show it; history and outcome counts travel on their own. */
-export function caseFields({ history: _h, outcomes: _o, ...fields }: CaseBundle): CaseFields {
+/** The case as its screens and the API show it; the outcome counts only feed the priors. */
+export function caseFields({ outcomes: _o, ...fields }: CaseBundle): CaseFields {
   return fields;
 }
 

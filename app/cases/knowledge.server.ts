@@ -1,6 +1,6 @@
-import { and, count, eq, isNotNull } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
-import { cases, causes, checkLinks, checks, symptomLinks, symptoms, vehicles, workshops } from "~/db/schema";
+import { causes, checkLinks, checks, symptomLinks, symptoms, workshops } from "~/db/schema";
 import type { Knowledge } from "./build-model";
 
 // The knowledge base changes rarely and is read on every re-rank: keep one copy per workshop and
@@ -48,15 +48,4 @@ export async function loadKnowledge(db: Db, workshopId: string, version: number)
   for (const old of cache.keys()) if (old.startsWith(`${workshopId}:`)) cache.delete(old);
   cache.set(key, kb);
   return kb;
-}
-
-/** Confirmed causes of the workshop's closed cases for vehicles of this fuel type: the learning signal. */
-export async function outcomeCounts(db: Db, workshopId: string, fuelType: string): Promise<Record<string, number>> {
-  const rows = await db
-    .select({ causeId: cases.conclusionCauseId, n: count() })
-    .from(cases)
-    .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
-    .where(and(eq(cases.workshopId, workshopId), eq(cases.state, "closed"), isNotNull(cases.conclusionCauseId), eq(vehicles.fuelType, fuelType as typeof vehicles.$inferSelect.fuelType)))
-    .groupBy(cases.conclusionCauseId);
-  return Object.fromEntries(rows.map((r) => [r.causeId!, r.n]));
 }

@@ -9,6 +9,17 @@ export const PRIORITY_COPY: Record<Priority, { label: string; description: strin
   sound: { label: "Sound", description: "Checked and in good order." },
 };
 
+/** The warning triangle: the "Soon" priority, and the mark beside a check's cautions. */
+export function WarningTriangle({ className = "h-6 w-6" }: { className?: string }) {
+  return (
+    <svg viewBox="0 0 24 24" className={`${className} shrink-0`} aria-hidden="true">
+      <path d="M12 2.5 L22.5 21 H1.5 Z" fill="var(--color-soon)" stroke="#16181b" strokeWidth="1.5" strokeLinejoin="round" />
+      <rect x="11" y="9" width="2" height="6.5" fill="#16181b" />
+      <rect x="11" y="17" width="2" height="2" fill="#16181b" />
+    </svg>
+  );
+}
+
 function Shape({ priority }: { priority: Priority }) {
   switch (priority) {
     case "stop":
@@ -19,13 +30,7 @@ function Shape({ priority }: { priority: Priority }) {
         </svg>
       );
     case "soon":
-      return (
-        <svg viewBox="0 0 24 24" className="h-6 w-6 shrink-0" aria-hidden="true">
-          <path d="M12 2.5 L22.5 21 H1.5 Z" fill="var(--color-soon)" stroke="#16181b" strokeWidth="1.5" strokeLinejoin="round" />
-          <rect x="11" y="9" width="2" height="6.5" fill="#16181b" />
-          <rect x="11" y="17" width="2" height="2" fill="#16181b" />
-        </svg>
-      );
+      return <WarningTriangle />;
     case "watch":
       return (
         <svg viewBox="0 0 24 24" className="h-6 w-6 shrink-0" aria-hidden="true">

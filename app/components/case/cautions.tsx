@@ -1,3 +1,5 @@
+import { WarningTriangle } from "../priority";
+
 // Cautions shown with a check, in a form that cannot be missed. They point to the maker's
 // procedure and local rules: Ramplight suggests; a qualified person decides.
 export const CAUTION_TEXT: Record<string, string> = {
@@ -13,22 +15,12 @@ export const CAUTION_TEXT: Record<string, string> = {
   battery_acid: "Battery: acid and explosive gas; eye protection, no sparks, disconnect the negative first.",
 };
 
-function Warning() {
-  return (
-    <svg viewBox="0 0 24 24" className="h-5 w-5 shrink-0" aria-hidden="true">
-      <path d="M12 2.5 L22.5 21 H1.5 Z" fill="var(--color-soon)" stroke="#16181b" strokeWidth="1.5" strokeLinejoin="round" />
-      <rect x="11" y="9" width="2" height="6.5" fill="#16181b" />
-      <rect x="11" y="17" width="2" height="2" fill="#16181b" />
-    </svg>
-  );
-}
-
 export function Cautions({ cautions }: { cautions: string[] }) {
   if (cautions.length === 0) return null;
   return (
     <div role="note" aria-label="Cautions" className="mt-2 rounded-lg border-2 border-soon bg-card p-3">
       <p className="flex items-center gap-2 font-semibold">
-        <Warning />
+        <WarningTriangle className="h-5 w-5" />
         Take care
       </p>
       <ul className="mt-1 list-disc pl-6 text-sm">

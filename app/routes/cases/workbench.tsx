@@ -3,7 +3,7 @@ import { data, Form, Link } from "react-router";
 import { useEffect, useMemo } from "react";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { can } from "~/auth/permissions";
-import { caseFields, loadCase, loadCaseForChange } from "~/cases/case.server";
+import { caseFields, loadCaseForChange, loadCaseWithHistory } from "~/cases/case.server";
 import { CaseHistory } from "~/components/case/case-history";
 import { diagnoseCase } from "~/cases/diagnosis.server";
 import { assertIntentAllowed, runWorkbenchForm, WorkbenchForm } from "~/cases/workbench-actions.server";
@@ -28,7 +28,7 @@ export const handle = { quickFind: "own" };
 export async function loader({ params, context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "case:read");
   const db = context.get(dbContext);
-  const bundle = await loadCase(db, member, params.caseId);
+  const { history, ...bundle } = await loadCaseWithHistory(db, member, params.caseId);
   const { model: _m, evidence: _e, ...diagnosis } = await diagnoseCase(db, member, bundle);
   // The browser keeps one built index per knowledge-base version instead of rebuilding on every revalidation.
   const quickFindCacheKey = quickFindKey(member.workshopId, `${bundle.workshop.kbVersion}-${bundle.id}`, "case");
@@ -36,7 +36,7 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const view: CaseView = { case: caseFields(bundle), diagnosis };
   return {
     // The same shape the browser later fetches from /api/cases/:id, so the live copy starts from it.
-    page: toPayload({ view, history: bundle.history }),
+    page: toPayload({ view, history }),
     quickFindCacheKey,
     number: bundle.number,
     me: { role: member.role, canWork, mayConclude: can(member.role, "case:conclude") || (member.role === "apprentice" && bundle.assignedMemberId === member.memberId), maySignOff: can(member.role, "case:signoff"), mayEditComplaint: can(member.role, "case:open") && bundle.state !== "closed" },

@@ -2,9 +2,9 @@
 // change (evidence, conclusion, sign-off) reads the case and its evidence without those aggregates.
 // Another workshop's case is "not found" either way.
 import { describe, expect, it } from "vitest";
-import { loadCase, loadCaseForChange } from "~/cases/case.server";
+import { loadCase, loadCaseForChange, loadCaseWithHistory } from "~/cases/case.server";
 import { auditLog } from "~/db/schema";
-import { outcomeCounts } from "~/cases/knowledge.server";
+import { outcomeCounts } from "./outcome-counts";
 import { caseId, memberFor, refusal } from "../api/helpers";
 import { testDb } from "../../setup/integration-worker";
 
@@ -20,7 +20,7 @@ describe("reading a case", () => {
       row("case.finding", "2026-11-30T10:00:00Z", caseId("b2")), // another case
       row("case.finding", "2026-11-30T10:00:00Z", id, null), // no workshop: not this workshop's trail
     ]);
-    const c = await loadCase(testDb(), member, id);
+    const c = await loadCaseWithHistory(testDb(), member, id);
     expect(c.history.map((h) => h.action)).toEqual(["case.finding", "case.observation", "case.open"]);
     expect(c.history.map((h) => h.actor)).toEqual(["Priya Hale", "Priya Hale", "Priya Hale"]);
     expect(c.history.every((h) => h.at instanceof Date)).toBe(true);
@@ -31,7 +31,7 @@ describe("reading a case", () => {
 
   it("gives a change the same case and evidence, without history or outcome counts", async () => {
     const member = await memberFor(testDb(), "priya-hale");
-    const [screen, change] = [await loadCase(testDb(), member, caseId("b1")), await loadCaseForChange(testDb(), member, caseId("b1"))];
+    const [screen, change] = [await loadCaseWithHistory(testDb(), member, caseId("b1")), await loadCaseForChange(testDb(), member, caseId("b1"))];
     expect(change).not.toHaveProperty("history");
     expect(change).not.toHaveProperty("outcomes");
     const { history: _h, outcomes: _o, ...fields } = screen;

@@ -4,20 +4,13 @@
 import { describe, expect, it } from "vitest";
 import { rankCauses, type Evidence, type Model } from "~/reasoning";
 import { dentist } from "./reference/dentist";
+import { leaky } from "./reference/leaky";
 import { generateCase } from "./reference/generate";
 
 const logit = (p: number) => Math.log(p / (1 - p));
 
-// Same hand case as the posterior tests: P(A) = .6, P(B) = .3, P(U) = .1; s links A with .8, leak .1.
-const model: Model = {
-  causes: [
-    { id: "A", prior: 2 },
-    { id: "B", prior: 1 },
-  ],
-  symptoms: [{ id: "s", leak: 0.1 }],
-  links: [{ symptomId: "s", causeId: "A", p: 0.8 }],
-  checks: [{ id: "k", cost: 10, falseAlarm: 0.2, bears: [{ causeId: "A", pFail: 0.9 }] }],
-};
+// Same hand case as the posterior tests (./reference/leaky.ts): P(A) = .6, P(B) = .3, P(U) = .1; s links A with .8, leak .1.
+const model = leaky;
 const sPresent: Evidence = { observations: [{ symptomId: "s", present: true }], findings: [] };
 
 describe("contributions", () => {

@@ -2,8 +2,9 @@
 // naive Bayes, P(C | e₁…eₙ) = α P(C) Π P(eᵢ | C) (Russell & Norvig, Artificial Intelligence:
 // A Modern Approach, ch. 13), so the textbook figures must come out to floating-point precision.
 import { describe, expect, it } from "vitest";
-import { rankCauses, type Model } from "~/reasoning";
+import { rankCauses } from "~/reasoning";
 import { dentist } from "./reference/dentist";
+import { leaky } from "./reference/leaky";
 
 const prob = (r: ReturnType<typeof rankCauses>, id: string) => r.causes.find((c) => c.id === id)!.probability;
 
@@ -51,20 +52,7 @@ describe("Russell & Norvig ch. 13 dentist example", () => {
   });
 });
 
-// A hand case with a leak, an unlisted share and a check (arithmetic by hand):
-//   causes A (base 2), B (base 1); unlistedPrior .1 → P(A) = .9 × 2/3 = .6, P(B) = .3, P(U) = .1
-//   symptom s, leak .1, linked to A with .8 (B and U use the leak .1)
-//   check k: P(fail | A) = .9, false alarm .2 (B and U)
-const leaky: Model = {
-  causes: [
-    { id: "A", prior: 2 },
-    { id: "B", prior: 1 },
-  ],
-  symptoms: [{ id: "s", leak: 0.1 }],
-  links: [{ symptomId: "s", causeId: "A", p: 0.8 }],
-  checks: [{ id: "k", cost: 10, falseAlarm: 0.2, bears: [{ causeId: "A", pFail: 0.9 }] }],
-};
-
+// The hand case with a leak, an unlisted share and a check: ./reference/leaky.ts.
 describe("hand-computed case with leak and 'not in the knowledge base'", () => {
   it("symptom present", () => {
     // A .6 × .8 = .48; B .3 × .1 = .03; U .1 × .1 = .01; Z = .52
