@@ -19,6 +19,7 @@ describe("the production server", () => {
     const res = await fetch(`${baseUrl()}${await firstAsset()}`);
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toMatch(/text\/css/);
+    // 31536000 s = 365 days: the year we configure (serve-static "1y"), not a published value.
     expect(res.headers.get("cache-control")).toBe("public, max-age=31536000, immutable");
   });
 

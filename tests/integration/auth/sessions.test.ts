@@ -66,7 +66,7 @@ describe("the per-request session lookup (accountForSession)", () => {
     expect(account).toMatchObject({ userId, memberId: null, role: null, workshopId: null });
   });
 
-  it("refuses an expired session, one second after its time to live (ASVS V7.3.1)", async () => {
+  it("refuses an expired session, one second after its time to live (ASVS 5.0 V7.3, from memory)", async () => {
     const userId = await aUser();
     const start = new Date("2026-12-01T08:00:00Z");
     const token = await createSession(testDb(), userId, null, start);
