@@ -1,6 +1,5 @@
 import { ZodError, type ZodType } from "zod";
 import { getAccount, asMember, type Member } from "~/auth/guards.server";
-import { requireSameOrigin } from "~/auth/origin.server";
 import { can, type Permission } from "~/auth/permissions";
 import type { Db } from "~/db/client.server";
 import { httpError, refuse } from "~/http.server";
@@ -8,13 +7,13 @@ import { MeasureError } from "~/measure";
 import { ReasoningError } from "~/reasoning";
 
 /**
- * Runs one JSON API handler: same-origin check for writes, the member from the session cookie
+ * Runs one JSON API handler (the root middleware has already checked the origin of writes, the
+ * body's size, kind and text: app/http/request-guard.server.ts): the member from the session cookie
  * (401 JSON, not a redirect), the permission, and every refusal as `{ error }` with a 4xx.
  * Unexpected failures answer 500 with a plain message and never a stack trace.
  */
 export async function api(request: Request, db: Db, permission: Permission | null, handler: (member: Member) => Promise<unknown>) {
   try {
-    requireSameOrigin(request);
     const account = await getAccount(request, db);
     if (!account) refuse(401, "Sign in first.");
     let member: Member;

@@ -35,3 +35,6 @@ export function env(): Env {
 }
 
 export const isSecure = (e: Env) => e.APP_URL.startsWith("https://");
+
+/** The origin our own pages are served from: the only one whose writes are accepted. */
+export const appOrigin = () => new URL(env().APP_URL).origin;

@@ -12,8 +12,22 @@ import { RouteErrorPage } from "./components/error-page";
 import { useNonce } from "./components/nonce";
 import { dbContext } from "./context";
 import { serverDb } from "./db/pool.server";
+import { appOrigin } from "./env.server";
+import { guardRequest, withResponseHeaders } from "./http/request-guard.server";
 
 export const middleware: Route.MiddlewareFunction[] = [
+  // Every request, page or resource route: origin of writes, body limits and kinds, NUL bytes;
+  // then the headers every response carries.
+  async ({ request }, next) => {
+    try {
+      await guardRequest(request, appOrigin());
+    } catch (refused) {
+      // The API answers the refusal as it is; a page throws it, so its error page shows the message.
+      if (refused instanceof Response && new URL(request.url).pathname.startsWith("/api/")) return withResponseHeaders(refused);
+      throw refused;
+    }
+    return withResponseHeaders((await next()) as Response);
+  },
   async ({ context }, next) => {
     context.set(dbContext, serverDb());
     return next();

@@ -91,6 +91,10 @@ async function serve() {
     log(req, res, () =>
       compress(req, res, () => {
         const url = req.url ?? "/";
+        // A path that starts with two slashes (or a backslash, which URL parsing treats as one)
+        // would be read as //host/path: the router would see a request URL on a host of the
+        // caller's choosing. Pages move to the one-slash path; writes are refused.
+        if (/^[/\\]{2}/.test(url)) return doubleSlash(req, res, url);
         if (url.startsWith("/assets/")) return assets(req, res, (error) => notFound(res, error));
         if (looksLikeFile(url)) return files(req, res, () => app(req, res));
         return app(req, res);
@@ -114,6 +118,19 @@ async function serve() {
       setTimeout(() => process.exit(0), 5_000).unref();
     });
   }
+}
+
+function doubleSlash(req, res, url) {
+  const method = (req.method ?? "GET").toUpperCase();
+  res.setHeader("cache-control", "no-store");
+  if (method === "GET" || method === "HEAD") {
+    res.statusCode = 308;
+    res.setHeader("location", `/${url.replace(/^[/\\]+/, "")}`);
+    return res.end();
+  }
+  res.statusCode = 400;
+  res.setHeader("content-type", "application/json; charset=utf-8");
+  res.end(JSON.stringify({ error: "An address may not start with two slashes. Nothing was changed." }));
 }
 
 function notFound(res, error) {

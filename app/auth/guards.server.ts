@@ -3,7 +3,7 @@ import type { Db } from "~/db/client.server";
 import { env, isSecure } from "~/env.server";
 import { accountForSession, type Account } from "./accounts.server";
 import { can, type Permission } from "./permissions";
-import { readSessionToken } from "./session.server";
+import { readSessionTokens } from "./session.server";
 import type { Role } from "../../seeds/demo/people";
 
 export type Member = Account & { memberId: string; workshopId: string; role: Role; skill: "apprentice" | "technician" | "senior"; workshopName: string };
@@ -12,9 +12,16 @@ export type Member = Account & { memberId: string; workshopId: string; role: Rol
 export const memberContext = createContext<Member>();
 
 export async function getAccount(request: Request, db: Db): Promise<Account | null> {
-  const token = readSessionToken(request, isSecure(env()));
-  if (!token) return null;
-  return accountForSession(db, token);
+  return (await getSession(request, db))?.account ?? null;
+}
+
+/** The account and the token that found it: the first of the request's session cookies that is live. */
+export async function getSession(request: Request, db: Db): Promise<{ account: Account; token: string } | null> {
+  for (const token of readSessionTokens(request, isSecure(env()))) {
+    const account = await accountForSession(db, token);
+    if (account) return { account, token };
+  }
+  return null;
 }
 
 function signInRedirect(request: Request) {

@@ -12,18 +12,28 @@ export function sessionCookieName(secure: boolean) {
   return secure ? "__Host-rl_session" : "rl_session";
 }
 
-export function readSessionToken(request: Request, secure: boolean): string | null {
+/**
+ * The session tokens the request carries under our cookie's name, well-formed ones only, at most
+ * three. A browser can hold two cookies of one name (one set for a parent path or domain by
+ * something else): a stale or foreign first one must not hide a good second one.
+ */
+export function readSessionTokens(request: Request, secure: boolean): string[] {
   const name = sessionCookieName(secure);
   const header = request.headers.get("cookie") ?? "";
+  const found: string[] = [];
   for (const part of header.split(";")) {
     const [k, ...rest] = part.trim().split("=");
-    if (k === name) {
-      const v = rest.join("=");
-      // 32 random bytes in base64url: anything else is tampered or foreign.
-      return /^[A-Za-z0-9_-]{43}$/.test(v) ? v : null;
-    }
+    if (k !== name) continue;
+    const v = rest.join("=");
+    // 32 random bytes in base64url: anything else is tampered or foreign.
+    if (/^[A-Za-z0-9_-]{43}$/.test(v) && !found.includes(v)) found.push(v);
+    if (found.length === 3) break;
   }
-  return null;
+  return found;
+}
+
+export function readSessionToken(request: Request, secure: boolean): string | null {
+  return readSessionTokens(request, secure)[0] ?? null;
 }
 
 export function sessionCookie(token: string | null, secure: boolean, maxAgeS = SESSION_TTL_MS / 1000): string {

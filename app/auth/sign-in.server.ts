@@ -6,7 +6,7 @@ import { loadAccount, signInFromProfile } from "./accounts.server";
 import { getAuthenticator } from "./authenticator.server";
 import { ROLE_HOME } from "./permissions";
 import { clientIp, limitSignIn } from "./rate-limit.server";
-import { createSession, readSessionToken, revokeSession, sessionCookie } from "./session.server";
+import { createSession, readSessionTokens, revokeSession, sessionCookie } from "./session.server";
 
 /** Step one: send the browser to the provider (remix-auth throws the redirect with the state cookie). */
 export async function startSignIn(db: Db, request: Request, socketAddress: string | null) {
@@ -21,6 +21,13 @@ export class SignInRefused extends Error {}
 export async function finishSignIn(db: Db, request: Request, socketAddress: string | null) {
   const e = env();
   await limitSignIn(db, `ip:${clientIp(request, socketAddress)}`, e.SIGN_IN_LIMIT_PER_IP, e.SIGN_IN_WINDOW_S);
+  // The strategy would treat a callback without its code and state as the start of a new sign-in
+  // and redirect to the provider; a return address opened by hand, or forged, is refused instead.
+  const params = new URL(request.url).searchParams;
+  if (params.get("error")) throw new SignInRefused(describe(new Error(params.get("error")!)));
+  if (!params.get("code") || !params.get("state")) {
+    throw new SignInRefused("This sign-in return address is incomplete (no one-time code or state). Start the sign-in again from this page.");
+  }
   let profile;
   try {
     profile = await getAuthenticator().authenticate("github", request);
@@ -32,8 +39,7 @@ export async function finishSignIn(db: Db, request: Request, socketAddress: stri
   const userId = await signInFromProfile(db, profile);
   const account = await loadAccount(db, userId);
   // Whatever session the browser had is dropped: the id always changes at sign-in.
-  const old = readSessionToken(request, isSecure(e));
-  if (old) await revokeSession(db, old);
+  for (const old of readSessionTokens(request, isSecure(e))) await revokeSession(db, old);
   const token = await createSession(db, userId, request.headers.get("user-agent"));
   await audit(db, { workshopId: account?.workshopId ?? null, actorUserId: userId, action: "auth.sign_in", entity: "user", entityId: userId, after: { login: profile.login } });
   const home = account?.role ? ROLE_HOME[account.role] : "/welcome";

@@ -34,20 +34,25 @@ export function detectProbability(cl: CheckLeaves, prob: Float64Array, k: number
 export type OrderCost = { total: number; reached: Float64Array }; // reached[i] = P(step i is run)
 
 export function expectedCost(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, order: ArrayLike<number>): OrderCost {
-  const H = prob.length;
   const t = prob.slice(); // survival of each hypothesis, relative to G
   let T = 1; // Σ t
   let G = 1;
   let total = 0;
+  // The hypotheses that can still be alive: all of them until a check with false-alarm rate 1
+  // (it fails unless one of its own causes is there) leaves only the leaves it bears on. Keeping
+  // that set small is what bounds the cost: O(H + Σ bearings) for the whole order, never O(K·H).
+  let live: Int32Array | null = null;
   const reached = new Float64Array(order.length);
   for (let s = 0; s < order.length; s++) {
     const k = order[s];
     const reach = Math.min(1, Math.max(0, G * T));
     reached[s] = reach;
     total += index.cost[k] * reach;
+    const from = cl.start[k];
+    const to = cl.start[k + 1];
     const g = 1 - index.falseAlarm[k];
     if (g > 0) {
-      for (let j = cl.start[k]; j < cl.start[k + 1]; j++) {
+      for (let j = from; j < to; j++) {
         const h = cl.leaf[j];
         const next = (t[h] * (1 - cl.pFail[j])) / g;
         T += next - t[h];
@@ -56,23 +61,27 @@ export function expectedCost(index: ModelIndex, cl: CheckLeaves, prob: Float64Ar
       G *= g;
       if (G < 1e-150) {
         // Fold G into t before it underflows (it shrinks by every false-alarm rate).
-        T = fold(t, G);
+        T = fold(t, G, live);
         G = 1;
       }
     } else {
       // False alarm 1: only the leaves this check can pass on survive it.
-      const keep = new Float64Array(H);
-      for (let j = cl.start[k]; j < cl.start[k + 1]; j++) keep[cl.leaf[j]] = 1 - cl.pFail[j];
-      for (let h = 0; h < H; h++) t[h] *= G * keep[h];
-      T = fold(t, 1);
+      const kept = new Float64Array(to - from);
+      for (let j = from; j < to; j++) kept[j - from] = t[cl.leaf[j]] * G * (1 - cl.pFail[j]);
+      if (live === null) t.fill(0);
+      else for (let i = 0; i < live.length; i++) t[live[i]] = 0;
+      T = 0;
+      for (let j = from; j < to; j++) T += t[cl.leaf[j]] = kept[j - from];
+      live = cl.leaf.slice(from, to);
       G = 1;
     }
   }
   return { total, reached };
 }
 
-function fold(t: Float64Array, factor: number): number {
+function fold(t: Float64Array, factor: number, live: Int32Array | null): number {
   let sum = 0;
-  for (let h = 0; h < t.length; h++) sum += t[h] *= factor;
+  if (live === null) for (let h = 0; h < t.length; h++) sum += t[h] *= factor;
+  else for (let i = 0; i < live.length; i++) sum += t[live[i]] *= factor;
   return sum;
 }

@@ -89,9 +89,9 @@ describe("authorization matrix", () => {
           const res = await fetch(`${base}${rule.path.replace("{case}", OPEN_CASE)}`, {
             method,
             redirect: "manual",
-            headers: { ...(cookie ? { cookie } : {}), ...(method === "POST" ? { origin: base, "content-type": "application/x-www-form-urlencoded" } : {}) },
+            headers: { ...(cookie ? { cookie } : {}), ...(method === "POST" ? { origin: base, "content-type": rule.api ? "application/json" : "application/x-www-form-urlencoded" } : {}) },
             // Deliberately incomplete: an allowed caller gets a 400 and nothing changes.
-            body: method === "POST" ? new URLSearchParams(intent ? { intent } : {}) : undefined,
+            body: method === "POST" ? (rule.api ? JSON.stringify(intent ? { intent } : {}) : new URLSearchParams(intent ? { intent } : {})) : undefined,
           });
           await res.arrayBuffer();
           let got = outcome(res);

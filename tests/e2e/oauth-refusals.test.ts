@@ -1,29 +1,11 @@
 import { describe, expect, it } from "vitest";
 import { inject } from "vitest";
+import { approve, callback, sessionCookie, startSignIn } from "./http-session";
 
 // The sign-in's security checks against the running server and the fake provider, without a
 // browser: every refusal must be a clear page with a 4xx, never a signed-in session.
 const base = inject("baseUrl");
 const provider = inject("fakeOAuthUrl");
-
-async function startSignIn() {
-  const res = await fetch(`${base}/auth/github`, { method: "POST", redirect: "manual", headers: { origin: base } });
-  expect(res.status).toBe(302);
-  const authorize = new URL(res.headers.get("location")!);
-  expect(authorize.origin).toBe(provider);
-  const stateCookie = res.headers.getSetCookie().find((c) => c.startsWith("rl_oauth="))!.split(";")[0];
-  return { authorize, stateCookie, state: authorize.searchParams.get("state")! };
-}
-
-async function approve(authorize: URL, login: string) {
-  const form = new URLSearchParams(authorize.searchParams);
-  form.set("login", login);
-  const res = await fetch(`${provider}/login/oauth/authorize`, { method: "POST", body: form, redirect: "manual" });
-  expect(res.status).toBe(302);
-  return new URL(res.headers.get("location")!);
-}
-
-const callback = (url: URL, cookie?: string) => fetch(`${base}${url.pathname}${url.search}`, { redirect: "manual", headers: cookie ? { cookie } : {} });
 
 describe("OAuth refusals (OWASP ASVS 5.0 V10.2.1)", () => {
   it("signs in when state and code are right, with HttpOnly SameSite cookies", async () => {
@@ -55,12 +37,14 @@ describe("OAuth refusals (OWASP ASVS 5.0 V10.2.1)", () => {
     expect(await res.text()).toContain("could not be matched to this browser");
   });
 
-  it("refuses a callback with no state at all by starting over, never signing in", async () => {
-    const res = await callback(new URL(`${base}/auth/github/callback?code=abc`));
-    // Without a state the strategy treats it as a fresh start and sends the browser to the provider.
-    expect(res.status).toBe(302);
-    expect(res.headers.get("location")).toContain(`${provider}/login/oauth/authorize`);
-    expect(res.headers.getSetCookie().some((c) => c.startsWith("rl_session="))).toBe(false);
+  it("refuses a return address without its code or state, instead of starting a new sign-in", async () => {
+    for (const search of ["", "?code=abc", "?state=xyz"]) {
+      const res = await callback(new URL(`${base}/auth/github/callback${search}`));
+      expect(res.status, search).toBe(400);
+      expect(res.headers.get("location"), search).toBeNull();
+      expect(await res.text(), search).toContain("return address is incomplete");
+      expect(res.headers.getSetCookie().some((c) => c.startsWith("rl_session=")), search).toBe(false);
+    }
   });
 
   it("refuses a replayed code", async () => {
@@ -92,13 +76,7 @@ describe("OAuth refusals (OWASP ASVS 5.0 V10.2.1)", () => {
 });
 
 describe("session cookie at the server (OWASP ASVS 5.0 V7.2.4)", () => {
-  async function signIn(login: string, existing?: string) {
-    const { authorize, stateCookie } = await startSignIn();
-    const back = await approve(authorize, login);
-    const res = await callback(back, [stateCookie, existing].filter(Boolean).join("; "));
-    expect(res.status).toBe(302);
-    return res.headers.getSetCookie().find((c) => c.startsWith("rl_session="))!.split(";")[0];
-  }
+  const signIn = sessionCookie;
   const board = (cookie: string) => fetch(`${base}/board`, { redirect: "manual", headers: { cookie } });
 
   it("replaces whatever session the browser brought to sign-in, and revokes it (fixation)", async () => {

@@ -66,7 +66,7 @@ describe("the caller's address reaches the sign-in rate limit", () => {
       const since = new Date(Date.now() - 1000);
       const recent = async () => (await db.select({ n: count() }).from(signInAttempts).where(and(eq(signInAttempts.bucket, bucket), gt(signInAttempts.at, since))))[0].n;
       const before = await recent();
-      const res = await fetch(`${baseUrl()}/auth/github`, { method: "POST", redirect: "manual", headers: { origin: baseUrl() } });
+      const res = await fetch(`${baseUrl()}/auth/github`, { method: "POST", redirect: "manual", headers: { origin: baseUrl() }, body: new URLSearchParams() });
       expect(res.status).toBe(302);
       expect(await recent()).toBe(before + 1);
       expect((await db.select({ n: count() }).from(signInAttempts).where(and(eq(signInAttempts.bucket, "ip:direct"), gt(signInAttempts.at, since))))[0].n).toBe(0);

@@ -9,6 +9,7 @@ import { dbContext } from "~/context";
 import type { Db } from "~/db/client.server";
 import { auditLog, findings, observations } from "~/db/schema";
 import { openCase } from "~/cases/workflow.server";
+import { guardRequest } from "~/http/request-guard.server";
 import { seedId } from "../../../seeds/ids";
 import { kbId } from "../../../seeds/knowledge";
 
@@ -64,9 +65,19 @@ export function request(path: string, send: Send = {}): Request {
 type Handler = (args: never) => unknown;
 export type Answer = { status: number; body: Record<string, unknown> & { error?: string }; contentType: string | null };
 
-/** Runs a loader or action with the given params and reads its JSON answer. */
+/**
+ * Runs a loader or action with the given params and reads its JSON answer. The request first
+ * passes the root middleware's guard, as every request to the server does.
+ */
 export async function run(handler: Handler, db: Db, req: Request, params: Record<string, string | undefined>): Promise<Answer> {
-  const res = (await handler({ request: req, params, context: contextFor(db) } as never)) as Response;
+  let res: Response;
+  try {
+    await guardRequest(req, APP);
+    res = (await handler({ request: req, params, context: contextFor(db) } as never)) as Response;
+  } catch (refused) {
+    if (!(refused instanceof Response)) throw refused;
+    res = refused;
+  }
   const text = await res.text();
   return { status: res.status, body: text ? (JSON.parse(text) as Answer["body"]) : {}, contentType: res.headers.get("content-type") };
 }
