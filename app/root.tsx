@@ -34,6 +34,11 @@ export const middleware: Route.MiddlewareFunction[] = [
   },
 ];
 
+// Every page has a title, an error page too; routes give their own.
+export function meta() {
+  return [{ title: "Ramplight" }];
+}
+
 export function Layout({ children }: { children: React.ReactNode }) {
   const nonce = useNonce();
   return (

@@ -64,10 +64,11 @@ function supervise() {
 
 async function serve() {
   const root = process.cwd();
-  const build = await import(path.join(root, "build/server/index.js"));
-  const client = path.join(root, "build/client");
+  const dir = path.resolve(root, process.env.RL_BUILD_DIR ?? "build");
+  const build = await import(path.join(dir, "server/index.js"));
+  const client = path.join(dir, "client");
 
-  // serve-static maps the whole URL path under its root, so both read from build/client.
+  // serve-static maps the whole URL path under its root, so both read from the client build.
   const assets = serveStatic(client, { immutable: true, maxAge: "1y", index: false, fallthrough: false });
   const files = serveStatic(client, { maxAge: "1h", index: false });
   const compress = compression();

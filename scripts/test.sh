@@ -42,6 +42,8 @@ fi
 rm -rf "$backup"
 
 echo "== production build"
+# Into a folder of its own: a demo served by npm start from build/ keeps working meanwhile.
+export RL_BUILD_DIR="$PWD/.tmp/build-test"
 node_modules/.bin/react-router build >/tmp/rl-build.log 2>&1 || { cat /tmp/rl-build.log; echo "build failed" >&2; exit 1; }
 
 echo "== test database template"

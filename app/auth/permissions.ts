@@ -9,6 +9,8 @@ export const PERMISSIONS = [
   "case:work-assigned", // the apprentice's narrower right: only on cases assigned to them, within skill
   "case:conclude",
   "case:signoff",
+  "case:reopen", // a concluded or closed case back to open, with a reason
+  "case:close", // a concluded case done with
   "case:ask-senior",
   "kb:read",
   "kb:propose",
@@ -29,8 +31,8 @@ const TECHNICIAN: Permission[] = ["case:read", "case:open", "case:work", "case:c
 export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
   apprentice: ["case:read", "case:work-assigned", "case:ask-senior", "kb:read"],
   technician: TECHNICIAN,
-  senior: [...TECHNICIAN, "case:signoff", "kb:edit", "kb:approve", "audit:read"],
-  advisor: ["case:read", "case:open", "kb:read", "owner:manage", "estimate:manage", "payment:take"],
+  senior: [...TECHNICIAN, "case:signoff", "case:reopen", "case:close", "kb:edit", "kb:approve", "audit:read"],
+  advisor: ["case:read", "case:open", "case:close", "kb:read", "owner:manage", "estimate:manage", "payment:take"],
   admin: ["case:read", "kb:read", "member:manage", "settings:manage", "audit:read", "data:export", "owner:manage"],
 };
 

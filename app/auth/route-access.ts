@@ -40,7 +40,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
     path: "/cases/{case}",
     record: true,
     GET: "case:read",
-    POST: { conclude: "case:conclude", signoff: "case:signoff", "send-back": "case:signoff", "ask-senior": "case:ask-senior", complaint: "case:open" },
+    POST: { conclude: "case:conclude", signoff: "case:signoff", "send-back": "case:signoff", "ask-senior": "case:ask-senior", complaint: "case:open", reopen: "case:reopen", close: "case:close" },
   },
   "routes/api/search.ts": { path: "/api/search?q=brake", api: true, GET: "case:read" },
   "routes/api/quick-find.ts": { path: "/api/quick-find?kinds=symptom", api: true, GET: "case:read" },

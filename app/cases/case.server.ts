@@ -5,6 +5,7 @@ import type { Db } from "~/db/client.server";
 import { auditLog, cases, causes, checks, findings, members, observations, owners, symptoms, users, vehicles, workshops } from "~/db/schema";
 import type { Json } from "~/components/json-payload";
 import { refuse, requireId } from "~/http.server";
+import { latestNote } from "./notes.server";
 
 const assigned = alias(members, "assigned");
 const assignedUser = alias(users, "assigned_user");
@@ -17,7 +18,7 @@ export const CASE_HISTORY_ROWS = 30;
 
 type ObservationRow = { id: string; symptomId: string; name: string; present: boolean; source: (typeof observations.$inferSelect)["source"]; note: string | null; recordedAt: Date; by: string | null };
 type FindingRow = { id: string; checkId: string; name: string; result: (typeof findings.$inferSelect)["result"]; reading: string | null; note: string | null; recordedAt: Date; by: string | null };
-type HistoryRow = { id: number; at: Date; action: string; after: unknown; actor: string | null };
+type HistoryRow = { id: number; at: Date; action: string; before: unknown; after: unknown; actor: string | null };
 
 // The rows under a case come back as JSON arrays inside the case's own row: one round trip to
 // PostgreSQL however many observations and findings there are (each query costs more in the
@@ -57,7 +58,7 @@ const when = (flag: "history" | "outcomes", aggregate: SQL, empty: string) =>
 // Newest first, as the history panel reads; the audit rows written with every change of the case.
 const historyJson = sql<Json<HistoryRow>[]>`coalesce((
   select json_agg(h order by h."at" desc, h."id" desc) from (
-    select ${auditLog.id} as "id", ${auditLog.at} as "at", ${auditLog.action} as "action", ${auditLog.after} as "after", ${users.name} as "actor"
+    select ${auditLog.id} as "id", ${auditLog.at} as "at", ${auditLog.action} as "action", ${auditLog.before} as "before", ${auditLog.after} as "after", ${users.name} as "actor"
     from ${auditLog} left join ${users} on ${users.id} = ${auditLog.actorUserId}
     where ${auditLog.workshopId} = ${cases.workshopId} and ${auditLog.entity} = 'case' and ${auditLog.entityId} = ${cases.id}::text
     order by ${auditLog.at} desc, ${auditLog.id} desc
@@ -101,6 +102,8 @@ function caseQuery(db: Db) {
       workshop: { id: workshops.id, kbVersion: workshops.kbVersion, labourRatePerHour: workshops.labourRatePerHour, currency: workshops.currency, units: workshops.units },
       observations: observationsJson,
       findings: findingsJson,
+      question: latestNote(["case.ask_senior"]),
+      seniorNote: latestNote(["case.signoff", "case.send_back"]),
       history: sql<Json<HistoryRow>[]>`${when("history", historyJson, "[]")}`,
       outcomes: sql<Record<string, number>>`${when("outcomes", outcomesJson, "{}")}`,
     })

@@ -31,5 +31,5 @@ export async function diagnoseCase(db: Db, member: Pick<Member, "role" | "skill"
   // An apprentice's plan holds only what they may do; everyone else sees every check.
   const maxSkill: Skill = member.role === "apprentice" ? "apprentice" : "senior";
   const { ranking, plan } = diagnose(entry.compiled, evidence, { maxSkill });
-  return { ...presentDiagnosis(kb, ranking, plan), model, evidence };
+  return { ...presentDiagnosis(kb, ranking, plan, bundle), model, evidence };
 }

@@ -2,6 +2,7 @@ import { and, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { cases, causes, members, users, vehicles } from "~/db/schema";
 
+import { latestNote, type NoteRow } from "./notes.server";
 import type { CaseState } from "./states";
 
 export type CaseFilter = { state?: CaseState; q?: string; assignedTo?: string; limit?: number };
@@ -36,6 +37,8 @@ export async function listCases(db: Db, workshopId: string, filter: CaseFilter =
       vehicle: sql<string>`${vehicles.make} || ' ' || ${vehicles.model} || ' (' || ${vehicles.year} || ')'`,
       assignedName: users.name,
       conclusion: causes.name,
+      // What the apprentice asked, while the case waits for a senior: the senior reads it on the board.
+      question: sql<NoteRow | null>`case when ${cases.needsSenior} then ${latestNote(["case.ask_senior"])} end`,
     })
     .from(cases)
     .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))

@@ -11,7 +11,22 @@ const DETAILED_STEPS = 12; // steps sent with instructions: more than the plan o
 const SENT_CAUSES = 30; // the screen shows five and folds the rest; past thirty the shares round to 0%
 const SENT_STEPS = 20;
 
-export type ShownCause = { id: string; name: string; probability: number; priority: string | null; why: { label: string; weight: number }[] };
+/** One line of a cause's "why": the evidence, what was recorded, and its log likelihood ratio. */
+export type WhyLine = { label: string; recorded: string; weight: number };
+export type ShownCause = { id: string; name: string; probability: number; priority: string | null; why: WhyLine[] };
+
+/** What the case recorded, as the why quotes it: present or absent, passed, failed, or the reading. */
+export type Recorded = {
+  observations: readonly { symptomId: string; present: boolean; source: string }[];
+  findings: readonly { checkId: string; result: string; reading: string | null }[];
+};
+
+function recordedWords(recorded: Recorded) {
+  const said = new Map<string, string>();
+  for (const o of recorded.observations) said.set(`symptom:${o.symptomId}`, `${o.present ? "present" : "absent"}${o.source === "owner" ? " (owner says)" : ""}`);
+  for (const f of recorded.findings) said.set(`check:${f.checkId}`, f.reading ? `read ${f.reading}, ${f.result === "fail" ? "outside the limit" : "within the limit"}` : f.result === "fail" ? "failed" : "passed");
+  return said;
+}
 
 // Look-ups by id, built once per loaded knowledge base (which is itself cached per version).
 const lookups = new WeakMap<Knowledge, ReturnType<typeof byId>>();
@@ -23,7 +38,7 @@ function byId(kb: Knowledge) {
   };
 }
 
-export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
+export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan, recorded: Recorded) {
   let maps = lookups.get(kb);
   if (!maps) lookups.set(kb, (maps = byId(kb)));
   const { cause, symptom, check } = maps;
@@ -31,6 +46,7 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
     const [kind, id] = [key.slice(0, key.indexOf(":")), key.slice(key.indexOf(":") + 1)];
     return kind === "symptom" ? symptom.get(id)?.name ?? id : check.get(id)?.name ?? id;
   };
+  const said = recordedWords(recorded);
   // The "why" is read for the causes a person looks at: the top ones, their strongest few pieces of
   // evidence. All of it for every cause would be causes × evidence numbers on every re-rank.
   const causes: ShownCause[] = ranking.causes.slice(0, SENT_CAUSES).map((c, i) => ({
@@ -42,7 +58,7 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan) {
       i < WHY_CAUSES
         ? Object.entries(c.contributions)
             .filter(([, w]) => Number.isFinite(w) && Math.abs(w) >= WHY_MIN)
-            .map(([k, w]) => ({ label: label(k), weight: w }))
+            .map(([k, w]) => ({ label: label(k), recorded: said.get(k) ?? "", weight: w }))
             .sort((a, b) => Math.abs(b.weight) - Math.abs(a.weight))
             .slice(0, WHY_ITEMS)
         : [],

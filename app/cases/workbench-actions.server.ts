@@ -4,7 +4,7 @@ import { can } from "~/auth/permissions";
 import { refuse } from "~/http.server";
 import type { Db } from "~/db/client.server";
 import type { CaseFields } from "./case.server";
-import { askSenior, conclude, signOff, updateComplaint } from "./workflow.server";
+import { askSenior, close, conclude, reopen, signOff, updateComplaint } from "./workflow.server";
 
 // The forms of the case workbench, told apart by their intent.
 export const WorkbenchForm = z.discriminatedUnion("intent", [
@@ -12,6 +12,8 @@ export const WorkbenchForm = z.discriminatedUnion("intent", [
   z.object({ intent: z.enum(["signoff", "send-back"]), note: z.string().trim().max(2000).default(""), version: z.coerce.number().int() }),
   z.object({ intent: z.literal("ask-senior"), note: z.string().trim().max(500).default("") }),
   z.object({ intent: z.literal("complaint"), complaint: z.string().trim().min(3, "The complaint needs a few words").max(2000), version: z.coerce.number().int() }),
+  z.object({ intent: z.literal("reopen"), reason: z.string().trim().min(3, "Say why the case is reopened").max(1000), version: z.coerce.number().int() }),
+  z.object({ intent: z.literal("close"), version: z.coerce.number().int() }),
 ]);
 
 /** The role check comes before the form is read, so a refused role learns nothing from validation. */
@@ -22,6 +24,8 @@ export function assertIntentAllowed(member: Member, c: Pick<CaseFields, "assigne
     : intent === "signoff" || intent === "send-back" ? can(member.role, "case:signoff")
     : intent === "ask-senior" ? can(member.role, "case:ask-senior")
     : intent === "complaint" ? can(member.role, "case:open")
+    : intent === "reopen" ? can(member.role, "case:reopen")
+    : intent === "close" ? can(member.role, "case:close")
     : true; // unknown intents fail validation with a 400
   if (!allowed) refuse(403, `Your role (${member.role}) cannot do this on a case.`);
 }
@@ -42,5 +46,11 @@ export async function runWorkbenchForm(db: Db, member: Member, c: CaseFields, fo
     case "complaint":
       await updateComplaint(db, member, c, form.complaint, form.version);
       return "Complaint updated.";
+    case "reopen":
+      await reopen(db, member, c, form);
+      return "Case reopened: the evidence can change again.";
+    case "close":
+      await close(db, member, c, form);
+      return "Case closed.";
   }
 }

@@ -71,6 +71,29 @@ export async function signOff(db: Db, member: Member, c: CaseFields, input: { ac
   });
 }
 
+/**
+ * A senior reopens a concluded or closed case, with a reason: the conclusion is set aside (the
+ * audit row keeps it) and the evidence can change again.
+ */
+export async function reopen(db: Db, member: Member, c: CaseFields, input: { reason: string; version: number }) {
+  if (!can(member.role, "case:reopen")) refuse(403, "Only a senior technician reopens a case.");
+  if (c.state === "open") refuse(409, "This case is open already.");
+  await db.transaction(async (tx) => {
+    await versionedUpdate(tx, c, input.version, { state: "open", conclusionCauseId: null, conclusionNotes: null, concludedById: null, concludedAt: null, signedOffById: null, closedAt: null, needsSenior: false });
+    await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.reopen", entity: "case", entityId: c.id, before: { state: c.state, cause: c.conclusionCause, notes: c.conclusionNotes }, after: { state: "open", reason: input.reason } });
+  });
+}
+
+/** A concluded case is closed when the work is done: its confirmed cause then feeds the outcome statistics. */
+export async function close(db: Db, member: Member, c: CaseFields, input: { version: number }) {
+  if (!can(member.role, "case:close")) refuse(403, "Your role cannot close cases.");
+  if (c.state !== "concluded") refuse(409, c.state === "closed" ? "This case is closed already." : "Only a concluded case can be closed: conclude it (or sign it off) first.");
+  await db.transaction(async (tx) => {
+    await versionedUpdate(tx, c, input.version, { state: "closed", closedAt: new Date() });
+    await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.close", entity: "case", entityId: c.id, before: { state: c.state }, after: { state: "closed", cause: c.conclusionCause } });
+  });
+}
+
 export type OpenCaseInput = {
   vehicleId?: string;
   newVehicle?: { ownerName: string; ownerPhone?: string; registration: string; vin?: string; make: string; model: string; year: number; fuelType: "petrol" | "diesel" | "hybrid" | "electric" | "lpg"; drivetrain: "fwd" | "rwd" | "awd" };

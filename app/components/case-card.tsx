@@ -2,7 +2,7 @@ import { Link } from "react-router";
 import type { CaseRow } from "~/cases/list.server";
 import { formatDate, STATE_LABEL } from "./format";
 
-export function CaseCard({ c }: { c: Pick<CaseRow, "id" | "number" | "state" | "complaint" | "registration" | "vehicle" | "assignedName" | "openedAt" | "needsSenior" | "conclusion"> }) {
+export function CaseCard({ c }: { c: Pick<CaseRow, "id" | "number" | "state" | "complaint" | "registration" | "vehicle" | "assignedName" | "openedAt" | "needsSenior" | "conclusion"> & { question?: CaseRow["question"] } }) {
   return (
     <article className="rounded-card border border-rule bg-card p-4" aria-labelledby={`case-${c.id}`}>
       <div className="flex items-baseline justify-between gap-3">
@@ -16,6 +16,11 @@ export function CaseCard({ c }: { c: Pick<CaseRow, "id" | "number" | "state" | "
       <p className="text-sm text-graphite-600">{c.vehicle}</p>
       <p className="mt-2">“{c.complaint}”</p>
       {c.conclusion ? <p className="mt-2 text-sm">Cause: <strong>{c.conclusion}</strong></p> : null}
+      {c.question ? (
+        <p className="mt-2 rounded-lg border-l-4 border-uv-500 bg-uv-50 p-2 text-sm">
+          <strong>{c.question.by ?? "The apprentice"} asks:</strong> “{c.question.note}”
+        </p>
+      ) : null}
       <p className="mt-2 flex flex-wrap gap-x-3 text-sm text-graphite-600">
         <span>{c.assignedName ? `With ${c.assignedName}` : "Not assigned"}</span>
         <span className="tabular">Opened {formatDate(c.openedAt)}</span>

@@ -12,7 +12,7 @@ export function ErrorPage({ status, message }: { status: number; message?: strin
   const copy = COPY[status] ?? (status >= 500 ? COPY[500] : COPY[400]);
   return (
     <main className="mx-auto flex min-h-[70dvh] max-w-xl flex-col justify-center gap-4 px-5 py-12" role="alert">
-      <p className="tabular text-sm font-semibold tracking-widest text-graphite-500 uppercase">Error {status}</p>
+      <p className="tabular text-sm font-semibold tracking-widest text-graphite-600 uppercase">Error {status}</p>
       <h1 className="text-2xl font-semibold">{copy.title}</h1>
       <p className="text-graphite-700">{message ?? copy.body}</p>
       <div className="flex flex-wrap gap-3 pt-2">

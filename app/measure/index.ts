@@ -3,8 +3,8 @@
 export { MeasureError, MEASURE_ERROR_CODES } from "./errors";
 export type { MeasureErrorCode } from "./errors";
 export { math } from "./math";
-export { parseReading } from "./reading";
-export type { ReadingInput } from "./reading";
+export { parseReading, readReading } from "./reading";
+export type { Reading, ReadingInput } from "./reading";
 export { compileRule, evaluateRule, findingFromReading } from "./rules";
 export type { CompiledRule, RuleResult } from "./rules";
 export { kindOf } from "./dimensions";
@@ -15,4 +15,6 @@ export type { Dtc, DtcResult, DtcScope, DtcSystem } from "./dtc";
 export { convertFuelConsumption, L100KM_TIMES_MPG_US, L100KM_TIMES_MPG_UK } from "./fuel";
 export type { FuelUnit } from "./fuel";
 export { formatQuantity } from "./format";
-export type { Formatted, QuantityKind, UnitSystem } from "./format";
+export type { Formatted, QuantityKind, UnitSystem as QuantitySystem } from "./format";
+export { describeRule, formatMileage, KM_PER_MILE, mileageUnit, parseDecimal, parseMileage, showQuantity } from "./unit-system";
+export type { Parsed, UnitSystem } from "./unit-system";

@@ -7,6 +7,8 @@ export const math: MathJsInstance = create(all);
 // mathjs knows only the US gallon (3.785411784 L, NIST Handbook 44 App. C). The UK gallon is
 // 4.54609 L exactly (Weights and Measures Act 1985, Schedule 1).
 math.createUnit("ukgal", "4.54609 liter");
+// The UK pint is an eighth of the UK gallon: 0.56826125 L (same Schedule).
+math.createUnit("ukpint", "0.56826125 liter");
 
 export type { Unit };
 

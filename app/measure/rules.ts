@@ -5,7 +5,7 @@ import type { MathNode, OperatorNode, RelationalNode } from "mathjs";
 import { describeKind } from "./dimensions";
 import { MeasureError, measureFail } from "./errors";
 import { isUnit, math, unitText, type Unit } from "./math";
-import { parseReading, type ReadingInput } from "./reading";
+import { readReading, type ReadingInput } from "./reading";
 import { assertWhitelisted, evaluate, type Value } from "./rule-eval";
 
 export type CompiledRule = {
@@ -50,8 +50,8 @@ export function compileRule(source: string): CompiledRule {
 /** Evaluate a reading against a rule: pass when the rule is true. */
 export function evaluateRule(rule: string | CompiledRule, input: ReadingInput): RuleResult {
   const compiled = typeof rule === "string" ? compileRule(rule) : rule;
-  const reading = parseReading(input);
-  checkKind(compiled, reading);
+  const { unit: reading, percent } = readReading(input);
+  checkKind(compiled, reading, percent);
   let out: Value;
   try {
     out = evaluate(compiled.tree, reading);
@@ -75,15 +75,17 @@ export function findingFromReading(checkId: string, rule: string, input: Reading
 
 export { MeasureError };
 
-function checkKind(rule: CompiledRule, reading: Unit): void {
+function checkKind(rule: CompiledRule, reading: Unit, percent: boolean): void {
   const { expected, example } = rule;
   if (expected === null) return; // value only appears inside arithmetic; evaluation will catch mismatches
   const has = reading.units.length > 0;
   if (!isUnit(expected)) {
-    if (has) measureFail("UNEXPECTED_UNIT", `That reading is in ${unitText(reading)}; this check needs a plain number, such as ${example}.`);
+    // Ratio checks compare percent figures: "65 %" and "65" are the same reading.
+    if (has) measureFail("UNEXPECTED_UNIT", `That reading is in ${unitText(reading)}; this check needs a plain number or a percentage, such as ${example}.`);
     return;
   }
   const needs = describeKind(expected, example);
+  if (percent) measureFail("UNIT_MISMATCH", `That reading is a percentage; this check needs ${needs}, such as ${example}.`);
   if (!has) measureFail("MISSING_UNIT", `That reading has no unit; this check needs ${needs}, such as ${example}.`);
   if (!reading.equalBase(expected)) measureFail("UNIT_MISMATCH", `That reading is in ${unitText(reading)}; this check needs ${needs}, such as ${example}.`);
 }

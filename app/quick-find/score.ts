@@ -62,10 +62,13 @@ export function scoreIndex(index: QuickFindIndex, { query, kinds, recent, limit 
     let found = false;
     if (w) found = add(index.words, w, MATCH.exact);
     if (qt.concept) found = add(index.concepts, qt.concept, w ? MATCH.concept : MATCH.exact) || found;
+    // A number beside other words ("DEMO 101") is a whole plate part, not the start of a case
+    // number: "101" must not reach #1019 and #1012. Alone, or after "#", it may still be unfinished.
+    const wholeNumber = w !== null && /^\d+$/.test(w) && query.tokens.length > 1 && !query.caseNumber;
     if (w && qt.prefix) {
       const seen = new Set<string>();
       for (const term of withPrefix(index.wordList, w)) {
-        if (term === w) continue;
+        if (term === w || (wholeNumber && /^\d+$/.test(term))) continue;
         found = true;
         add(index.words, term, MATCH.prefix * (0.6 + (0.4 * w.length) / term.length));
         const c = w.length >= 3 ? wordConcept.get(term) : undefined;

@@ -56,7 +56,7 @@ export default function Landing() {
         <ol className="grid gap-4 sm:grid-cols-2">
           {STEPS.map((s, i) => (
             <li key={s.title} className="rounded-card border border-rule bg-card p-5">
-              <p className="tabular text-sm font-semibold text-uv-600">Step {i + 1}</p>
+              <p className="tabular text-sm font-semibold text-uv-700">Step {i + 1}</p>
               <h2 className="mt-1 text-lg font-semibold">{s.title}</h2>
               <p className="mt-2 text-graphite-700">{s.body}</p>
             </li>

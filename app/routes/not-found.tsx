@@ -5,6 +5,10 @@ export function loader() {
   throw new Response("Not found", { status: 404 });
 }
 
+export function meta() {
+  return [{ title: "Nothing here — Ramplight" }];
+}
+
 export default function NotFound() {
   return <ErrorPage status={404} />;
 }

@@ -50,3 +50,9 @@ export async function signInAs(page: Page, login: string) {
   await page.locator(`form:has(input[name="login"][value="${login}"]) button`).click();
   await page.waitForURL((url) => url.origin === baseUrl() && !url.pathname.startsWith("/auth"));
 }
+
+/** Signs out from the person's menu in the header. */
+export async function signOut(page: Page) {
+  await page.getByRole("banner").locator("summary").last().click();
+  await page.getByRole("button", { name: "Sign out", exact: true }).click();
+}

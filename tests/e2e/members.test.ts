@@ -63,8 +63,9 @@ describe("an admin manages the workshop's members", () => {
     await page.getByRole("alert").filter({ hasText: "only active admin" }).waitFor();
 
     await page.goto(`${baseUrl()}/settings/audit`);
-    await page.getByText("member.role").first().waitFor();
-    await page.getByText("member.invite").first().waitFor();
+    // In words, naming who was changed (app/audit/describe.ts).
+    await page.getByText("changed Priya Hale's role from senior technician to technician").first().waitFor();
+    await page.getByText(/invited .+ as /).first().waitFor();
     // The refused invitation (400) and the refused demotion (409) are the only failed loads.
     expect(errors.filter((e) => !/status of (400|409)/.test(e))).toEqual([]);
     expect(errors).toHaveLength(2);

@@ -26,22 +26,52 @@ export const caseKeys = { all: ["case"] as const, one: (id: string) => ["case", 
 export const caseQuery = (caseId: string) =>
   queryOptions({ queryKey: caseKeys.one(caseId), queryFn: () => call<CaseView>(`/api/cases/${caseId}`), staleTime: 5_000 });
 
-type Change =
+export type Change =
   | { kind: "observe"; symptomId: string; name: string; present: boolean; source?: "owner" | "technician" }
   | { kind: "unobserve"; id: string }
   | { kind: "find"; checkId: string; name: string; result?: "pass" | "fail"; reading?: string }
   | { kind: "unfind"; id: string };
 
-function send(caseId: string, c: Change) {
+/** What the server answers to a change: the new row's id when one was added. */
+export type ChangeAnswer = { id?: string } | undefined;
+
+/**
+ * The change that takes `change` back, given the case as it was before and the server's answer:
+ * a new observation or finding is removed, a changed observation gets its old answer back, and a
+ * removed one is recorded again as it was. With its words for the notice that offers it.
+ */
+export function undoOf(before: CaseView["case"], change: Change, answer: ChangeAnswer): { said: string; undo: Change | null } {
+  switch (change.kind) {
+    case "observe": {
+      const was = before.observations.find((o) => o.symptomId === change.symptomId);
+      const said = `Recorded “${change.name}” as ${change.present ? "present" : "absent"}.`;
+      if (was) return { said, undo: { kind: "observe", symptomId: was.symptomId, name: was.name, present: was.present, source: was.source } };
+      return { said, undo: answer?.id ? { kind: "unobserve", id: answer.id } : null };
+    }
+    case "find":
+      return { said: `Recorded “${change.name}”: ${change.reading ? change.reading : change.result === "fail" ? "found a fault" : "passed"}.`, undo: answer?.id ? { kind: "unfind", id: answer.id } : null };
+    case "unobserve": {
+      const o = before.observations.find((x) => x.id === change.id);
+      return { said: `Removed “${o?.name ?? "the observation"}”.`, undo: o ? { kind: "observe", symptomId: o.symptomId, name: o.name, present: o.present, source: o.source } : null };
+    }
+    case "unfind": {
+      const f = before.findings.find((x) => x.id === change.id);
+      const undo: Change | null = f ? (f.reading ? { kind: "find", checkId: f.checkId, name: f.name, reading: f.reading } : { kind: "find", checkId: f.checkId, name: f.name, result: f.result }) : null;
+      return { said: `Removed the finding “${f?.name ?? ""}”.`, undo };
+    }
+  }
+}
+
+function send(caseId: string, c: Change): Promise<ChangeAnswer> {
   switch (c.kind) {
     case "observe":
-      return call(`/api/cases/${caseId}/observations`, { method: "POST", body: JSON.stringify({ symptomId: c.symptomId, present: c.present, source: c.source ?? "technician" }) });
+      return call<ChangeAnswer>(`/api/cases/${caseId}/observations`, { method: "POST", body: JSON.stringify({ symptomId: c.symptomId, present: c.present, source: c.source ?? "technician" }) });
     case "unobserve":
-      return call(`/api/cases/${caseId}/observations/${c.id}`, { method: "DELETE" });
+      return call<undefined>(`/api/cases/${caseId}/observations/${c.id}`, { method: "DELETE" });
     case "find":
-      return call(`/api/cases/${caseId}/findings`, { method: "POST", body: JSON.stringify({ checkId: c.checkId, result: c.result, reading: c.reading }) });
+      return call<ChangeAnswer>(`/api/cases/${caseId}/findings`, { method: "POST", body: JSON.stringify({ checkId: c.checkId, result: c.result, reading: c.reading }) });
     case "unfind":
-      return call(`/api/cases/${caseId}/findings/${c.id}`, { method: "DELETE" });
+      return call<undefined>(`/api/cases/${caseId}/findings/${c.id}`, { method: "DELETE" });
   }
 }
 

@@ -1,46 +1,96 @@
-import { useEffect, useRef, useState } from "react";
+import { useEffect, useId, useRef, useState } from "react";
 import type { Diagnosis } from "~/cases/present-diagnosis";
+import { describeRule, type UnitSystem } from "~/measure";
 import { formatMoney, formatPercent } from "../format";
 import { Fold } from "../fold";
 import { Cautions } from "./cautions";
 
 type Step = Diagnosis["plan"]["steps"][number];
-export type RecordResult = (step: Step, result: { result?: "pass" | "fail"; reading?: string }) => void;
+type Result = "pass" | "fail";
+export type RecordResult = (step: Step, result: { result?: Result; reading?: string }) => void;
 
 const SHOWN = 8;
 const WORTH = 0.02; // below a 2% chance of finding the fault a check waits in the folded list
 
 const ACCESS_LABEL: Record<string, string> = { ramp: "ramp", road_test: "road test", scan_tool: "scan tool", wheels_off: "wheels off", bonnet_open: "bonnet open", cold_engine: "cold engine" };
+const RESULT_WORDS: Record<Result, string> = { pass: "passed", fail: "found a fault" };
 
-/** Arrow keys move between steps; P and F record pass or fail on the focused step. */
-function onPlanKey(e: React.KeyboardEvent<HTMLOListElement>, steps: Step[], record: RecordResult) {
+/** Skill, access and tools in one line, each named once ("scan tool" is both an access and a tool). */
+export function needsLine(step: Pick<Step, "skill" | "access" | "tools">): string {
+  const seen = new Set<string>();
+  return [step.skill, ...step.access.map((a) => ACCESS_LABEL[a] ?? a), ...step.tools]
+    .filter((w) => {
+      const k = w.toLowerCase();
+      return !seen.has(k) && (seen.add(k), true);
+    })
+    .join(" · ");
+}
+
+type Armed = { checkId: string; result: Result } | null;
+
+/**
+ * The plan's keys act only on a step the person has moved to (arrows, Tab or a click): P or F then
+ * asks for Enter before anything is recorded, and any other key lets go. Stray typing on the page
+ * can therefore never record a result; the buttons record at once, and every recording can be undone.
+ */
+function onPlanKey(e: React.KeyboardEvent<HTMLOListElement>, steps: Step[], armed: Armed, setArmed: (a: Armed) => void, record: RecordResult) {
+  if (e.ctrlKey || e.metaKey || e.altKey || e.key === "Shift") return;
   const items = [...e.currentTarget.querySelectorAll<HTMLElement>("[data-step]")];
   const at = items.indexOf(document.activeElement as HTMLElement);
+  const step = at >= 0 ? steps[at] : undefined;
   if (e.key === "ArrowDown" || e.key === "ArrowUp") {
     e.preventDefault();
+    setArmed(null);
     const next = at < 0 ? 0 : Math.min(items.length - 1, Math.max(0, at + (e.key === "ArrowDown" ? 1 : -1)));
     items[next]?.focus();
-  } else if (at >= 0 && (e.key === "p" || e.key === "f") && steps[at].resultKind === "pass_fail") {
+    return;
+  }
+  if (!step || e.target !== items[at]) return; // typing in a reading field is not a command
+  const key = e.key.toLowerCase();
+  if ((key === "p" || key === "f") && step.resultKind === "pass_fail") {
     e.preventDefault();
-    record(steps[at], { result: e.key === "p" ? "pass" : "fail" });
-  } else if (at >= 0 && e.key === "Enter" && e.target === items[at]) {
+    setArmed({ checkId: step.checkId, result: key === "p" ? "pass" : "fail" });
+  } else if (e.key === "Enter" && armed?.checkId === step.checkId) {
     e.preventDefault();
-    items[at].querySelector<HTMLElement>("input, button")?.focus();
+    setArmed(null);
+    record(step, { result: armed.result });
+  } else if (e.key === "Enter") {
+    // Into the reading field only: on a pass/fail step, focusing a button would let the next
+    // space of someone's typing press it.
+    e.preventDefault();
+    if (step.resultKind === "measurement") items[at].querySelector<HTMLElement>("input")?.focus();
+  } else {
+    setArmed(null);
   }
 }
 
-export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagnosis["plan"]; currency: string; record: RecordResult; busy: boolean; error: string | null }) {
+type PlanProps = {
+  plan: Diagnosis["plan"];
+  currency: string;
+  units: UnitSystem;
+  record: RecordResult;
+  busy: boolean;
+  /** The message of a refused recording, shown at the step it concerns. */
+  errorFor: (checkId: string) => string | null;
+  /** A refusal that concerns no step in particular. */
+  error: string | null;
+  /** The apprentice's view: one step, no plan statistics. */
+  single?: boolean;
+};
+
+export function CheckPlan({ plan, currency, units, record, busy, errorFor, error, single = false }: PlanProps) {
   const steps = plan.steps;
   // The plan orders every remaining check; the screen offers the few worth doing now.
   const worth = steps.filter((s, i) => i === 0 || s.pFind >= WORTH);
-  const shown = worth.slice(0, SHOWN);
-  const later = steps.filter((s) => !shown.includes(s));
+  const shown = single ? steps.slice(0, 1) : worth.slice(0, SHOWN);
+  const later = single ? [] : steps.filter((s) => !shown.includes(s));
   const list = useRef<HTMLOListElement>(null);
-  // N jumps to the next check from anywhere on the page (not while typing).
+  const [armed, setArmed] = useState<Armed>(null);
+  // Alt+N moves to the next check from anywhere on the page. It only moves the focus; a single
+  // letter would be reached by ordinary typing.
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
-      const t = e.target as HTMLElement | null;
-      if (e.key !== "n" || e.ctrlKey || e.metaKey || e.altKey || t?.closest("input, textarea, select, [cmdk-root]")) return;
+      if (!e.altKey || e.ctrlKey || e.metaKey || e.code !== "KeyN") return;
       const first = list.current?.querySelector<HTMLElement>("[data-step]");
       if (first) (e.preventDefault(), first.focus());
     };
@@ -49,30 +99,30 @@ export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagn
   }, []);
   return (
     <section aria-labelledby="plan" className="rounded-card border border-rule bg-card p-4">
-      <h2 id="plan" className="text-xl font-semibold">Check plan</h2>
-      {steps.length ? (
+      <h2 id="plan" className="text-xl font-semibold">{single ? "Your next check" : "Check plan"}</h2>
+      {!single && steps.length ? (
         <p className="mt-1 text-sm text-graphite-700" data-testid="plan-saving">
           Expected cost in this order <strong className="tabular">{formatMoney(plan.expectedCost, currency)}</strong>; cheapest-first would
           expect <span className="tabular">{formatMoney(plan.cheapestFirstExpectedCost, currency)}</span>
           {plan.saving > 0.005 ? <> — this order saves <strong className="tabular">{formatMoney(plan.saving, currency)}</strong> on average.</> : "."}
         </p>
-      ) : (
-        <p className="mt-1 text-graphite-700">No checks left that bear on these causes.</p>
-      )}
+      ) : null}
+      {steps.length === 0 ? <p className="mt-1 text-graphite-700">No checks left that bear on these causes{single ? " within your level" : ""}.</p> : null}
       {error ? <p role="alert" className="mt-2 rounded-lg border-2 border-stop p-3">{error}</p> : null}
-      {plan.whatIf && steps[0] ? (
+      {!single && plan.whatIf && steps[0] ? (
         <p className="mt-2 text-sm" data-testid="what-if">
           Why {steps[0].name.toLowerCase()} first: if it fails, the top cause becomes <strong>{plan.whatIf.ifFail?.topCause ?? "—"}</strong>
           {plan.whatIf.ifFail ? ` (${formatPercent(plan.whatIf.ifFail.probability)})` : ""}; if it passes, <strong>{plan.whatIf.ifPass?.topCause ?? "—"}</strong>
           {plan.whatIf.ifPass ? ` (${formatPercent(plan.whatIf.ifPass.probability)})` : ""}.
         </p>
       ) : null}
-      <p className="mt-2 text-sm text-graphite-600">
-        <kbd>N</kbd> next check · <kbd>↑</kbd>/<kbd>↓</kbd> move · <kbd>P</kbd> passed · <kbd>F</kbd> found a fault · <kbd>Enter</kbd> type a reading
+      {/* Keyboard hints are for the desk; a phone or tablet has no keys to press. */}
+      <p className="mt-2 hidden text-sm text-graphite-600 sm:pointer-fine:block">
+        <kbd>Alt</kbd>+<kbd>N</kbd> next check · <kbd>↑</kbd>/<kbd>↓</kbd> move · <kbd>P</kbd> or <kbd>F</kbd> then <kbd>Enter</kbd> records passed or a fault · <kbd>Enter</kbd> type a reading
       </p>
-      <ol ref={list} className="mt-3 grid gap-3" aria-label="Checks, best value first" onKeyDown={(e) => onPlanKey(e, shown, record)}>
+      <ol ref={list} className="mt-3 grid gap-3" aria-label="Checks, best value first" onKeyDown={(e) => onPlanKey(e, shown, armed, setArmed, record)} onBlur={() => setArmed(null)}>
         {shown.map((s, i) => (
-          <PlanStep key={s.checkId} step={s} first={i === 0} currency={currency} record={record} busy={busy} />
+          <PlanStep key={s.checkId} step={s} first={i === 0} currency={currency} units={units} record={record} busy={busy} error={errorFor(s.checkId)} armed={armed?.checkId === s.checkId ? armed.result : null} />
         ))}
       </ol>
       {later.length ? (
@@ -89,21 +139,24 @@ export function CheckPlan({ plan, currency, record, busy, error }: { plan: Diagn
         </Fold>
       ) : null}
       {plan.aboveSkill.length ? (
-        <div className="mt-4 border-t border-rule pt-3">
-          <h3 className="font-semibold">Waiting for a senior</h3>
-          <ul className="mt-1 grid gap-1 text-graphite-700">
+        <Fold className="mt-3 border-t border-rule pt-2" summaryClassName="min-h-tap cursor-pointer content-center font-medium text-graphite-700" summary={`${plan.aboveSkill.length} more checks need a technician or a senior: ask a senior`}>
+          <ul className="mt-1 grid gap-1 text-sm text-graphite-700" aria-label="Checks beyond your level">
             {plan.aboveSkill.map((s) => (
               <li key={s.checkId}>{s.name} — needs a {s.skill} ({formatPercent(s.pFind)} chance of finding it)</li>
             ))}
           </ul>
-        </div>
+        </Fold>
       ) : null}
     </section>
   );
 }
 
-function PlanStep({ step, first, currency, record, busy }: { step: Step; first: boolean; currency: string; record: RecordResult; busy: boolean }) {
+type StepProps = { step: Step; first: boolean; currency: string; units: UnitSystem; record: RecordResult; busy: boolean; error: string | null; armed: Result | null };
+
+function PlanStep({ step, first, currency, units, record, busy, error, armed }: StepProps) {
   const [reading, setReading] = useState("");
+  const errorId = useId();
+  const limit = step.rule ? describeRule(step.rule, units) : null;
   return (
     <li
       data-step={step.checkId}
@@ -117,18 +170,21 @@ function PlanStep({ step, first, currency, record, busy }: { step: Step; first: 
           <strong>{formatPercent(step.pFind)}</strong> to find it · {step.minutes} min · {formatMoney(step.cost, currency)}
         </span>
       </div>
-      <p className="text-sm text-graphite-600">
-        {[step.skill, ...step.access.map((a) => ACCESS_LABEL[a] ?? a), ...step.tools].join(" · ")}
-      </p>
-      {/* Every check on offer can be recorded straight away (buttons, P and F), so its cautions
-          are always shown in full; only the instructions fold. */}
+      <p className="text-sm text-graphite-600">{needsLine(step)}</p>
+      {/* Every check on offer can be recorded straight away, so its cautions are always shown in
+          full; only the instructions fold. */}
       <Cautions cautions={step.cautions} />
       {step.instructions.length ? (
-        <Fold className="mt-2" open={first} summaryClassName="cursor-pointer text-sm font-medium" summary="How to do it">
+        <Fold className="mt-1" open={first} summaryClassName="inline-flex min-h-tap cursor-pointer items-center font-medium" summary="How to do it">
           <ol className="mt-1 list-decimal pl-6 text-sm">
             {step.instructions.map((line, i) => <li key={i}>{line}</li>)}
           </ol>
         </Fold>
+      ) : null}
+      {armed ? (
+        <p role="status" className="mt-2 rounded-lg border-2 border-uv-500 bg-card p-2 font-medium">
+          Press <kbd>Enter</kbd> to record “{step.name}” as {RESULT_WORDS[armed]}, or any other key to let go.
+        </p>
       ) : null}
       {step.resultKind === "measurement" ? (
         <form
@@ -140,20 +196,29 @@ function PlanStep({ step, first, currency, record, busy }: { step: Step; first: 
         >
           <label className="flex flex-col text-sm font-medium">
             Reading for {step.name.toLowerCase()}
-            <input value={reading} onChange={(e) => setReading(e.target.value)} placeholder={step.rule ? `limit: ${step.rule.replace(/value\s*/g, "")}` : step.unit ?? ""} className="mt-1 min-h-tap w-56 rounded-lg border border-rule bg-card px-3 text-base" />
+            <input
+              value={reading}
+              onChange={(e) => setReading(e.target.value)}
+              placeholder={limit ? `limit: ${limit}` : step.unit ?? ""}
+              aria-invalid={error ? true : undefined}
+              aria-describedby={error ? errorId : undefined}
+              className="mt-1 min-h-tap w-64 max-w-full rounded-lg border border-rule bg-card px-3 text-base"
+            />
           </label>
           <button type="submit" disabled={busy} className="min-h-tap rounded-lg bg-uv-600 px-4 font-semibold text-white">Record reading</button>
+          {limit ? <p className="w-full text-sm text-graphite-600">Passes when the reading is {limit}.</p> : null}
         </form>
       ) : (
-        <div className="mt-2 flex gap-2">
-          <button type="button" disabled={busy} onClick={() => record(step, { result: "pass" })} className="min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper" aria-keyshortcuts="p">
-            Passed <kbd className="text-sm text-graphite-500">P</kbd>
+        <div className="mt-2 flex flex-wrap gap-2">
+          <button type="button" disabled={busy} onClick={() => record(step, { result: "pass" })} className="min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper">
+            Passed
           </button>
-          <button type="button" disabled={busy} onClick={() => record(step, { result: "fail" })} className="min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper" aria-keyshortcuts="f">
-            Found a fault <kbd className="text-sm text-graphite-500">F</kbd>
+          <button type="button" disabled={busy} onClick={() => record(step, { result: "fail" })} className="min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper">
+            Found a fault
           </button>
         </div>
       )}
+      {error ? <p id={errorId} role="alert" className="mt-2 rounded-lg border-2 border-stop p-2">{error}</p> : null}
       {step.failMeans ? <p className="mt-1 text-sm text-graphite-600">A fail means: {step.failMeans}</p> : null}
     </li>
   );

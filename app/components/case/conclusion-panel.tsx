@@ -9,24 +9,44 @@ type Props = {
   conclusion: { cause: string | null; notes: string | null };
   mayConclude: boolean;
   maySignOff: boolean;
+  mayReopen: boolean;
+  mayClose: boolean;
   isApprentice: boolean;
 };
 
 const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base";
 
-/** Concluding, and a senior's sign-off of an apprentice's conclusion. */
-export function ConclusionPanel({ state, version, causes, conclusion, mayConclude, maySignOff, isApprentice }: Props) {
+/**
+ * A concluded case leads with what was confirmed; the ranking as it stood when it was concluded is
+ * secondary (a confirmed "worn to the backing plate" must never sit under "worn near the limit 63 %").
+ */
+export function ConfirmedCause({ state, cause, notes }: { state: string; cause: string; notes: string | null }) {
+  const waiting = state === "awaiting_signoff";
+  return (
+    <section aria-labelledby="confirmed" className="rounded-card border-2 border-uv-500 bg-card p-4" data-testid="confirmed-cause">
+      <h2 id="confirmed" className="text-xl font-semibold">{waiting ? "Proposed cause, waiting for a senior's sign-off" : "Confirmed cause"}</h2>
+      <p className="mt-2 text-lg font-semibold">{cause}</p>
+      {notes ? <p className="mt-1 text-graphite-700">{notes}</p> : null}
+    </section>
+  );
+}
+
+/** Concluding; a senior's sign-off of an apprentice's conclusion; reopening and closing. */
+export function ConclusionPanel({ state, version, causes, conclusion, mayConclude, maySignOff, mayReopen, mayClose, isApprentice }: Props) {
+  const open = state === "open";
+  const anything = (open && mayConclude) || (state === "awaiting_signoff" && maySignOff) || (!open && mayReopen) || (state === "concluded" && mayClose);
+  if (!anything && open) return null;
   return (
     <section aria-labelledby="conclusion" className="rounded-card border border-rule bg-card p-4">
       <h2 id="conclusion" className="text-xl font-semibold">Conclusion</h2>
-      {conclusion.cause ? (
+      {!open && conclusion.cause ? (
         <p className="mt-2">
-          Confirmed cause: <strong>{conclusion.cause}</strong>
-          {conclusion.notes ? <span className="block text-graphite-700">{conclusion.notes}</span> : null}
+          {state === "awaiting_signoff" ? "Proposed" : "Confirmed"}: <strong>{conclusion.cause}</strong>
         </p>
       ) : null}
       {state === "awaiting_signoff" ? <p className="mt-2 font-medium text-uv-700">Waiting for a senior's sign-off.</p> : null}
-      {state === "open" && mayConclude ? (
+      {state === "closed" ? <p className="mt-2 text-graphite-700">The case is closed; its confirmed cause counts in the workshop's outcome statistics.</p> : null}
+      {open && mayConclude ? (
         <Form method="post" className="mt-3 grid gap-3">
           <input type="hidden" name="intent" value="conclude" />
           <input type="hidden" name="version" value={version} />
@@ -59,6 +79,27 @@ export function ConclusionPanel({ state, version, causes, conclusion, mayConclud
             <button type="submit" name="intent" value="send-back" className="min-h-tap rounded-lg border border-rule px-5 font-medium hover:bg-paper">Send back to diagnose</button>
           </div>
         </Form>
+      ) : null}
+      {state === "concluded" && mayClose ? (
+        <Form method="post" className="mt-3">
+          <input type="hidden" name="intent" value="close" />
+          <input type="hidden" name="version" value={version} />
+          <button type="submit" className="min-h-tap rounded-lg border border-rule px-5 font-medium hover:bg-paper">Close the case</button>
+        </Form>
+      ) : null}
+      {!open && mayReopen ? (
+        <details className="mt-3">
+          <summary className="inline-flex min-h-tap cursor-pointer items-center font-medium">Reopen the case…</summary>
+          <Form method="post" className="mt-2 grid gap-3">
+            <input type="hidden" name="intent" value="reopen" />
+            <input type="hidden" name="version" value={version} />
+            <label className="font-medium">
+              Why it is reopened
+              <textarea name="reason" required rows={2} className={`${field} py-2`} />
+            </label>
+            <button type="submit" className="min-h-tap justify-self-start rounded-lg border-2 border-uv-600 px-5 font-semibold text-uv-700">Reopen</button>
+          </Form>
+        </details>
       ) : null}
     </section>
   );

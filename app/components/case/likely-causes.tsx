@@ -50,7 +50,7 @@ function Bar({ label, value, muted = false, moved = false }: { label: string; va
     <div>
       <div className="flex items-baseline justify-between gap-3">
         <span className={muted ? "text-graphite-700" : "font-medium"}>{label}</span>
-        <span className="tabular font-semibold" aria-label={`${formatPercent(value)} likely`}>{formatPercent(value)}</span>
+        <span className="tabular font-semibold">{formatPercent(value)}</span>
       </div>
       <div className={`mt-1 h-3 rounded-full bg-data-soft ${moved ? "motion-safe:animate-pulse" : ""}`} aria-hidden="true">
         <div className={`h-3 rounded-full ${muted ? "bg-graphite-500" : "bg-data"}`} style={{ width: `${Math.max(0.5, value * 100)}%` }} />
@@ -67,20 +67,23 @@ function CauseRow({ cause, rank, moved, open }: { cause: ShownCause; rank: numbe
       <Fold
         open={open}
         className="mt-1"
-        summaryClassName="cursor-pointer text-sm text-graphite-700"
-        summary={<>Why {cause.priority ? <span className="ml-2 inline-block align-middle"><PriorityMark priority={cause.priority as "stop"} /></span> : null}</>}
+        summaryClassName="inline-flex min-h-tap cursor-pointer items-center gap-2 text-graphite-700"
+        summary={<>Why {cause.priority ? <PriorityMark priority={cause.priority as "stop"} /> : null}</>}
       >
         {cause.why.length === 0 ? (
           <p className="text-sm text-graphite-600">No evidence bears on it yet: its share is its usual frequency.</p>
         ) : (
-          <ul className="mt-1 grid gap-1 text-sm">
+          <ul className="mt-1 grid gap-2 text-sm" aria-label={`Evidence for and against ${cause.name}`}>
             {cause.why.map((w) => (
-              <li key={w.label} className="grid grid-cols-[1fr_8rem] items-center gap-2">
+              <li key={w.label} className="grid grid-cols-[1fr_6rem] items-center gap-2" data-why={w.weight > 0 ? "up" : "down"}>
                 <span>
-                  {w.weight > 0 ? "Points to it: " : "Points away: "}
                   {w.label}
+                  {w.recorded ? <span className="text-graphite-700">: {w.recorded}</span> : null}
+                  <span className={`block font-medium ${w.weight > 0 ? "text-data" : "text-graphite-700"}`}>
+                    {w.weight > 0 ? "▲ makes it more likely" : "▼ makes it less likely"}
+                  </span>
                 </span>
-                <span className="relative h-2 rounded bg-data-soft" aria-label={`weight ${w.weight.toFixed(2)}`}>
+                <span className="relative h-2 rounded bg-data-soft" aria-hidden="true">
                   <span
                     className={`absolute top-0 h-2 rounded ${w.weight > 0 ? "left-1/2 bg-data" : "right-1/2 bg-graphite-500"}`}
                     style={{ width: `${(Math.abs(w.weight) / max) * 50}%` }}

@@ -2,7 +2,7 @@
 // vehicles and cases. Opens with ⌘K / Ctrl+K or its button. cmdk draws the list and handles the
 // arrow keys; ranking is ours (app/quick-find), so cmdk's own filter is off.
 import { Command } from "cmdk";
-import { useCallback, useMemo, useState } from "react";
+import { useCallback, useMemo, useRef, useState } from "react";
 import { type Entry, type EntryKind, GROUP_HEADING, search } from "~/quick-find";
 import { itemValue, ResultRow } from "./result-row";
 import { type EntrySource, useQuickFindIndex } from "./use-index";
@@ -48,7 +48,10 @@ export function QuickFind(props: QuickFindProps) {
     },
     [props.open, props.onOpenChange],
   );
-  useQuickFindShortcut(useCallback(() => setOpen(!open), [open, setOpen]));
+  const input = useRef<HTMLInputElement>(null);
+  // Ctrl+K opens the palette; pressed again while it is open it keeps the typing there (closing
+  // it would send the next words to the page). Esc closes.
+  useQuickFindShortcut(useCallback(() => (open ? input.current?.focus() : setOpen(true)), [open, setOpen]));
 
   const { index, loading, error } = useQuickFindIndex(entries, cacheKey, opened || open);
   const groups = useMemo(() => (index ? search(index, query, { recentIds, kinds, limit }) : []), [index, query, recentIds, kinds, limit]);
@@ -77,7 +80,7 @@ export function QuickFind(props: QuickFindProps) {
         aria-keyshortcuts="Control+K Meta+K"
         className="inline-flex min-h-tap items-center gap-3 rounded-lg border border-rule bg-card px-3 text-base font-medium text-graphite-700 hover:bg-paper"
       >
-        Quick find <kbd className={KBD}>{shortcut}</kbd>
+        Quick find <kbd className={`${KBD} hidden sm:pointer-fine:inline`}>{shortcut}</kbd>
       </button>
       <Command.Dialog
         open={open}
@@ -99,10 +102,11 @@ export function QuickFind(props: QuickFindProps) {
       >
         {/* cmdk names the input after the dialog's label ("Quick find") through its own hidden label. */}
         <Command.Input
+          ref={input}
           value={query}
           onValueChange={setQuery}
           placeholder={placeholder ?? "Symptom, cause, check, registration, VIN or #case"}
-          className="min-h-tap w-full border-b border-rule bg-transparent px-4 py-3 text-lg outline-none placeholder:text-graphite-500"
+          className="min-h-tap w-full border-b border-rule bg-transparent px-4 py-3 text-lg outline-none placeholder:text-graphite-600"
         />
         <Command.List className="max-h-[60vh] overflow-y-auto p-2" aria-describedby="quick-find-keys">
           {loading ? <Command.Loading label="Loading Quick find">Loading…</Command.Loading> : null}

@@ -30,7 +30,7 @@ export default function Board({ loaderData }: Route.ComponentProps) {
         {loaderData.columns.map((col) => (
           <section key={col.key} aria-labelledby={`col-${col.key}`}>
             <h2 id={`col-${col.key}`} className="mb-3 text-lg font-semibold">
-              {col.title} <span className="tabular text-graphite-500">({col.cases.length})</span>
+              {col.title} <span className="tabular text-graphite-600">({col.cases.length})</span>
             </h2>
             <div className="grid gap-3">
               {col.cases.length === 0 ? <p className="text-graphite-600">Nothing here right now.</p> : null}

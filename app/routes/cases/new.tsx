@@ -6,7 +6,9 @@ import { openCase } from "~/cases/workflow.server";
 import { dbContext } from "~/context";
 import { owners, vehicles } from "~/db/schema";
 import { refusalMessage } from "~/http.server";
-import { validateVin } from "~/measure";
+import { RouteErrorPage } from "~/components/error-page";
+import { mileageUnit, parseMileage, validateVin } from "~/measure";
+import { getWorkshop } from "~/workshop/settings.server";
 import type { Route } from "./+types/new";
 
 const Known = z.object({ mode: z.literal("known"), vehicleId: z.uuid({ message: "Pick a vehicle" }) });
@@ -25,10 +27,14 @@ const Fresh = z.object({
 const OpenSchema = z.intersection(
   z.discriminatedUnion("mode", [Known, Fresh]),
   z.object({
-    mileageKm: z.coerce.number({ message: "Mileage is a number" }).int().min(0, "Mileage cannot be negative").max(3_000_000),
+    // Read in the workshop's units, thousands separators allowed (parseMileage, in the action).
+    mileage: z.string().trim().min(1, "Mileage is needed").max(20),
     complaint: z.string().trim().min(3, "Write the complaint in the owner's words").max(2000),
   }),
 );
+
+type Errors = Partial<Record<string, string[]>>;
+const fail = (errors: Errors) => data({ errors }, { status: 400 });
 
 export async function loader({ context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "case:open");
@@ -39,62 +45,91 @@ export async function loader({ context }: Route.LoaderArgs) {
     .innerJoin(owners, eq(owners.id, vehicles.ownerId))
     .where(eq(vehicles.workshopId, member.workshopId))
     .orderBy(asc(vehicles.registration));
-  return { vehicles: list };
+  const units = (await getWorkshop(context.get(dbContext), member.workshopId)).units;
+  return { vehicles: list, units };
 }
 
 export async function action({ request, context }: Route.ActionArgs) {
   const member = requirePermission(context.get(memberContext), "case:open");
+  const db = context.get(dbContext);
   const parsed = OpenSchema.safeParse(Object.fromEntries(await request.formData()));
-  if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "Check the form" }, { status: 400 });
+  if (!parsed.success) return fail(z.flattenError(parsed.error).fieldErrors as Errors);
   const input = parsed.data;
+  const mileage = parseMileage(input.mileage, (await getWorkshop(db, member.workshopId)).units);
+  if (!mileage.ok) return fail({ mileage: [mileage.message] });
   if (input.mode === "new" && input.vin) {
     const vin = validateVin(input.vin, { requireCheckDigit: false });
-    if (!vin.valid) return data({ error: vin.message }, { status: 400 });
+    if (!vin.valid) return fail({ vin: [vin.message] });
   }
   try {
-    const created = await openCase(context.get(dbContext), member, {
+    const created = await openCase(db, member, {
       vehicleId: input.mode === "known" ? input.vehicleId : undefined,
       newVehicle: input.mode === "new" ? input : undefined,
-      mileageKm: input.mileageKm,
+      mileageKm: mileage.value,
       complaint: input.complaint,
     });
     throw redirect(`/cases/${created.id}`);
   } catch (error) {
     const refused = await refusalMessage(error);
-    if (refused) return data({ error: refused.message }, { status: refused.status });
+    if (refused) return data({ errors: { form: [refused.message] } as Errors }, { status: refused.status });
     throw error;
   }
 }
 
+export function meta() {
+  return [{ title: "Open a case — Ramplight" }];
+}
+
 const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base";
 
+const FUELS = ["petrol", "diesel", "hybrid", "electric", "lpg"] as const;
+const DRIVES = ["fwd", "rwd", "awd"] as const;
+const NEW_FIELDS = [["ownerName", "Owner's name"], ["ownerPhone", "Owner's phone"], ["registration", "Registration"], ["vin", "VIN (optional)"], ["make", "Make"], ["model", "Model"], ["year", "Year"]] as const;
+
 export default function NewCase({ loaderData, actionData }: Route.ComponentProps) {
+  const errors: Errors = actionData?.errors ?? {};
+  const err = (k: string) =>
+    errors[k] ? (
+      <span id={`${k}-error`} className="block text-sm font-medium text-stop">
+        {errors[k]![0]}
+      </span>
+    ) : null;
+  const described = (k: string) => (errors[k] ? { "aria-invalid": true, "aria-describedby": `${k}-error` } : {});
   return (
     <div className="max-w-2xl">
       <h1 className="text-2xl font-semibold">Open a case</h1>
-      {actionData?.error ? <p role="alert" className="mt-3 rounded-lg border-2 border-stop bg-card p-3">{actionData.error}</p> : null}
+      {errors.form ? <p role="alert" className="mt-3 rounded-lg border-2 border-stop bg-card p-3">{errors.form[0]}</p> : null}
       <Form method="post" className="mt-4 grid gap-4" noValidate>
         <fieldset className="grid gap-2 rounded-card border border-rule bg-card p-4">
           <legend className="px-1 font-semibold">Vehicle on file</legend>
-          <label className="flex items-center gap-2"><input type="radio" name="mode" value="known" defaultChecked /> Pick from the list</label>
-          <select name="vehicleId" aria-label="Vehicle" className={field}>
+          <label className="flex min-h-tap items-center gap-2"><input type="radio" name="mode" value="known" defaultChecked /> Pick from the list</label>
+          <select name="vehicleId" aria-label="Vehicle" className={field} {...described("vehicleId")}>
             {loaderData.vehicles.map((v) => (
               <option key={v.id} value={v.id}>{v.registration} — {v.make} {v.model} ({v.owner})</option>
             ))}
           </select>
-          <label className="mt-2 flex items-center gap-2"><input type="radio" name="mode" value="new" /> A new owner and vehicle</label>
+          {err("vehicleId")}
+          <label className="mt-2 flex min-h-tap items-center gap-2"><input type="radio" name="mode" value="new" /> A new owner and vehicle</label>
           <div className="grid gap-2 sm:grid-cols-2">
-            {[["ownerName", "Owner's name"], ["ownerPhone", "Owner's phone"], ["registration", "Registration"], ["vin", "VIN (optional)"], ["make", "Make"], ["model", "Model"], ["year", "Year"]].map(([name, label]) => (
-              <label key={name} className="text-sm font-medium">{label}<input name={name} className={field} /></label>
+            {NEW_FIELDS.map(([name, label]) => (
+              <label key={name} className="text-sm font-medium">{label}<input name={name} className={field} {...described(name)} />{err(name)}</label>
             ))}
-            <label className="text-sm font-medium">Fuel<select name="fuelType" className={field}>{["petrol", "diesel", "hybrid", "electric", "lpg"].map((f) => <option key={f}>{f}</option>)}</select></label>
-            <label className="text-sm font-medium">Drive<select name="drivetrain" className={field}>{["fwd", "rwd", "awd"].map((f) => <option key={f}>{f}</option>)}</select></label>
+            <label className="text-sm font-medium">Fuel<select name="fuelType" className={field}>{FUELS.map((f) => <option key={f}>{f}</option>)}</select></label>
+            <label className="text-sm font-medium">Drive<select name="drivetrain" className={field}>{DRIVES.map((f) => <option key={f}>{f}</option>)}</select></label>
           </div>
         </fieldset>
-        <label className="font-medium">Mileage (km)<input name="mileageKm" inputMode="numeric" className={field} /></label>
-        <label className="font-medium">Complaint, in the owner's words<textarea name="complaint" rows={3} className={`${field} py-2`} /></label>
+        <label className="font-medium">
+          Mileage ({mileageUnit(loaderData.units)})
+          <input name="mileage" inputMode="numeric" placeholder={loaderData.units === "imperial" ? "e.g. 84,000" : "e.g. 135,000"} className={field} {...described("mileage")} />
+          {err("mileage")}
+        </label>
+        <label className="font-medium">Complaint, in the owner's words<textarea name="complaint" rows={3} className={`${field} py-2`} {...described("complaint")} />{err("complaint")}</label>
         <button type="submit" className="min-h-tap rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700">Open the case</button>
       </Form>
     </div>
   );
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  return <RouteErrorPage error={error} />;
 }

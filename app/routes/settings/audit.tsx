@@ -1,4 +1,7 @@
+import { Link } from "react-router";
+import { describeAudit } from "~/audit/describe";
 import { memberContext, requirePermission } from "~/auth/guards.server";
+import { RouteErrorPage } from "~/components/error-page";
 import { formatDate } from "~/components/format";
 import { dbContext } from "~/context";
 import { readAuditLog } from "~/workshop/audit-log.server";
@@ -13,27 +16,33 @@ export function meta() {
   return [{ title: "Audit log — Ramplight" }];
 }
 
-const show = (v: unknown) => (v == null ? "" : JSON.stringify(v));
-
 export default function AuditLog({ loaderData }: Route.ComponentProps) {
   return (
     <div>
       <h1 className="text-2xl font-semibold">Audit log</h1>
       <p className="text-graphite-700">Who changed what, newest first.</p>
-      <ol className="mt-4 grid gap-2">
-        {loaderData.entries.map((e) => (
-          <li key={e.id} className="rounded-lg border border-rule bg-card p-3">
-            <p>
-              <span className="tabular text-sm text-graphite-600">{formatDate(e.at)}</span> · <strong>{e.actor ?? "system"}</strong> · <code>{e.action}</code>
-            </p>
-            {e.before != null || e.after != null ? (
-              <p className="mt-1 text-sm break-all text-graphite-700">
-                {e.before != null ? <>before {show(e.before)} · </> : null}after {show(e.after)}
+      <ol className="mt-4 grid gap-2" aria-label="Audit entries">
+        {loaderData.entries.map((e) => {
+          const d = describeAudit(e);
+          return (
+            <li key={e.id} className="rounded-lg border border-rule bg-card p-3">
+              <p className="tabular text-sm text-graphite-600">{formatDate(e.at)}</p>
+              <p>
+                <strong>{e.actor ?? "Ramplight"}</strong> {d.text}
+                {d.href ? (
+                  <>
+                    {" "}· <Link to={d.href} className="font-medium text-uv-700 underline">{d.linkText}</Link>
+                  </>
+                ) : null}
               </p>
-            ) : null}
-          </li>
-        ))}
+            </li>
+          );
+        })}
       </ol>
     </div>
   );
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  return <RouteErrorPage error={error} />;
 }

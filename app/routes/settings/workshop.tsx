@@ -4,15 +4,19 @@ import { memberContext, requirePermission } from "~/auth/guards.server";
 import { can } from "~/auth/permissions";
 import { formatMoney, formatPercent } from "~/components/format";
 import { dbContext } from "~/context";
+import { parseDecimal } from "~/measure";
 import { getWorkshop, updateWorkshop } from "~/workshop/settings.server";
 import type { Route } from "./+types/workshop";
+
+// A number as people type it in a form: "1,250.50" is 1250.5 (thousands separators allowed).
+const decimal = (message: string) => z.string().transform((v, ctx) => parseDecimal(v) ?? (ctx.addIssue({ code: "custom", message }), z.NEVER));
 
 const SettingsSchema = z.object({
   name: z.string().trim().min(2, "The name needs at least 2 characters").max(80),
   currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, "Currency is a three-letter ISO 4217 code, such as GBP or EUR"),
-  taxRatePercent: z.coerce.number({ message: "Tax rate is a number" }).min(0, "Tax rate cannot be negative").max(99, "Tax rate must be under 100%"),
+  taxRatePercent: decimal("Tax rate is a number, such as 20").pipe(z.number().min(0, "Tax rate cannot be negative").max(99, "Tax rate must be under 100%")),
   units: z.enum(["metric", "imperial"], { message: "Choose metric or imperial" }),
-  labourRatePerHour: z.coerce.number({ message: "Labour rate is a number" }).min(0, "Labour rate cannot be negative").max(10_000),
+  labourRatePerHour: decimal("Labour rate is a number, such as 84 or 1,250.50").pipe(z.number().min(0, "Labour rate cannot be negative").max(10_000, "Labour rate is at most 10,000 per hour")),
 });
 
 export async function loader({ context }: Route.LoaderArgs) {
@@ -55,7 +59,7 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
       ["Country", w.country],
       ["Currency", w.currency],
       ["Tax rate", formatPercent(w.taxRate, 1)],
-      ["Units", w.units === "metric" ? "Metric (km, bar, L/100 km)" : "Imperial (miles, psi, mpg)"],
+      ["Units", w.units === "metric" ? "Metric (km, kPa, mm, L/100 km)" : "Imperial (miles, psi, inches, mpg)"],
       ["Labour rate", `${formatMoney(w.labourRatePerHour, w.currency)} per hour`],
     ];
     return (
@@ -86,8 +90,8 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
         <label className="font-medium">
           Units
           <select name="units" defaultValue={w.units} className={field}>
-            <option value="metric">Metric (km, bar, L/100 km)</option>
-            <option value="imperial">Imperial (miles, psi, mpg)</option>
+            <option value="metric">Metric (km, kPa, mm, L/100 km)</option>
+            <option value="imperial">Imperial (miles, psi, inches, mpg)</option>
           </select>
           {err("units")}
         </label>

@@ -67,8 +67,14 @@ describe("roles that never record evidence", () => {
     }
   });
 
-  it("refuses the role before reading the body: an advisor's bad JSON is 403, not 400", async () => {
-    await refused("dana-reyes", "findings", caseId("b1"), { raw: "not json" }, 403);
+  it("refuses the role before validating the body: an advisor's invalid finding is 403, not 400", async () => {
+    await refused("dana-reyes", "findings", caseId("b1"), { json: { checkId: "not-an-id", result: "maybe" } }, 403);
+  });
+
+  it("refuses a body that is not JSON at all with 400 for anyone, before any role is looked at", async () => {
+    // The request guard's transport check (app/http/request-guard.server.ts): it says nothing about the case.
+    await refused("dana-reyes", "findings", caseId("b1"), { raw: "not json" }, 400);
+    await refused("priya-hale", "findings", caseId("b1"), { raw: "not json" }, 400);
   });
 
   it("answers another workshop's member with 404 and changes nothing", async () => {

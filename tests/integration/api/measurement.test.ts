@@ -55,3 +55,25 @@ describe("run-out readings against `value <= 0.05 mm`", () => {
     expect(a.body.result).toBe("fail");
   });
 });
+
+describe("readings as gauges show them", () => {
+  const tread = checkId("tread_depth"); // value >= 1.6 mm (Road Vehicles (Construction and Use) Regulations 1986 reg. 27, secondary)
+
+  it("takes tread in 32nds of an inch: 2/32 in = 1.5875 mm fails, 3/32 in = 2.38125 mm passes", async () => {
+    for (const [reading, result, mm] of [["2/32 in", "fail", 1.5875], ["3/32 in", "pass", 2.38125]] as const) {
+      const id = await freshCase(testDb());
+      const a = await run(findingsAction, testDb(), request(`/api/cases/${id}/findings`, { cookie: priya, json: { checkId: tread, reading } }), { caseId: id });
+      expect(a.status, reading).toBe(201);
+      expect(a.body.result, reading).toBe(result);
+      const row = await findingRow(testDb(), id, tread);
+      expect(row.reading).toBe(reading);
+      expect(row.value).toBeCloseTo(mm, 9);
+    }
+  });
+
+  it("refuses a percentage for a length, naming what is needed", async () => {
+    const { a } = await record("65 %");
+    expect(a.status).toBe(400);
+    expect(a.body.error).toBe("That reading is a percentage; this check needs a length, such as 0.05 mm.");
+  });
+});

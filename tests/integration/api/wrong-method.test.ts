@@ -1,6 +1,6 @@
 // A method a route does not serve is refused by React Router itself, before our handlers run, so
 // only the whole server shows what the caller gets. This file runs the production build
-// (build/server/index.js, made by scripts/test.sh before vitest) against this file's database.
+// (the server build scripts/test.sh makes before vitest, in RL_BUILD_DIR) against this file's database.
 // docs/api.md promises `{ error: string }` JSON for every refusal under /api/.
 import { existsSync } from "node:fs";
 import { resolve } from "node:path";
@@ -10,7 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { testDb } from "../../setup/integration-worker";
 import { APP, caseId, cookieFor } from "./helpers";
 
-const BUILD = resolve("build/server/index.js");
+const BUILD = resolve(process.env.RL_BUILD_DIR ?? "build", "server/index.js");
 let handle: (request: Request) => Promise<Response>;
 let cookie: string;
 let closePool: (() => Promise<void>) | undefined;

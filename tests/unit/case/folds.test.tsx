@@ -11,7 +11,7 @@ import { Fold } from "~/components/fold";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 
 type Step = Diagnosis["plan"]["steps"][number];
-const cause = (n: number, probability: number) => ({ id: `c${n}`, name: `Cause ${n}`, probability, priority: null, why: [{ label: `Evidence for ${n}`, weight: 1.5 }] });
+const cause = (n: number, probability: number) => ({ id: `c${n}`, name: `Cause ${n}`, probability, priority: null, why: [{ label: `Evidence for ${n}`, recorded: "present", weight: 1.5 }] });
 const step = (n: number, cautions: string[] = []): Step => ({
   checkId: `k${n}`, name: `Check ${n}`, pFind: 0.5 / n, cost: 10 * n, ratio: 0.05 / n, skill: "technician", pReached: 1, minutes: 10,
   tools: [], access: [], cautions, instructions: [`Do step ${n}`], resultKind: "pass_fail", unit: null, rule: null, failMeans: `Fault ${n}`,
@@ -33,7 +33,7 @@ describe("likely causes", () => {
 
 describe("check plan", () => {
   it("shows every offered check's cautions in full and folds only the later checks' instructions", () => {
-    render(<CheckPlan plan={plan([step(1, ["lifting"]), step(2, ["hot_parts"])])} currency="GBP" record={vi.fn()} busy={false} error={null} />);
+    render(<CheckPlan plan={plan([step(1, ["lifting"]), step(2, ["hot_parts"])])} currency="GBP" units="metric" record={vi.fn()} busy={false} error={null} errorFor={() => null} />);
     const [first, second] = screen.getAllByRole("listitem").filter((li) => li.hasAttribute("data-step"));
     expect(within(first).getByText(/never work under a car held only by a jack/)).toBeTruthy();
     expect(within(first).getByText("Do step 1")).toBeTruthy();
@@ -48,7 +48,7 @@ describe("check plan", () => {
 
   it("shows the cautions of a check that has no instructions", () => {
     const bare = { ...step(2, ["high_voltage"]), instructions: [] };
-    render(<CheckPlan plan={plan([step(1), bare])} currency="GBP" record={vi.fn()} busy={false} error={null} />);
+    render(<CheckPlan plan={plan([step(1), bare])} currency="GBP" units="metric" record={vi.fn()} busy={false} error={null} errorFor={() => null} />);
     const second = screen.getAllByRole("listitem").filter((li) => li.hasAttribute("data-step"))[1];
     expect(within(second).getByRole("note", { name: "Cautions" }).textContent).toMatch(/only trained and authorised people/);
   });

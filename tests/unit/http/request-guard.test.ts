@@ -22,8 +22,10 @@ describe("the request guard", () => {
     expect(await status(`${APP}/board`)).toBe(200);
     expect(await status(`${APP}/settings`, form("name=Works"))).toBe(200);
     expect(await status(`${APP}/api/what-if`, { method: "POST", body: "{}", headers: { origin: APP, "content-type": "application/json" } })).toBe(200);
-    // A DELETE with no body needs no content type.
+    // A DELETE with no body needs no content type, and may name one (the browser's fetch does).
     expect(await status(`${APP}/api/cases/x/findings/y`, { method: "DELETE", headers: { origin: APP } })).toBe(200);
+    expect(await status(`${APP}/api/cases/x/findings/y`, { method: "DELETE", headers: { origin: APP, "content-type": "application/json" } })).toBe(200);
+    expect(await status(`${APP}/api/cases/x/findings/y`, { method: "DELETE", headers: { origin: APP, "content-type": "application/json", "content-length": "0" } })).toBe(200);
   });
 
   it("judges the Origin against APP_URL, not the request's own URL (the //host path forgery)", async () => {

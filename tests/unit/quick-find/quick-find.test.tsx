@@ -91,15 +91,19 @@ describe("Quick find palette", () => {
     expect(options()[1].textContent).toContain("#1041");
   });
 
-  it("closes with Escape, and Ctrl+K toggles it shut too", () => {
+  it("closes with Escape; Ctrl+K pressed again keeps it open, with the typing in its box", () => {
     setup();
     openWithCtrlK();
     fireEvent.keyDown(input(), { key: "Escape" });
     expect(screen.queryByRole("dialog")).toBeNull();
     openWithCtrlK();
     expect(screen.getByRole("dialog")).toBeTruthy();
+    fireEvent.change(input(), { target: { value: "clunk" } });
+    (document.activeElement as HTMLElement | null)?.blur();
     openWithCtrlK();
-    expect(screen.queryByRole("dialog")).toBeNull();
+    expect(screen.getByRole("dialog")).toBeTruthy();
+    expect(document.activeElement).toBe(input());
+    expect((input() as HTMLInputElement).value).toBe("clunk");
   });
 
   it("loads its entries from a loader on first open", async () => {

@@ -1,7 +1,7 @@
 // Quick find ranking over the real starter knowledge base and demo fleet: the complaints
 // technicians type, in their words and the owner's, must land on the right entry first.
 import { describe, expect, it } from "vitest";
-import { buildIndex, ENTRY_KINDS, search, type ResultGroup } from "~/quick-find";
+import { buildIndex, caseEntry, ENTRY_KINDS, search, vehicleEntry, type ResultGroup } from "~/quick-find";
 import { starterKnowledgeBase } from "../../../seeds/kb";
 import { allEntries, caseByNumber, kbEntries, vehicleByReg } from "./fixtures";
 
@@ -161,5 +161,24 @@ describe("grouping", () => {
     const groups = search([kb, fleet], "orlan judder");
     expect(groups.map((g) => g.kind)).toContain("case");
     expect(first(search([kb, fleet], "judder when braking"))?.id).toBe("vibration_braking");
+  });
+});
+
+describe("a number beside other words is a whole plate part", () => {
+  // Invented plates and case numbers, as in the demo.
+  const cases = [1019, 1012, 1041].map((number, i) => caseEntry({ id: `case-${number}`, number, registration: ["DEMO 104", "DEMO 102", "DEMO 101"][i] }));
+  const fleet = buildIndex([...cases, vehicleEntry({ id: "v101", registration: "DEMO 101", make: "Orlan", model: "Brisk" })]);
+
+  it("“DEMO 101” finds that plate and its case, not cases #1019 and #1012", () => {
+    const found = search(fleet, "DEMO 101").flatMap((g) => g.items.map((i) => i.entry.id));
+    expect(found).toContain("v101");
+    expect(found).toContain("case-1041");
+    expect(found).not.toContain("case-1019");
+    expect(found).not.toContain("case-1012");
+  });
+
+  it("a number typed alone, or after #, is still read as the start of a case number", () => {
+    expect(ids(search(fleet, "#101"), "case")).toEqual(expect.arrayContaining(["case-1019", "case-1012"]));
+    expect(ids(search(fleet, "1019"), "case")).toContain("case-1019");
   });
 });

@@ -1,0 +1,48 @@
+// axe-core on every page, as each person who uses it sees it, on a desk screen, a 375 px phone and
+// in the dark theme: no serious or critical violation (WCAG 2.2 A and AA rules).
+import { describe, expect, it } from "vitest";
+import { seedId } from "../../seeds/ids";
+import { seriousViolations } from "./axe";
+import { baseUrl, signInAs, useBrowser } from "./browser";
+
+const CASE = (key: string) => `/cases/${seedId(`case:${key}`)}`;
+
+// Who sees which pages: every route with a screen appears at least once.
+const VISITS: { login: string | null; paths: string[] }[] = [
+  { login: null, paths: ["/", "/sign-in", "/no-such-page"] },
+  { login: "sam-newcomer", paths: ["/welcome"] },
+  { login: "priya-hale", paths: ["/board", "/cases", "/cases?q=DEMO", "/cases/new", CASE("b1"), "/kb", "/settings"] },
+  { login: "ollie-mbeki", paths: [CASE("b2")] },
+  { login: "tomas-varga", paths: [CASE("b3"), "/settings/audit"] },
+  { login: "dana-reyes", paths: [CASE("b4"), CASE("b5")] },
+  { login: "ines-okafor", paths: ["/settings", "/settings/members", "/settings/audit"] },
+];
+
+for (const view of [
+  { name: "desk", width: 1280, height: 900, dark: false },
+  { name: "phone", width: 375, height: 812, dark: false },
+  { name: "dark theme", width: 1280, height: 900, dark: true },
+]) {
+  describe(`accessibility on a ${view.name}`, () => {
+    const browser = useBrowser({ width: view.width, height: view.height });
+    for (const visit of VISITS) {
+      it(`${visit.login ?? "signed out"}: ${visit.paths.join(", ")}`, async () => {
+        await browser.clearCookies();
+        const { page } = await browser.newPage();
+        await page.emulateMedia({ colorScheme: view.dark ? "dark" : "light" });
+        if (visit.login) await signInAs(page, visit.login);
+        const found: string[] = [];
+        for (const path of visit.paths) {
+          await page.goto(`${baseUrl()}${path}`);
+          await page.waitForLoadState("networkidle");
+          // Open every fold on the page so what it hides is checked too.
+          await page.evaluate(() => document.querySelectorAll("main details").forEach((d) => ((d as HTMLDetailsElement).open = true)));
+          await page.waitForTimeout(50);
+          for (const v of await seriousViolations(page)) found.push(`${path}: ${v}`);
+        }
+        expect(found).toEqual([]);
+        await page.close();
+      });
+    }
+  });
+}
