@@ -19,7 +19,8 @@ export async function seedKnowledgeBase(tx: Tx, workshop: { id: string; slug: st
 
   await tx
     .insert(symptoms)
-    .values(kb.symptoms.map((s) => ({ id: sid(s.key), workshopId: workshop.id, ...s })))
+    // code: the DTC itself for trouble-code symptoms, null for the rest.
+    .values(kb.symptoms.map((s) => ({ ...s, id: sid(s.key), workshopId: workshop.id, code: s.code ?? null })))
     .onConflictDoNothing();
 
   // Parents before children: the tree's foreign key needs them in that order.
@@ -36,6 +37,9 @@ export async function seedKnowledgeBase(tx: Tx, workshop: { id: string; slug: st
           workshopId: workshop.id,
           parentId: parentKey ? cid(parentKey) : null,
           applicability: applicability ?? {},
+          // The owner summary's plain words: required on failure modes, empty on tree nodes.
+          ownerDescription: c.ownerDescription ?? "",
+          ifLeft: c.ifLeft ?? "",
         })),
       )
       .onConflictDoNothing();

@@ -7,22 +7,26 @@ export const SYSTEMS = [
   "wheels_tyres",
   "driveline",
   "engine_fuel_emissions",
+  "engine_mechanical",
   "cooling",
   "electrical",
   "exhaust",
+  "body",
 ] as const;
 export type System = (typeof SYSTEMS)[number];
 
 export const SYMPTOM_KINDS = [
   "noise",
   "vibration",
-  "handling",
-  "warning_light",
-  "performance",
-  "leak",
+  "pull", // pulls, wanders, heavy or vague steering, bouncy ride: how the car handles
+  "warning_lamp", // a lamp on the instrument panel, by name
+  "trouble_code", // a stored DTC (SAE J2012 / ISO 15031-6), typed as the code itself
   "smell",
-  "visual",
+  "leak",
+  "consumption", // uses more fuel or oil than it should
   "electrical",
+  "performance", // runs, starts, drives or works worse than it should
+  "visible", // seen on the car: wear, damage, smoke, corrosion
 ] as const;
 export type SymptomKind = (typeof SYMPTOM_KINDS)[number];
 
@@ -61,6 +65,7 @@ export type SymptomSeed = {
   synonyms: string[]; // owner and trade words: "judder", "shudder", "shake when I brake"
   system: System;
   kind: SymptomKind;
+  code?: string; // kind "trouble_code" only, and required there: the code itself, upper case ("P0420")
   conditions: string[]; // "under braking", "over bumps", "cold start", "at idle", "cornering", "at speed"
   leak: number; // P(symptom | no listed cause) in [0, 1]
 };
@@ -79,7 +84,10 @@ export type CauseSeed = {
   level: "system" | "component" | "failure_mode";
   name: string;
   system: System;
-  description: string;
+  description: string; // for the technician
+  // Failure modes only, and required there: what the owner summary says, in plain words.
+  ownerDescription?: string; // what is wrong, for a car owner: one or two sentences, no jargon, no blame
+  ifLeft?: string; // what happens if it is not put right, plainly and honestly
   baseRate?: number; // failure modes only: relative frequency among workshop visits, > 0
   repairMinutes?: number; // failure modes only: typical labour
   partsCost?: number; // failure modes only: typical parts, in the workshop currency (demo: euro-like units)

@@ -32,6 +32,7 @@ export const symptoms = pgTable(
     synonyms: text("synonyms").array().notNull().default(sql`'{}'::text[]`),
     system: systemEnum("system").notNull(),
     kind: symptomKindEnum("kind").notNull(),
+    code: text("code"), // the DTC itself ("P0420") for kind trouble_code, otherwise null
     conditions: text("conditions").array().notNull().default(sql`'{}'::text[]`),
     leak: doublePrecision("leak").notNull(),
     createdAt: createdAt(),
@@ -51,6 +52,8 @@ export const causes = pgTable(
     name: text("name").notNull(),
     system: systemEnum("system").notNull(),
     description: text("description").notNull().default(""),
+    ownerDescription: text("owner_description").notNull().default(""), // failure modes: plain words for the owner
+    ifLeft: text("if_left").notNull().default(""), // failure modes: what happens if it is not put right
     baseRate: doublePrecision("base_rate"),
     repairMinutes: integer("repair_minutes"),
     partsCost: numeric("parts_cost", { precision: 10, scale: 2, mode: "number" }),
