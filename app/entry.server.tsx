@@ -24,7 +24,9 @@ export { closeServerDb } from "./db/pool.server";
  */
 export const handleError: HandleErrorFunction = (error, { request }) => {
   if (request.signal.aborted) return;
-  if (error instanceof Error && /origin does not match `origin` header/.test(error.message)) return;
+  const foreign = request.method !== "GET" && request.headers.get("origin") !== new URL(env().APP_URL).origin;
+  // Documents report the check's own message; data requests a plain "Bad Request".
+  if (foreign && error instanceof Error && /origin does not match `origin` header|^Bad Request$/.test(error.message)) return;
   console.error(error);
 };
 
