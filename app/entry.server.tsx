@@ -3,8 +3,8 @@ import { Writable } from "node:stream";
 import { renderToPipeableStream } from "react-dom/server";
 import { type EntryContext, type HandleDataRequestFunction, type HandleErrorFunction, ServerRouter } from "react-router";
 import { NonceProvider } from "./components/nonce";
-import { env, isSecure } from "./env.server";
-import { securityHeaders } from "./security-headers.server";
+import { env, isSecure } from "~/config/env.server";
+import { securityHeaders } from "~/http/security-headers.server";
 
 // Validate the environment as the server loads this module, so a missing secret stops the start
 // with a clear message instead of failing the first request.
@@ -14,7 +14,7 @@ export const streamTimeout = 5_000;
 
 // The production server (scripts/serve.mjs) builds each request's context with this, so the
 // caller's socket address reaches the sign-in rate limit.
-export { requestContext } from "./context";
+export { requestContext } from "~/http/context";
 // …and closes the database pool on its way out; tests running the build close it the same way.
 export { closeServerDb } from "./db/pool.server";
 

@@ -10,9 +10,9 @@ import { Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
 import type { Route } from "./+types/root";
 import { RouteErrorPage } from "./components/error-page";
 import { useNonce } from "./components/nonce";
-import { dbContext } from "./context";
+import { dbContext } from "~/http/context";
 import { serverDb } from "./db/pool.server";
-import { appOrigin } from "./env.server";
+import { appOrigin } from "~/config/env.server";
 import { guardRequest, withResponseHeaders } from "./http/request-guard.server";
 
 export const middleware: Route.MiddlewareFunction[] = [

@@ -1,13 +1,13 @@
 import { sql } from "drizzle-orm";
 import type { Db } from "../app/db/client.server";
 import { cases, findings, identities, members, mileageReadings, observations, owners, users, vehicles, workshops } from "../app/db/schema";
-import { countryDefaults } from "../app/workshop/countries";
+import { countryDefaults } from "../app/domain/countries";
 import { DEMO_CASES } from "./demo/cases";
 import { DEMO_OWNERS, DEMO_VEHICLES } from "./demo/fleet";
 import { DEMO_PEOPLE, DEMO_WORKSHOPS } from "./demo/people";
 import { seedId } from "./ids";
 import { starterKnowledgeBase } from "./kb";
-import { kbId, seedKnowledgeBase } from "./knowledge";
+import { kbId, seedKnowledgeBase, seedStarterTemplate } from "./knowledge";
 
 const DAY = 86_400_000;
 
@@ -16,6 +16,8 @@ export async function seedDemo(db: Db, now = new Date()) {
   await db.transaction(async (tx) => {
     // One seeder at a time: two `npm start`s racing would otherwise trip over each other's rows.
     await tx.execute(sql`select pg_advisory_xact_lock(4242)`);
+    // Every workshop created in the app starts from this copy of the starter base.
+    await seedStarterTemplate(tx);
     for (const w of Object.values(DEMO_WORKSHOPS)) {
       const c = countryDefaults(w.country)!;
       await tx

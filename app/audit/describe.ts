@@ -1,3 +1,4 @@
+import { href } from "react-router";
 // Audit entries in the words of the workshop floor: a sentence that starts after the actor's name
 // ("Priya Hale recorded a fault: …") and, where the entry concerns a record, a link to it. Shared by
 // the case history and the workshop's audit log, browser-safe.
@@ -59,8 +60,8 @@ export function describeAudit(entry: AuditLine): Described {
   const subject = entry.subject ?? {};
   const say = SAID[entry.action];
   const text = say ? say(obj(entry.after), obj(entry.before), subject) : entry.action.replace(/[._]/g, " ");
-  if (subject.caseId && subject.caseNumber != null) return { text, href: `/cases/${subject.caseId}`, linkText: `case #${subject.caseNumber}` };
-  if (entry.action.startsWith("member.")) return { text, href: "/settings/members", linkText: "members" };
-  if (entry.action === "settings.update") return { text, href: "/settings", linkText: "settings" };
+  if (subject.caseId && subject.caseNumber != null) return { text, href: href("/cases/:caseId", { caseId: subject.caseId }), linkText: `case #${subject.caseNumber}` };
+  if (entry.action.startsWith("member.")) return { text, href: href("/settings/members"), linkText: "members" };
+  if (entry.action === "settings.update") return { text, href: href("/settings"), linkText: "settings" };
   return { text, href: null, linkText: null };
 }

@@ -1,10 +1,10 @@
 import { and, eq, gt, isNull, or, sql } from "drizzle-orm";
-import { audit } from "~/audit.server";
+import { audit } from "~/audit/write.server";
 import type { Db } from "~/db/client.server";
 import { identities, invitations, members, sessions, users, workshops } from "~/db/schema";
 import { hashToken } from "./session.server";
 import type { ProviderProfile } from "./github.server";
-import { skillForRole } from "./permissions";
+import { skillForRole } from "~/domain/people";
 
 /**
  * Finds the user behind a provider identity, creating it on first sign-in, and accepts a

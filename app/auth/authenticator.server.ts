@@ -1,5 +1,5 @@
 import { Authenticator } from "remix-auth";
-import { env } from "~/env.server";
+import { env } from "~/config/env.server";
 import { createGitHubStrategy, type ProviderProfile } from "./github.server";
 
 let authenticator: Authenticator<ProviderProfile> | undefined;

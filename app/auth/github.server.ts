@@ -1,7 +1,7 @@
 import { OAuth2Client, type OAuth2Tokens } from "arctic";
 import { GitHubStrategy } from "remix-auth-github";
 import { z } from "zod";
-import type { Env } from "~/env.server";
+import type { Env } from "~/config/env.server";
 
 export type ProviderProfile = { providerUserId: string; login: string; name: string; email: string | null };
 

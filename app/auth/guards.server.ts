@@ -1,15 +1,15 @@
-import { createContext, redirect } from "react-router";
+import { createContext, href, redirect } from "react-router";
 import type { Db } from "~/db/client.server";
-import { env, isSecure } from "~/env.server";
+import { env, isSecure } from "~/config/env.server";
 import { accountForSession, type Account } from "./accounts.server";
-import { can, type Permission } from "./permissions";
+import { can, type Permission } from "~/domain/permissions";
 import { readSessionTokens } from "./session.server";
-import type { Role } from "../../seeds/demo/people";
+import type { Role, Skill } from "~/domain/people";
 
-export type Member = Account & { memberId: string; workshopId: string; role: Role; skill: "apprentice" | "technician" | "senior"; workshopName: string };
+export type CurrentMember = Account & { memberId: string; workshopId: string; role: Role; skill: Skill; workshopName: string };
 
 // Set by the signed-in layout's middleware, read by every loader and action below it.
-export const memberContext = createContext<Member>();
+export const memberContext = createContext<CurrentMember>();
 
 export async function getAccount(request: Request, db: Db): Promise<Account | null> {
   return (await getSession(request, db))?.account ?? null;
@@ -26,7 +26,7 @@ export async function getSession(request: Request, db: Db): Promise<{ account: A
 
 function signInRedirect(request: Request) {
   const url = new URL(request.url);
-  return redirect(`/sign-in?next=${encodeURIComponent(url.pathname + url.search)}`);
+  return redirect(`${href("/sign-in")}?next=${encodeURIComponent(url.pathname + url.search)}`);
 }
 
 export async function requireAccount(request: Request, db: Db): Promise<Account> {
@@ -35,17 +35,17 @@ export async function requireAccount(request: Request, db: Db): Promise<Account>
   return account;
 }
 
-export function asMember(account: Account): Member {
-  if (!account.memberId || !account.workshopId || !account.role) throw redirect("/welcome");
+export function asMember(account: Account): CurrentMember {
+  if (!account.memberId || !account.workshopId || !account.role) throw redirect(href("/welcome"));
   if (account.status === "suspended") throw new Response("Your membership of this workshop is suspended.", { status: 403 });
-  return account as Member;
+  return account as CurrentMember;
 }
 
-export async function requireMember(request: Request, db: Db): Promise<Member> {
+export async function requireMember(request: Request, db: Db): Promise<CurrentMember> {
   return asMember(await requireAccount(request, db));
 }
 
-export function requirePermission(member: Member, permission: Permission): Member {
+export function requirePermission(member: CurrentMember, permission: Permission): CurrentMember {
   if (!can(member.role, permission)) throw new Response(`Your role (${member.role}) cannot do this.`, { status: 403 });
   return member;
 }

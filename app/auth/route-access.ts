@@ -1,4 +1,4 @@
-import type { Permission } from "./permissions";
+import type { Permission } from "~/domain/permissions";
 
 // Who may use each route, by method (and form intent). The authorization test walks app/routes.ts
 // and fails for any route missing here, then tries every cell against the running server.
@@ -7,14 +7,14 @@ import type { Permission } from "./permissions";
 //   no-workshop  signed in and not yet a member anywhere
 //   member       any active member of a workshop
 //   Permission   a member whose role has it
-export type Access = "public" | "account" | "no-workshop" | "member" | Permission;
+export type RouteAccessLevel = "public" | "account" | "no-workshop" | "member" | Permission;
 
 export type RouteAccess = {
   path: string; // a concrete URL to try; {case} stands for an open demo case of the Bramblegate workshop
   api?: true; // JSON route: 401/403 answers instead of redirects
   record?: true; // the URL names a record of one workshop: members of another get 404
-  GET?: Access;
-  POST?: Access | Record<string, Access>; // by intent when one route has several forms
+  GET?: RouteAccessLevel;
+  POST?: RouteAccessLevel | Record<string, RouteAccessLevel>; // by intent when one route has several forms
 };
 
 export const ROUTE_ACCESS: Record<string, RouteAccess> = {

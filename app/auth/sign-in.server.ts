@@ -1,10 +1,10 @@
 import { redirect } from "react-router";
-import { audit } from "~/audit.server";
+import { audit } from "~/audit/write.server";
 import type { Db } from "~/db/client.server";
-import { env, isSecure } from "~/env.server";
+import { env, isSecure } from "~/config/env.server";
 import { loadAccount, signInFromProfile } from "./accounts.server";
 import { getAuthenticator } from "./authenticator.server";
-import { ROLE_HOME } from "./permissions";
+import { ROLE_HOME } from "~/domain/permissions";
 import { clientIp, limitSignIn } from "./rate-limit.server";
 import { createSession, readSessionTokens, revokeSession, sessionCookie } from "./session.server";
 

@@ -1,10 +1,10 @@
 import { and, eq, type SQL, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import type { Member } from "~/auth/guards.server";
+import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
 import { auditLog, cases, causes, checks, findings, members, observations, owners, symptoms, users, vehicles, workshops } from "~/db/schema";
-import type { Json } from "~/components/json-payload";
-import { refuse, requireId } from "~/http.server";
+import type { Json } from "~/http/json-payload";
+import { refuse, requireId } from "~/http/errors.server";
 import { latestNote } from "./notes.server";
 
 const assigned = alias(members, "assigned");
@@ -129,23 +129,23 @@ const at = <T extends { recordedAt: string }>(r: T) => ({ ...r, recordedAt: new 
  * workshop's outcome counts, in one query. A case of another workshop is "not found", never
  * "forbidden", so ids reveal nothing.
  */
-export async function loadCase(db: Db, member: Pick<Member, "workshopId">, caseId: string): Promise<CaseBundle> {
+export async function loadCase(db: Db, member: Pick<CurrentMember, "workshopId">, caseId: string): Promise<CaseBundle> {
   const { history: _h, ...bundle } = await read(db, member, caseId, { history: false, outcomes: true });
   return bundle;
 }
 
 /** The same, with the latest history rows: what the case workbench shows. */
-export async function loadCaseWithHistory(db: Db, member: Pick<Member, "workshopId">, caseId: string) {
+export async function loadCaseWithHistory(db: Db, member: Pick<CurrentMember, "workshopId">, caseId: string) {
   return read(db, member, caseId, { history: true, outcomes: true });
 }
 
 /** The case and its evidence, for a change to it: no history, no outcome counts. */
-export async function loadCaseForChange(db: Db, member: Pick<Member, "workshopId">, caseId: string): Promise<CaseFields> {
+export async function loadCaseForChange(db: Db, member: Pick<CurrentMember, "workshopId">, caseId: string): Promise<CaseFields> {
   const { history: _h, outcomes: _o, ...fields } = await read(db, member, caseId, { history: false, outcomes: false });
   return fields;
 }
 
-async function read(db: Db, member: Pick<Member, "workshopId">, caseId: string, want: { history: boolean; outcomes: boolean }) {
+async function read(db: Db, member: Pick<CurrentMember, "workshopId">, caseId: string, want: { history: boolean; outcomes: boolean }) {
   requireId(caseId, "No such case in this workshop.");
   let query = prepared.get(db);
   if (!query) prepared.set(db, (query = caseQuery(db)));

@@ -1,31 +1,27 @@
-import type { Member } from "~/auth/guards.server";
+import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
 import { compileModel, diagnose, type CompiledModel, type Model, type Skill } from "~/reasoning";
-import { buildModel, vehicleFacts } from "./build-model";
+import { buildModel, vehicleFacts } from "~/kb/model";
 import { evidenceOf, type CaseBundle } from "./case.server";
 import { presentDiagnosis } from "./present-diagnosis";
-import { loadKnowledge } from "./knowledge.server";
+import { kbCache } from "~/kb/cache";
+import { loadKnowledge } from "~/kb/knowledge.server";
 
 // The model depends on the knowledge base, the vehicle's facts, the labour rate and the outcome
 // counts; everything else is the case's evidence. Vehicles of the same kind share a compiled model,
-// so a re-rank only redoes the arithmetic. Bounded; the oldest entry goes first.
-const CACHE_SIZE = 200;
-const compiled = new Map<string, { model: Model; compiled: CompiledModel }>();
+// so a re-rank only redoes the arithmetic.
+const compiled = kbCache<{ model: Model; compiled: CompiledModel }>("compiled-model", 200);
 
 /** The likely causes, check plan and next-step what-if for a case, as the member may act on it. */
-export async function diagnoseCase(db: Db, member: Pick<Member, "role" | "skill" | "workshopId">, bundle: CaseBundle) {
+export async function diagnoseCase(db: Db, member: Pick<CurrentMember, "role" | "skill" | "workshopId">, bundle: CaseBundle) {
   const kb = await loadKnowledge(db, bundle.workshop.id, bundle.workshop.kbVersion);
   // Read with the case (loadCase), so the page costs no extra query for them.
   const outcomes = bundle.outcomes;
   const facts = vehicleFacts({ ...bundle.vehicle, mileageKm: bundle.mileageKm });
-  const key = JSON.stringify([bundle.workshop.id, kb.kbVersion, facts, bundle.workshop.labourRatePerHour, outcomes]);
-  let entry = compiled.get(key);
-  if (!entry) {
+  const entry = await compiled.get(bundle.workshop.id, kb.kbVersion, JSON.stringify([facts, bundle.workshop.labourRatePerHour, outcomes]), () => {
     const model = buildModel(kb, facts, bundle.workshop.labourRatePerHour, outcomes);
-    entry = { model, compiled: compileModel(model) };
-    if (compiled.size >= CACHE_SIZE) compiled.delete(compiled.keys().next().value!);
-    compiled.set(key, entry);
-  }
+    return { model, compiled: compileModel(model) };
+  });
   const { model } = entry;
   const evidence = evidenceOf(bundle);
   // An apprentice's plan holds only what they may do; everyone else sees every check.

@@ -1,7 +1,7 @@
 import type { RouterContextProvider } from "react-router";
-import { api, jsonBody } from "~/api.server";
-import { dbContext } from "~/context";
-import { refuse } from "~/http.server";
+import { api, jsonBody } from "~/http/api.server";
+import { dbContext } from "~/http/context";
+import { refuse } from "~/http/errors.server";
 import { FindingBody, ObservationBody } from "./api-schemas";
 import { loadCaseForChange } from "./case.server";
 import { assertCanWork, recordFinding, recordObservation, removeFinding, removeObservation } from "./evidence.server";

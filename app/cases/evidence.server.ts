@@ -1,23 +1,21 @@
 import { and, eq } from "drizzle-orm";
-import { audit } from "~/audit.server";
-import type { Member } from "~/auth/guards.server";
-import { can } from "~/auth/permissions";
+import { audit } from "~/audit/write.server";
+import type { CurrentMember } from "~/auth/guards.server";
+import { mayDoCheck, mayWorkOn } from "~/domain/case-access";
 import type { Db } from "~/db/client.server";
 import { checks, findings, observations, symptoms } from "~/db/schema";
-import { refuse, requireId } from "~/http.server";
+import { refuse, requireId } from "~/http/errors.server";
 import { evaluateRule, MeasureError } from "~/measure";
-import { SKILL_LEVELS } from "~/reasoning";
 import type { CaseFields } from "./case.server";
 
 
 /** Who may add evidence: technicians and seniors on any case, an apprentice on the cases given to them. */
-export function assertCanWork(member: Member, c: Pick<CaseFields, "assignedMemberId" | "state">) {
-  const own = can(member.role, "case:work-assigned") && c.assignedMemberId === member.memberId;
-  if (!can(member.role, "case:work") && !own) refuse(403, "Your role cannot record evidence on this case.");
+export function assertCanWork(member: CurrentMember, c: Pick<CaseFields, "assignedMemberId" | "state">) {
+  if (!mayWorkOn(member, c)) refuse(403, "Your role cannot record evidence on this case.");
   if (c.state !== "open") refuse(409, "This case is no longer open, so its evidence is fixed. A senior can reopen it.");
 }
 
-export async function recordObservation(db: Db, member: Member, c: CaseFields, input: { symptomId: string; present: boolean; source: "owner" | "technician"; note?: string }) {
+export async function recordObservation(db: Db, member: CurrentMember, c: CaseFields, input: { symptomId: string; present: boolean; source: "owner" | "technician"; note?: string }) {
   assertCanWork(member, c);
   const [symptom] = await db.select({ id: symptoms.id, name: symptoms.name }).from(symptoms).where(and(eq(symptoms.id, input.symptomId), eq(symptoms.workshopId, member.workshopId)));
   if (!symptom) refuse(400, "That symptom is not in this workshop's knowledge base.");
@@ -33,7 +31,7 @@ export async function recordObservation(db: Db, member: Member, c: CaseFields, i
   });
 }
 
-export async function removeObservation(db: Db, member: Member, c: CaseFields, observationId: string) {
+export async function removeObservation(db: Db, member: CurrentMember, c: CaseFields, observationId: string) {
   assertCanWork(member, c);
   requireId(observationId, "That observation is not on this case.");
   await db.transaction(async (tx) => {
@@ -43,14 +41,14 @@ export async function removeObservation(db: Db, member: Member, c: CaseFields, o
   });
 }
 
-export async function recordFinding(db: Db, member: Member, c: CaseFields, input: { checkId: string; result?: "pass" | "fail"; reading?: string; note?: string }) {
+export async function recordFinding(db: Db, member: CurrentMember, c: CaseFields, input: { checkId: string; result?: "pass" | "fail"; reading?: string; note?: string }) {
   assertCanWork(member, c);
   const [check] = await db
     .select({ id: checks.id, name: checks.name, skill: checks.skill, resultKind: checks.resultKind, rule: checks.rule, unit: checks.unit })
     .from(checks)
     .where(and(eq(checks.id, input.checkId), eq(checks.workshopId, member.workshopId)));
   if (!check) refuse(400, "That check is not in this workshop's knowledge base.");
-  if (member.role === "apprentice" && SKILL_LEVELS.indexOf(check.skill) > SKILL_LEVELS.indexOf(member.skill)) refuse(403, `“${check.name}” needs a ${check.skill}. Ask a senior.`);
+  if (!mayDoCheck(member, check.skill)) refuse(403, `“${check.name}” needs a ${check.skill}. Ask a senior.`);
   if (c.findings.some((f) => f.checkId === check.id)) refuse(409, `“${check.name}” is recorded on this case already. Remove that finding first to record it again.`);
 
   let result = input.result;
@@ -83,7 +81,7 @@ export async function recordFinding(db: Db, member: Member, c: CaseFields, input
   });
 }
 
-export async function removeFinding(db: Db, member: Member, c: CaseFields, findingId: string) {
+export async function removeFinding(db: Db, member: CurrentMember, c: CaseFields, findingId: string) {
   assertCanWork(member, c);
   requireId(findingId, "That finding is not on this case.");
   await db.transaction(async (tx) => {

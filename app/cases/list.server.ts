@@ -3,7 +3,7 @@ import type { Db } from "~/db/client.server";
 import { cases, causes, members, users, vehicles } from "~/db/schema";
 
 import { latestNote, type NoteRow } from "./notes.server";
-import type { CaseState } from "./states";
+import type { CaseState } from "~/domain/cases";
 
 export type CaseFilter = { state?: CaseState; q?: string; assignedTo?: string; limit?: number };
 
@@ -50,4 +50,4 @@ export async function listCases(db: Db, workshopId: string, filter: CaseFilter =
     .limit(filter.limit ?? 100);
 }
 
-export type CaseRow = Awaited<ReturnType<typeof listCases>>[number];
+export type CaseListItem = Awaited<ReturnType<typeof listCases>>[number];

@@ -1,7 +1,7 @@
 // Shapes the core's numbers for the screens: names, priorities, check details and the "why" in
 // the technician's words. Pure.
 import type { Plan, Ranking, WhatIf } from "~/reasoning";
-import type { Knowledge } from "./build-model";
+import type { Knowledge } from "~/kb/model";
 
 /** Causes the screen shows with their "why"; the evidence is listed for these only. */
 export const WHY_CAUSES = 5;

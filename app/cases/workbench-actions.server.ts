@@ -1,7 +1,8 @@
 import { z } from "zod";
-import type { Member } from "~/auth/guards.server";
-import { can } from "~/auth/permissions";
-import { refuse } from "~/http.server";
+import type { CurrentMember } from "~/auth/guards.server";
+import { mayConclude } from "~/domain/case-access";
+import { can } from "~/domain/permissions";
+import { refuse } from "~/http/errors.server";
 import type { Db } from "~/db/client.server";
 import type { CaseFields } from "./case.server";
 import { askSenior, close, conclude, reopen, signOff, updateComplaint } from "./workflow.server";
@@ -10,17 +11,16 @@ import { askSenior, close, conclude, reopen, signOff, updateComplaint } from "./
 export const WorkbenchForm = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("conclude"), causeId: z.uuid({ message: "Choose the confirmed cause" }), notes: z.string().trim().min(3, "Say what you found and the repair").max(2000), version: z.coerce.number().int() }),
   z.object({ intent: z.enum(["signoff", "send-back"]), note: z.string().trim().max(2000).default(""), version: z.coerce.number().int() }),
-  z.object({ intent: z.literal("ask-senior"), note: z.string().trim().max(500).default("") }),
+  z.object({ intent: z.literal("ask-senior"), question: z.string().trim().max(500, "Keep the question under 500 characters").default("") }),
   z.object({ intent: z.literal("complaint"), complaint: z.string().trim().min(3, "The complaint needs a few words").max(2000), version: z.coerce.number().int() }),
   z.object({ intent: z.literal("reopen"), reason: z.string().trim().min(3, "Say why the case is reopened").max(1000), version: z.coerce.number().int() }),
   z.object({ intent: z.literal("close"), version: z.coerce.number().int() }),
 ]);
 
 /** The role check comes before the form is read, so a refused role learns nothing from validation. */
-export function assertIntentAllowed(member: Member, c: Pick<CaseFields, "assignedMemberId">, intent: unknown) {
-  const own = member.role === "apprentice" && c.assignedMemberId === member.memberId;
+export function assertIntentAllowed(member: CurrentMember, c: Pick<CaseFields, "assignedMemberId">, intent: unknown) {
   const allowed =
-    intent === "conclude" ? can(member.role, "case:conclude") || own
+    intent === "conclude" ? mayConclude(member, c)
     : intent === "signoff" || intent === "send-back" ? can(member.role, "case:signoff")
     : intent === "ask-senior" ? can(member.role, "case:ask-senior")
     : intent === "complaint" ? can(member.role, "case:open")
@@ -30,7 +30,7 @@ export function assertIntentAllowed(member: Member, c: Pick<CaseFields, "assigne
   if (!allowed) refuse(403, `Your role (${member.role}) cannot do this on a case.`);
 }
 
-export async function runWorkbenchForm(db: Db, member: Member, c: CaseFields, form: z.infer<typeof WorkbenchForm>) {
+export async function runWorkbenchForm(db: Db, member: CurrentMember, c: CaseFields, form: z.infer<typeof WorkbenchForm>) {
   switch (form.intent) {
     case "conclude": {
       const state = await conclude(db, member, c, form);
@@ -41,7 +41,7 @@ export async function runWorkbenchForm(db: Db, member: Member, c: CaseFields, fo
       await signOff(db, member, c, { accept: form.intent === "signoff", note: form.note, version: form.version });
       return form.intent === "signoff" ? "Signed off." : "Sent back to diagnose.";
     case "ask-senior":
-      await askSenior(db, member, c, form.note);
+      await askSenior(db, member, c, form.question);
       return "A senior has been asked.";
     case "complaint":
       await updateComplaint(db, member, c, form.complaint, form.version);

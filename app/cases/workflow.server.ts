@@ -1,10 +1,12 @@
+import type { Drivetrain, FuelType } from "~/domain/vehicles";
 import { and, eq, sql } from "drizzle-orm";
-import { audit } from "~/audit.server";
-import type { Member } from "~/auth/guards.server";
-import { can } from "~/auth/permissions";
+import { audit } from "~/audit/write.server";
+import type { CurrentMember } from "~/auth/guards.server";
+import { mayConclude } from "~/domain/case-access";
+import { can } from "~/domain/permissions";
 import type { Db } from "~/db/client.server";
 import { cases, causes, mileageReadings, owners, vehicles } from "~/db/schema";
-import { refuse } from "~/http.server";
+import { refuse } from "~/http/errors.server";
 import type { CaseFields } from "./case.server";
 
 /**
@@ -25,7 +27,7 @@ async function versionedUpdate(db: Pick<Db, "update" | "select">, c: CaseFields,
   return updated[0].version;
 }
 
-export async function updateComplaint(db: Db, member: Member, c: CaseFields, complaint: string, expected: number) {
+export async function updateComplaint(db: Db, member: CurrentMember, c: CaseFields, complaint: string, expected: number) {
   if (!can(member.role, "case:open")) refuse(403, "Your role cannot edit the complaint.");
   if (c.state === "closed") refuse(409, "This case is closed.");
   return db.transaction(async (tx) => {
@@ -35,7 +37,7 @@ export async function updateComplaint(db: Db, member: Member, c: CaseFields, com
   });
 }
 
-export async function askSenior(db: Db, member: Member, c: CaseFields, note: string) {
+export async function askSenior(db: Db, member: CurrentMember, c: CaseFields, note: string) {
   if (!can(member.role, "case:ask-senior")) refuse(403, "Your role cannot ask for a senior on this case.");
   if (c.state === "closed") refuse(409, "This case is closed.");
   await db.transaction(async (tx) => {
@@ -45,9 +47,8 @@ export async function askSenior(db: Db, member: Member, c: CaseFields, note: str
 }
 
 /** A technician's conclusion stands; an apprentice's waits for a senior's sign-off. */
-export async function conclude(db: Db, member: Member, c: CaseFields, input: { causeId: string; notes: string; version: number }) {
-  const apprenticeOwn = member.role === "apprentice" && c.assignedMemberId === member.memberId;
-  if (!can(member.role, "case:conclude") && !apprenticeOwn) refuse(403, "Your role cannot conclude this case.");
+export async function conclude(db: Db, member: CurrentMember, c: CaseFields, input: { causeId: string; notes: string; version: number }) {
+  if (!mayConclude(member, c)) refuse(403, "Your role cannot conclude this case.");
   if (c.state !== "open") refuse(409, "This case is concluded already.");
   const [cause] = await db.select({ id: causes.id, name: causes.name, level: causes.level }).from(causes).where(and(eq(causes.id, input.causeId), eq(causes.workshopId, member.workshopId)));
   if (!cause || cause.level !== "failure_mode") refuse(400, "Conclude with one failure mode from the likely causes.");
@@ -59,7 +60,7 @@ export async function conclude(db: Db, member: Member, c: CaseFields, input: { c
   return state;
 }
 
-export async function signOff(db: Db, member: Member, c: CaseFields, input: { accept: boolean; note: string; version: number }) {
+export async function signOff(db: Db, member: CurrentMember, c: CaseFields, input: { accept: boolean; note: string; version: number }) {
   if (!can(member.role, "case:signoff")) refuse(403, "Only a senior technician signs off.");
   if (c.state !== "awaiting_signoff") refuse(409, "This case is not waiting for a sign-off.");
   const set = input.accept
@@ -75,7 +76,7 @@ export async function signOff(db: Db, member: Member, c: CaseFields, input: { ac
  * A senior reopens a concluded or closed case, with a reason: the conclusion is set aside (the
  * audit row keeps it) and the evidence can change again.
  */
-export async function reopen(db: Db, member: Member, c: CaseFields, input: { reason: string; version: number }) {
+export async function reopen(db: Db, member: CurrentMember, c: CaseFields, input: { reason: string; version: number }) {
   if (!can(member.role, "case:reopen")) refuse(403, "Only a senior technician reopens a case.");
   if (c.state === "open") refuse(409, "This case is open already.");
   await db.transaction(async (tx) => {
@@ -85,7 +86,7 @@ export async function reopen(db: Db, member: Member, c: CaseFields, input: { rea
 }
 
 /** A concluded case is closed when the work is done: its confirmed cause then feeds the outcome statistics. */
-export async function close(db: Db, member: Member, c: CaseFields, input: { version: number }) {
+export async function close(db: Db, member: CurrentMember, c: CaseFields, input: { version: number }) {
   if (!can(member.role, "case:close")) refuse(403, "Your role cannot close cases.");
   if (c.state !== "concluded") refuse(409, c.state === "closed" ? "This case is closed already." : "Only a concluded case can be closed: conclude it (or sign it off) first.");
   await db.transaction(async (tx) => {
@@ -96,13 +97,13 @@ export async function close(db: Db, member: Member, c: CaseFields, input: { vers
 
 export type OpenCaseInput = {
   vehicleId?: string;
-  newVehicle?: { ownerName: string; ownerPhone?: string; registration: string; vin?: string; make: string; model: string; year: number; fuelType: "petrol" | "diesel" | "hybrid" | "electric" | "lpg"; drivetrain: "fwd" | "rwd" | "awd" };
+  newVehicle?: { ownerName: string; ownerPhone?: string; registration: string; vin?: string; make: string; model: string; year: number; fuelType: FuelType; drivetrain: Drivetrain };
   mileageKm: number;
   complaint: string;
 };
 
 /** A new case: for a known vehicle, or with its owner and vehicle created in the same transaction. */
-export async function openCase(db: Db, member: Member, input: OpenCaseInput) {
+export async function openCase(db: Db, member: CurrentMember, input: OpenCaseInput) {
   if (!can(member.role, "case:open")) refuse(403, "Your role cannot open cases.");
   return db.transaction(async (tx) => {
     let vehicleId = input.vehicleId;

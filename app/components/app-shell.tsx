@@ -1,16 +1,16 @@
 import { useEffect, useRef } from "react";
-import { Form, NavLink, useLocation } from "react-router";
-import type { Permission } from "~/auth/permissions";
+import { Form, href, NavLink, useLocation } from "react-router";
+import type { Permission } from "~/domain/permissions";
 import { BrandMark } from "./brand";
 import { GlobalQuickFind } from "./global-quick-find";
 
 type Area = { to: string; label: string; needs: Permission | null };
 // The areas of the workbench; an area a role cannot use is not shown at all.
 const AREAS: Area[] = [
-  { to: "/board", label: "Board", needs: "case:read" },
-  { to: "/cases", label: "Cases", needs: "case:read" },
-  { to: "/kb", label: "Knowledge base", needs: "kb:read" },
-  { to: "/settings", label: "Settings", needs: null },
+  { to: href("/board"), label: "Board", needs: "case:read" },
+  { to: href("/cases"), label: "Cases", needs: "case:read" },
+  { to: href("/kb"), label: "Knowledge base", needs: "kb:read" },
+  { to: href("/settings"), label: "Settings", needs: null },
 ];
 
 const initials = (name: string) =>
@@ -71,7 +71,7 @@ export function AppShell({ member, permissions, children }: { member: { name: st
               <div className="absolute right-0 z-30 mt-1 w-64 rounded-card border border-rule bg-card p-3 shadow-xl">
                 <p className="leading-tight font-semibold">{member.name}</p>
                 <p className="text-sm text-graphite-600">{member.role} · {member.workshopName}</p>
-                <Form method="post" action="/sign-out" className="mt-2">
+                <Form method="post" action={href("/sign-out")} className="mt-2">
                   <button type="submit" className="min-h-tap w-full rounded-lg border border-rule px-3 font-medium hover:bg-paper">Sign out</button>
                 </Form>
               </div>

@@ -1,13 +1,13 @@
-import { Link } from "react-router";
-import type { CaseRow } from "~/cases/list.server";
-import { formatDate, STATE_LABEL } from "./format";
+import { href, Link } from "react-router";
+import type { CaseListItem } from "~/cases/list.server";
+import { formatDate, STATE_LABEL } from "~/domain/format";
 
-export function CaseCard({ c }: { c: Pick<CaseRow, "id" | "number" | "state" | "complaint" | "registration" | "vehicle" | "assignedName" | "openedAt" | "needsSenior" | "conclusion"> & { question?: CaseRow["question"] } }) {
+export function CaseCard({ c }: { c: Pick<CaseListItem, "id" | "number" | "state" | "complaint" | "registration" | "vehicle" | "assignedName" | "openedAt" | "needsSenior" | "conclusion"> & { question?: CaseListItem["question"] } }) {
   return (
     <article className="rounded-card border border-rule bg-card p-4" aria-labelledby={`case-${c.id}`}>
       <div className="flex items-baseline justify-between gap-3">
         <h3 id={`case-${c.id}`} className="font-semibold">
-          <Link to={`/cases/${c.id}`} className="hover:underline">
+          <Link to={href("/cases/:caseId", { caseId: c.id })} className="hover:underline">
             <span className="tabular">#{c.number}</span> · {c.registration}
           </Link>
         </h3>

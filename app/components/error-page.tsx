@@ -1,4 +1,4 @@
-import { isRouteErrorResponse, Link } from "react-router";
+import { href, isRouteErrorResponse, Link } from "react-router";
 
 const COPY: Record<number, { title: string; body: string }> = {
   400: { title: "That request did not make sense", body: "Something in it was missing or malformed. Go back and check what you entered." },
@@ -17,7 +17,7 @@ export function ErrorPage({ status, message }: { status: number; message?: strin
       <p className="text-graphite-700">{message ?? copy.body}</p>
       <div className="flex flex-wrap gap-3 pt-2">
         <Link
-          to="/"
+          to={href("/")}
           className="inline-flex min-h-tap items-center rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700"
         >
           Back to the start

@@ -1,4 +1,4 @@
-import { useMatches, useNavigate } from "react-router";
+import { href, useMatches, useNavigate } from "react-router";
 import type { Entry } from "~/quick-find";
 import { QuickFind } from "./quick-find/quick-find";
 
@@ -12,7 +12,7 @@ export async function loadAllEntries(): Promise<Entry[]> {
 export function entryHref(entry: Entry): string {
   switch (entry.kind) {
     case "case":
-      return `/cases/${entry.id}`;
+      return href("/cases/:caseId", { caseId: entry.id });
     case "vehicle":
       return `/cases?q=${encodeURIComponent(entry.title.split(" · ")[0])}`;
     default:

@@ -1,13 +1,8 @@
-import type { Priority } from "../../seeds/kb/types";
+import { PRIORITY_COPY, type Priority } from "~/domain/knowledge";
 
 // ISO 3864 in spirit: prohibition circle with a bar, warning triangle, mandatory-style filled
 // circle, safe-condition square. The shape carries the meaning for anyone who cannot tell the colours apart.
-export const PRIORITY_COPY: Record<Priority, { label: string; description: string }> = {
-  stop: { label: "Stop", description: "Unsafe to drive. Do not use the car until this is fixed." },
-  soon: { label: "Soon", description: "Needs fixing soon; book it in within weeks, not months." },
-  watch: { label: "Watch", description: "Fine for now. We will look again at the next visit." },
-  sound: { label: "Sound", description: "Checked and in good order." },
-};
+export { PRIORITY_COPY };
 
 /** The warning triangle: the "Soon" priority, and the mark beside a check's cautions. */
 export function WarningTriangle({ className = "h-6 w-6" }: { className?: string }) {

@@ -3,6 +3,8 @@ import pg from "pg";
 import * as schema from "./schema";
 
 export type Db = NodePgDatabase<typeof schema>;
+/** The handle a transaction callback gets: everything a change needs, inside one transaction. */
+export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 /** One pool per process; a backend killed under us logs and reconnects instead of crashing. */
 export function createDb(url: string, options: { max?: number; onQuery?: (sql: string) => void } = {}): { db: Db; pool: pg.Pool } {

@@ -1,5 +1,5 @@
 import type pg from "pg";
-import { env } from "~/env.server";
+import { env } from "~/config/env.server";
 import { createDb, type Db } from "./client.server";
 
 // The server process builds its pool once, on the first request, and hands it to loaders

@@ -10,25 +10,18 @@ const idOf = (row: Identified): string => {
   return id;
 };
 
-export const SYSTEM_LABEL: Record<string, string> = {
-  brakes: "Brakes",
-  suspension_steering: "Suspension and steering",
-  wheels_tyres: "Wheels and tyres",
-  driveline: "Driveline",
-  engine_fuel_emissions: "Engine, fuelling and emissions",
-  cooling: "Cooling",
-  electrical: "Electrical",
-  exhaust: "Exhaust",
-};
-const systemLabel = (s: string | undefined) => (s ? (SYSTEM_LABEL[s] ?? s.replace(/_/g, " ")) : undefined);
+import { SYSTEM_LABEL } from "~/domain/knowledge";
 
-export type SymptomRow = Identified & { name: string; synonyms?: readonly string[]; conditions?: readonly string[]; system?: string };
-export type CauseRow = Identified & { name: string; system?: string; level?: string; parentName?: string };
-export type CheckRow = Identified & { name: string; tools?: readonly string[]; minutes?: number };
-export type VehicleRow = { id: string; registration: string; vin?: string | null; make?: string; model?: string; year?: number; ownerName?: string };
-export type CaseRow = { id: string; number: number; registration?: string; vehicle?: string; complaint?: string; ownerName?: string };
+export { SYSTEM_LABEL };
+const systemLabel = (s: string | undefined) => (s ? ((SYSTEM_LABEL as Record<string, string>)[s] ?? s.replace(/_/g, " ")) : undefined);
 
-export function symptomEntry(s: SymptomRow): Entry {
+export type SymptomInput = Identified & { name: string; synonyms?: readonly string[]; conditions?: readonly string[]; system?: string };
+export type CauseInput = Identified & { name: string; system?: string; level?: string; parentName?: string };
+export type CheckInput = Identified & { name: string; tools?: readonly string[]; minutes?: number };
+export type VehicleInput = { id: string; registration: string; vin?: string | null; make?: string; model?: string; year?: number; ownerName?: string };
+export type CaseInput = { id: string; number: number; registration?: string; vehicle?: string; complaint?: string; ownerName?: string };
+
+export function symptomEntry(s: SymptomInput): Entry {
   const conditions = s.conditions ?? [];
   return {
     kind: "symptom",
@@ -42,17 +35,17 @@ export function symptomEntry(s: SymptomRow): Entry {
 
 const LEVEL_LABEL: Record<string, string> = { system: "System", component: "Component", failure_mode: "Failure mode" };
 
-export function causeEntry(c: CauseRow): Entry {
+export function causeEntry(c: CauseInput): Entry {
   const where = [c.level ? LEVEL_LABEL[c.level] : undefined, c.parentName, systemLabel(c.system)].filter(Boolean);
   return { kind: "cause", id: idOf(c), title: c.name, subtitle: where.join(" · ") || undefined, keywords: c.parentName ? [c.parentName] : [] };
 }
 
-export function checkEntry(c: CheckRow): Entry {
+export function checkEntry(c: CheckInput): Entry {
   const minutes = c.minutes !== undefined ? `${c.minutes} min` : undefined;
   return { kind: "check", id: idOf(c), title: c.name, subtitle: minutes, keywords: [...(c.tools ?? [])] };
 }
 
-export function vehicleEntry(v: VehicleRow): Entry {
+export function vehicleEntry(v: VehicleInput): Entry {
   const name = [v.make, v.model, v.year].filter(Boolean).join(" ");
   return {
     kind: "vehicle",
@@ -63,7 +56,7 @@ export function vehicleEntry(v: VehicleRow): Entry {
   };
 }
 
-export function caseEntry(c: CaseRow): Entry {
+export function caseEntry(c: CaseInput): Entry {
   const head = [`#${c.number}`, c.registration, c.vehicle].filter(Boolean).join(" · ");
   return {
     kind: "case",
@@ -74,14 +67,14 @@ export function caseEntry(c: CaseRow): Entry {
   };
 }
 
-export type KnowledgeBaseRows = {
-  symptoms: readonly SymptomRow[];
-  causes: readonly (CauseRow & { parentKey?: string | null; parentId?: string | null })[];
-  checks: readonly CheckRow[];
+export type KnowledgeBaseInputs = {
+  symptoms: readonly SymptomInput[];
+  causes: readonly (CauseInput & { parentKey?: string | null; parentId?: string | null })[];
+  checks: readonly CheckInput[];
 };
 
 /** Every symptom, cause and check; a cause's parent name is filled in from the same rows. */
-export function entriesFromKnowledgeBase(kb: KnowledgeBaseRows): Entry[] {
+export function entriesFromKnowledgeBase(kb: KnowledgeBaseInputs): Entry[] {
   const nameOf = new Map<string, string>();
   for (const c of kb.causes) {
     if (c.id) nameOf.set(c.id, c.name);

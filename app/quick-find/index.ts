@@ -9,12 +9,12 @@ export {
   symptomEntry,
   SYSTEM_LABEL,
   vehicleEntry,
-  type CaseRow,
-  type CauseRow,
-  type CheckRow,
-  type KnowledgeBaseRows,
-  type SymptomRow,
-  type VehicleRow,
+  type CaseInput,
+  type CauseInput,
+  type CheckInput,
+  type KnowledgeBaseInputs,
+  type SymptomInput,
+  type VehicleInput,
 } from "./entries";
 export { normaliseText } from "./normalise";
 export { parseQuery } from "./query";

@@ -2,9 +2,11 @@
 // at its boundary. The core re-checks ranges and cross-references itself (fast, typed errors),
 // so a Model built in code is as safe as one parsed here.
 import { z } from "zod";
+import { SKILLS } from "~/domain/people";
 import { ReasoningError } from "./errors";
 
-export const SKILL_LEVELS = ["apprentice", "technician", "senior"] as const;
+/** The domain's skill levels, lowest first (app/domain/people.ts). */
+export const SKILL_LEVELS = SKILLS;
 export const SkillSchema = z.enum(SKILL_LEVELS);
 export type Skill = z.infer<typeof SkillSchema>;
 

@@ -1,7 +1,7 @@
-import { Form, redirect } from "react-router";
+import { Form, href, redirect } from "react-router";
 import { getAccount } from "~/auth/guards.server";
-import { ROLE_HOME } from "~/auth/permissions";
-import { dbContext } from "~/context";
+import { ROLE_HOME } from "~/domain/permissions";
+import { dbContext } from "~/http/context";
 import type { Route } from "./+types/landing";
 import { Wordmark } from "~/components/brand";
 import { PriorityMark } from "~/components/priority";
@@ -33,7 +33,7 @@ export default function Landing() {
       <header className="mx-auto flex max-w-5xl items-center justify-between px-5 py-5">
         <Wordmark />
         {/* Straight to the provider: the demo's sign-in is two clicks, this one and the person. */}
-        <Form method="post" action="/auth/github">
+        <Form method="post" action={href("/auth/github")}>
           <button
             type="submit"
             className="inline-flex min-h-tap items-center rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700"

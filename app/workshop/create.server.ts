@@ -1,9 +1,8 @@
-import { audit } from "~/audit.server";
+import { audit } from "~/audit/write.server";
 import type { Db } from "~/db/client.server";
 import { members, workshops } from "~/db/schema";
-import { seedKnowledgeBase } from "../../seeds/knowledge";
-import { starterKnowledgeBase } from "../../seeds/kb";
-import { countryDefaults } from "./countries";
+import { countryDefaults } from "~/domain/countries";
+import { copyKnowledgeBase, loadTemplate, STARTER_TEMPLATE } from "~/kb/copy.server";
 
 export type NewWorkshopInput = { name: string; country: string; labourRatePerHour: number };
 
@@ -40,7 +39,7 @@ export async function createWorkshop(db: Db, userId: string, input: NewWorkshopI
       })
       .returning({ id: workshops.id, slug: workshops.slug });
     await tx.insert(members).values({ workshopId: w.id, userId, role: "admin", skill: "technician" });
-    await seedKnowledgeBase(tx, w, starterKnowledgeBase);
+    await copyKnowledgeBase(tx, w.id, await loadTemplate(tx, STARTER_TEMPLATE));
     await audit(tx, { workshopId: w.id, actorUserId: userId, action: "workshop.create", entity: "workshop", entityId: w.id, after: { ...input, slug } });
     return w;
   });

@@ -1,5 +1,5 @@
 import { eq } from "drizzle-orm";
-import { audit } from "~/audit.server";
+import { audit } from "~/audit/write.server";
 import type { Db } from "~/db/client.server";
 import { workshops } from "~/db/schema";
 

@@ -2,8 +2,7 @@
 // without an invitation. None of them is a real person; the logins and ids are made up and
 // exist only in our fake sign-in provider.
 
-export const ROLES = ["apprentice", "technician", "senior", "advisor", "admin"] as const;
-export type Role = (typeof ROLES)[number];
+import type { Role, Skill } from "../../app/domain/people";
 
 export type DemoPerson = {
   githubId: number; // the fake provider's numeric user id
@@ -12,7 +11,7 @@ export type DemoPerson = {
   email: string;
   workshop: "bramblegate" | "saltmarsh" | null; // null: not a member anywhere yet
   role: Role | null;
-  skill?: "apprentice" | "technician" | "senior";
+  skill?: Skill;
 };
 
 export const DEMO_WORKSHOPS = {

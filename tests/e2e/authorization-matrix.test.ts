@@ -1,13 +1,14 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { inject } from "vitest";
-import { can, type Permission } from "~/auth/permissions";
-import { type Access, ROUTE_ACCESS, type RouteAccess } from "~/auth/route-access";
+import { can, type Permission } from "~/domain/permissions";
+import { type RouteAccessLevel, ROUTE_ACCESS, type RouteAccess } from "~/auth/route-access";
 import { createSession } from "~/auth/session.server";
 import { createDb } from "~/db/client.server";
 import { members, users, workshops } from "~/db/schema";
 import routes from "~/routes";
-import { DEMO_PEOPLE, type Role } from "../../seeds/demo/people";
+import type { Role } from "~/domain/people";
+import { DEMO_PEOPLE } from "../../seeds/demo/people";
 import { seedId } from "../../seeds/ids";
 
 // Every route × every kind of caller, against the running production server. Expected outcomes
@@ -40,7 +41,7 @@ afterAll(() => pool.end());
 
 type Want = "allowed" | "sign-in" | "welcome" | "forbidden" | "has-workshop" | "not-found";
 
-function expected(access: Access, actor: Actor, rule: RouteAccess): Want {
+function expected(access: RouteAccessLevel, actor: Actor, rule: RouteAccess): Want {
   if (access === "public") return "allowed";
   if (actor.kind === "anonymous") return "sign-in";
   // Another workshop's record does not exist for this member, whatever their role.
@@ -75,7 +76,7 @@ describe("authorization matrix", () => {
   const base = inject("baseUrl");
   for (const [file, rule] of Object.entries(ROUTE_ACCESS)) {
     if (file === "routes/not-found.tsx" || file === "routes/api/not-found.ts") continue;
-    const methods: ["GET" | "POST", string | undefined, Access][] = [];
+    const methods: ["GET" | "POST", string | undefined, RouteAccessLevel][] = [];
     if (rule.GET) methods.push(["GET", undefined, rule.GET]);
     if (typeof rule.POST === "string") methods.push(["POST", undefined, rule.POST]);
     else if (rule.POST) for (const [intent, a] of Object.entries(rule.POST)) methods.push(["POST", intent, a]);

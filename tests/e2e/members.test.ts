@@ -30,7 +30,9 @@ describe("an admin manages the workshop's members", () => {
 
     await page.getByLabel("E-mail or GitHub login").fill("not an address@");
     await page.getByRole("button", { name: "Send invitation" }).click();
-    await page.getByRole("alert").filter({ hasText: "does not look right" }).waitFor();
+    // The message sits at the field it concerns, which names it.
+    await page.getByText("That e-mail address does not look right").waitFor();
+    await expect(page.getByLabel("E-mail or GitHub login").getAttribute("aria-invalid")).resolves.toBe("true");
 
     await page.getByLabel("E-mail or GitHub login").fill("new.tech@mail.example");
     await page.getByLabel("Role", { exact: true }).selectOption("technician");

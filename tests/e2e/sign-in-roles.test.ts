@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { ROLE_HOME } from "~/auth/permissions";
+import { ROLE_HOME } from "~/domain/permissions";
 import { DEMO_PEOPLE } from "../../seeds/demo/people";
 import { baseUrl, signInAs, signOut, useBrowser } from "./browser";
 

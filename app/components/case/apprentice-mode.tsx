@@ -1,9 +1,12 @@
 import { Form } from "react-router";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 import type { UnitSystem } from "~/measure";
+import type { FormErrors } from "~/http/forms";
+import { describedBy, FieldError } from "../ui/form-errors";
 import { CheckPlan, type RecordResult } from "./check-plan";
 
-type Props = { plan: Diagnosis["plan"]; currency: string; units: UnitSystem; record: RecordResult; busy: boolean; error: string | null; errorFor: (checkId: string) => string | null; needsSenior: boolean };
+type Props = {
+  errors?: FormErrors; plan: Diagnosis["plan"]; currency: string; units: UnitSystem; record: RecordResult; busy: boolean; error: string | null; errorFor: (checkId: string) => string | null; needsSenior: boolean };
 
 /**
  * The apprentice sees one check at a time — the best next one within their level — with its
@@ -23,7 +26,8 @@ export function ApprenticeMode(props: Props) {
             <input type="hidden" name="intent" value="ask-senior" />
             <label className="flex w-full max-w-md flex-col text-sm font-medium">
               What do you need help with?
-              <input name="note" className="mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base" />
+              <input name="question" className="mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base" {...describedBy(props.errors, "question")} />
+              <FieldError errors={props.errors} name="question" />
             </label>
             <button type="submit" className="min-h-tap rounded-lg border-2 border-uv-600 px-4 font-semibold text-uv-700">Ask a senior</button>
           </Form>

@@ -1,6 +1,6 @@
 import { describeAudit } from "~/audit/describe";
 import { Fold } from "../fold";
-import { formatDate } from "../format";
+import { formatDate } from "~/domain/format";
 
 /** The case's own trail, newest first, in the same words as the workshop's audit log. */
 export function CaseHistory({ entries }: { entries: { id: number; at: string | Date; action: string; before: unknown; after: unknown; actor: string | null }[] }) {

@@ -1,7 +1,7 @@
 import { useEffect, useId, useRef, useState } from "react";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 import { describeRule, type UnitSystem } from "~/measure";
-import { formatMoney, formatPercent } from "../format";
+import { formatMoney, formatPercent } from "~/domain/format";
 import { Fold } from "../fold";
 import { Cautions } from "./cautions";
 

@@ -1,6 +1,8 @@
 import { Form } from "react-router";
 import type { ShownCause } from "~/cases/present-diagnosis";
-import { formatPercent } from "../format";
+import { formatPercent } from "~/domain/format";
+import type { FormErrors } from "~/http/forms";
+import { describedBy, FieldError } from "../ui/form-errors";
 
 type Props = {
   state: string;
@@ -12,6 +14,7 @@ type Props = {
   mayReopen: boolean;
   mayClose: boolean;
   isApprentice: boolean;
+  errors?: FormErrors;
 };
 
 const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base";
@@ -32,7 +35,7 @@ export function ConfirmedCause({ state, cause, notes }: { state: string; cause: 
 }
 
 /** Concluding; a senior's sign-off of an apprentice's conclusion; reopening and closing. */
-export function ConclusionPanel({ state, version, causes, conclusion, mayConclude, maySignOff, mayReopen, mayClose, isApprentice }: Props) {
+export function ConclusionPanel({ state, version, causes, conclusion, mayConclude, maySignOff, mayReopen, mayClose, isApprentice, errors }: Props) {
   const open = state === "open";
   const anything = (open && mayConclude) || (state === "awaiting_signoff" && maySignOff) || (!open && mayReopen) || (state === "concluded" && mayClose);
   if (!anything && open) return null;
@@ -52,15 +55,17 @@ export function ConclusionPanel({ state, version, causes, conclusion, mayConclud
           <input type="hidden" name="version" value={version} />
           <label className="font-medium">
             Confirmed cause
-            <select name="causeId" className={field} defaultValue={causes[0]?.id}>
+            <select name="causeId" className={field} defaultValue={causes[0]?.id} {...describedBy(errors, "causeId")}>
               {causes.slice(0, 15).map((c) => (
                 <option key={c.id} value={c.id}>{c.name} ({formatPercent(c.probability)})</option>
               ))}
             </select>
+            <FieldError errors={errors} name="causeId" />
           </label>
           <label className="font-medium">
             What you found and the repair
-            <textarea name="notes" required rows={3} className={`${field} py-2`} />
+            <textarea name="notes" required rows={3} className={`${field} py-2`} {...describedBy(errors, "notes")} />
+            <FieldError errors={errors} name="notes" />
           </label>
           <button type="submit" className="min-h-tap rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700">
             {isApprentice ? "Send for a senior's sign-off" : "Conclude the case"}
@@ -72,7 +77,8 @@ export function ConclusionPanel({ state, version, causes, conclusion, mayConclud
           <input type="hidden" name="version" value={version} />
           <label className="font-medium">
             Note for the apprentice
-            <textarea name="note" rows={2} className={`${field} py-2`} />
+            <textarea name="note" rows={2} className={`${field} py-2`} {...describedBy(errors, "note")} />
+            <FieldError errors={errors} name="note" />
           </label>
           <div className="flex flex-wrap gap-3">
             <button type="submit" name="intent" value="signoff" className="min-h-tap rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700">Sign off</button>
@@ -88,14 +94,15 @@ export function ConclusionPanel({ state, version, causes, conclusion, mayConclud
         </Form>
       ) : null}
       {!open && mayReopen ? (
-        <details className="mt-3">
+        <details className="mt-3" open={Boolean(errors?.reason)}>
           <summary className="inline-flex min-h-tap cursor-pointer items-center font-medium">Reopen the case…</summary>
           <Form method="post" className="mt-2 grid gap-3">
             <input type="hidden" name="intent" value="reopen" />
             <input type="hidden" name="version" value={version} />
             <label className="font-medium">
               Why it is reopened
-              <textarea name="reason" required rows={2} className={`${field} py-2`} />
+              <textarea name="reason" required rows={2} className={`${field} py-2`} {...describedBy(errors, "reason")} />
+              <FieldError errors={errors} name="reason" />
             </label>
             <button type="submit" className="min-h-tap justify-self-start rounded-lg border-2 border-uv-600 px-5 font-semibold text-uv-700">Reopen</button>
           </Form>

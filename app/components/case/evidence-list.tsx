@@ -1,6 +1,6 @@
-import type { CaseView } from "./case-queries";
+import type { CaseView } from "~/cases/case-queries";
 import { Fold } from "../fold";
-import { formatDate } from "../format";
+import { formatDate } from "~/domain/format";
 
 type Finding = CaseView["case"]["findings"][number];
 

@@ -1,7 +1,7 @@
 import { useEffect, useRef } from "react";
 import { type ShownCause, WHY_CAUSES } from "~/cases/present-diagnosis";
 import { Fold } from "../fold";
-import { formatPercent } from "../format";
+import { formatPercent } from "~/domain/format";
 import { PriorityMark } from "../priority";
 
 // The causes shown with their "why" are exactly those the server sends it for.

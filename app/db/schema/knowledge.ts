@@ -13,7 +13,8 @@ import {
   unique,
   uuid,
 } from "drizzle-orm/pg-core";
-import type { Applicability } from "../../../seeds/kb/types";
+import type { Applicability } from "../../domain/knowledge";
+import type { KnowledgeDocument } from "../../kb/document";
 import { causeLevelEnum, priorityEnum, resultKindEnum, skillEnum, symptomKindEnum, systemEnum } from "./enums";
 import { createdAt, id, updatedAt } from "./helpers";
 import { workshops } from "./workshops";
@@ -137,6 +138,14 @@ export const checkLinks = pgTable(
     probability("check_links_p_range", t.pFail),
   ],
 );
+
+// Knowledge bases a new workshop can start from, as documents of our own format (app/kb/document.ts).
+// Not a workshop's row: the starter base is written here by the seed and copied at workshop creation.
+export const kbTemplates = pgTable("kb_templates", {
+  key: text("key").primaryKey(), // "starter"
+  document: jsonb("document").$type<KnowledgeDocument>().notNull(),
+  updatedAt: updatedAt(),
+});
 
 export type Symptom = typeof symptoms.$inferSelect;
 export type Cause = typeof causes.$inferSelect;

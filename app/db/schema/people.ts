@@ -88,5 +88,5 @@ export const signInAttempts = pgTable(
 );
 
 export type User = typeof users.$inferSelect;
-export type Member = typeof members.$inferSelect;
+export type MemberRow = typeof members.$inferSelect;
 export type Session = typeof sessions.$inferSelect;

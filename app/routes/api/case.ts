@@ -1,8 +1,8 @@
-import { methodNotAllowed } from "~/http.server";
-import { api } from "~/api.server";
+import { methodNotAllowed } from "~/http/errors.server";
+import { api } from "~/http/api.server";
 import { caseFields, loadCase } from "~/cases/case.server";
 import { diagnoseCase } from "~/cases/diagnosis.server";
-import { dbContext } from "~/context";
+import { dbContext } from "~/http/context";
 import type { Route } from "./+types/case";
 
 // GET /api/cases/:caseId — the case with its evidence, likely causes and check plan.

@@ -1,8 +1,8 @@
-import { methodNotAllowed } from "~/http.server";
-import { api } from "~/api.server";
+import { methodNotAllowed } from "~/http/errors.server";
+import { api } from "~/http/api.server";
 import { loadCase } from "~/cases/case.server";
 import { diagnoseCase } from "~/cases/diagnosis.server";
-import { dbContext } from "~/context";
+import { dbContext } from "~/http/context";
 import type { Route } from "./+types/diagnosis";
 
 // GET /api/cases/:caseId/diagnosis — only the ranking and plan, for the live re-rank.

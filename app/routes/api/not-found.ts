@@ -1,4 +1,4 @@
-import { httpError } from "~/http.server";
+import { httpError } from "~/http/errors.server";
 
 // Unknown addresses under /api/ answer in the API's own JSON shape, not with the HTML page.
 const notFound = () => httpError(404, "There is no such API address. See docs/api.md.");

@@ -1,10 +1,10 @@
 import { z } from "zod";
-import { api } from "~/api.server";
-import { kbVersion } from "~/cases/knowledge.server";
-import { dbContext } from "~/context";
-import { methodNotAllowed } from "~/http.server";
+import { api } from "~/http/api.server";
+import { kbVersion } from "~/kb/knowledge.server";
+import { dbContext } from "~/http/context";
+import { methodNotAllowed } from "~/http/errors.server";
 import { ENTRY_KINDS } from "~/quick-find";
-import { fleetEntries, knowledgeEntries } from "~/search/quick-find.server";
+import { fleetEntries, knowledgeEntries } from "~/kb/quick-find.server";
 import type { Route } from "./+types/quick-find";
 
 const Query = z.object({

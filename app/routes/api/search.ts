@@ -1,10 +1,10 @@
-import { methodNotAllowed } from "~/http.server";
+import { methodNotAllowed } from "~/http/errors.server";
 import { z } from "zod";
-import { api } from "~/api.server";
-import { kbVersion } from "~/cases/knowledge.server";
-import { dbContext } from "~/context";
+import { api } from "~/http/api.server";
+import { kbVersion } from "~/kb/knowledge.server";
+import { dbContext } from "~/http/context";
 import { ENTRY_KINDS, search } from "~/quick-find";
-import { quickFindIndexes } from "~/search/quick-find.server";
+import { quickFindIndexes } from "~/kb/quick-find.server";
 import type { Route } from "./+types/search";
 
 const Query = z.object({

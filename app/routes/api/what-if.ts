@@ -1,7 +1,7 @@
-import { methodNotAllowed, refuse } from "~/http.server";
+import { methodNotAllowed, refuse } from "~/http/errors.server";
 import { z } from "zod";
-import { api, jsonBody } from "~/api.server";
-import { dbContext } from "~/context";
+import { api, jsonBody } from "~/http/api.server";
+import { dbContext } from "~/http/context";
 import { compileModel, EvidenceSchema, ModelSchema, planChecks, rankCauses, SkillSchema, whatIf } from "~/reasoning";
 import type { Route } from "./+types/what-if";
 

@@ -1,9 +1,9 @@
 import { Outlet } from "react-router";
 import { memberContext, requireMember } from "~/auth/guards.server";
-import { ROLE_PERMISSIONS } from "~/auth/permissions";
+import { ROLE_PERMISSIONS } from "~/domain/permissions";
 import { AppShell } from "~/components/app-shell";
 import { RouteErrorPage } from "~/components/error-page";
-import { dbContext } from "~/context";
+import { dbContext } from "~/http/context";
 import type { Route } from "./+types/layout";
 
 // One guard for the whole signed-in section: every route below gets the member from the context.

@@ -1,6 +1,6 @@
 import { data } from "react-router";
 import { finishSignIn, SignInRefused } from "~/auth/sign-in.server";
-import { clientAddressContext, dbContext } from "~/context";
+import { clientAddressContext, dbContext } from "~/http/context";
 import { SignInPanel } from "./sign-in-panel";
 import type { Route } from "./+types/callback";
 

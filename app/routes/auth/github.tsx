@@ -1,4 +1,4 @@
-import { clientAddressContext, dbContext } from "~/context";
+import { clientAddressContext, dbContext } from "~/http/context";
 import { startSignIn } from "~/auth/sign-in.server";
 import type { Route } from "./+types/github";
 

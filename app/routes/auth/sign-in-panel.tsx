@@ -1,4 +1,4 @@
-import { Form } from "react-router";
+import { Form, href } from "react-router";
 import { Wordmark } from "~/components/brand";
 
 export function SignInPanel({ message, next }: { message?: string; next?: string }) {
@@ -11,7 +11,7 @@ export function SignInPanel({ message, next }: { message?: string; next?: string
           {message}
         </p>
       ) : null}
-      <Form method="post" action="/auth/github">
+      <Form method="post" action={href("/auth/github")}>
         {next ? <input type="hidden" name="next" value={next} /> : null}
         <button
           type="submit"

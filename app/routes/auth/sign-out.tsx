@@ -1,10 +1,10 @@
-import { redirect } from "react-router";
+import { href, redirect } from "react-router";
 import { z } from "zod";
-import { audit } from "~/audit.server";
+import { audit } from "~/audit/write.server";
 import { getSession } from "~/auth/guards.server";
 import { revokeAllSessions, revokeSession, sessionCookie } from "~/auth/session.server";
-import { dbContext } from "~/context";
-import { env, isSecure } from "~/env.server";
+import { dbContext } from "~/http/context";
+import { env, isSecure } from "~/config/env.server";
 import type { Route } from "./+types/sign-out";
 
 const SignOutSchema = z.object({ scope: z.enum(["this", "everywhere"]).default("this") });
@@ -21,7 +21,7 @@ export async function action({ request, context }: Route.ActionArgs) {
     else await revokeSession(db, token);
     await audit(db, { workshopId: account.workshopId, actorUserId: account.userId, action: `auth.sign_out.${parsed.data.scope}`, entity: "user", entityId: account.userId });
   }
-  return redirect("/", { headers: { "Set-Cookie": sessionCookie(null, secure) } });
+  return redirect(href("/"), { headers: { "Set-Cookie": sessionCookie(null, secure) } });
 }
 
 export function loader() {

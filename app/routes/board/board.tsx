@@ -1,7 +1,7 @@
 import { memberContext } from "~/auth/guards.server";
 import { listCases } from "~/cases/list.server";
 import { CaseCard } from "~/components/case-card";
-import { dbContext } from "~/context";
+import { dbContext } from "~/http/context";
 import type { Route } from "./+types/board";
 
 export async function loader({ context }: Route.LoaderArgs) {

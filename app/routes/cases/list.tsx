@@ -1,12 +1,12 @@
-import { Form, Link, useSearchParams } from "react-router";
-import { can } from "~/auth/permissions";
+import { Form, href, Link, useSearchParams } from "react-router";
+import { can } from "~/domain/permissions";
 import { z } from "zod";
 import { memberContext } from "~/auth/guards.server";
 import { listCases } from "~/cases/list.server";
-import { CASE_STATES } from "~/cases/states";
+import { CASE_STATES } from "~/domain/cases";
 import { CaseCard } from "~/components/case-card";
-import { STATE_LABEL } from "~/components/format";
-import { dbContext } from "~/context";
+import { STATE_LABEL } from "~/domain/format";
+import { dbContext } from "~/http/context";
 import type { Route } from "./+types/list";
 
 const FilterSchema = z.object({
@@ -33,7 +33,7 @@ export default function CaseList({ loaderData }: Route.ComponentProps) {
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h1 className="text-2xl font-semibold">Cases</h1>
         {loaderData.canOpen ? (
-          <Link to="/cases/new" className="inline-flex min-h-tap items-center rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700">Open a case</Link>
+          <Link to={href("/cases/new")} className="inline-flex min-h-tap items-center rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700">Open a case</Link>
         ) : null}
       </div>
       <Form method="get" className="mt-4 flex flex-wrap items-end gap-3" role="search">

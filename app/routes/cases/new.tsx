@@ -1,12 +1,13 @@
-import { data, Form, redirect } from "react-router";
-import { asc, eq } from "drizzle-orm";
+import { Form, href, redirect } from "react-router";
 import { z } from "zod";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { openCase } from "~/cases/workflow.server";
-import { dbContext } from "~/context";
-import { owners, vehicles } from "~/db/schema";
-import { refusalMessage } from "~/http.server";
+import { dbContext } from "~/http/context";
 import { RouteErrorPage } from "~/components/error-page";
+import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";
+import { invalid, readForm, refusedOnForm } from "~/http/forms.server";
+import { listVehicles } from "~/vehicles/vehicles.server";
+import { DRIVETRAIN_LABEL, DRIVETRAINS, FUEL_LABEL, FUEL_TYPES } from "~/domain/vehicles";
 import { mileageUnit, parseMileage, validateVin } from "~/measure";
 import { getWorkshop } from "~/workshop/settings.server";
 import type { Route } from "./+types/new";
@@ -21,8 +22,8 @@ const Fresh = z.object({
   make: z.string().trim().min(1, "Make is needed"),
   model: z.string().trim().min(1, "Model is needed"),
   year: z.coerce.number().int().min(1950, "Year looks wrong").max(new Date().getFullYear() + 1, "Year looks wrong"),
-  fuelType: z.enum(["petrol", "diesel", "hybrid", "electric", "lpg"]),
-  drivetrain: z.enum(["fwd", "rwd", "awd"]),
+  fuelType: z.enum(FUEL_TYPES),
+  drivetrain: z.enum(DRIVETRAINS),
 });
 const OpenSchema = z.intersection(
   z.discriminatedUnion("mode", [Known, Fresh]),
@@ -33,47 +34,39 @@ const OpenSchema = z.intersection(
   }),
 );
 
-type Errors = Partial<Record<string, string[]>>;
-const fail = (errors: Errors) => data({ errors }, { status: 400 });
+
 
 export async function loader({ context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "case:open");
-  const list = await context
-    .get(dbContext)
-    .select({ id: vehicles.id, registration: vehicles.registration, make: vehicles.make, model: vehicles.model, owner: owners.name })
-    .from(vehicles)
-    .innerJoin(owners, eq(owners.id, vehicles.ownerId))
-    .where(eq(vehicles.workshopId, member.workshopId))
-    .orderBy(asc(vehicles.registration));
-  const units = (await getWorkshop(context.get(dbContext), member.workshopId)).units;
-  return { vehicles: list, units };
+  const db = context.get(dbContext);
+  const [list, workshop] = await Promise.all([listVehicles(db, member.workshopId), getWorkshop(db, member.workshopId)]);
+  return { vehicles: list, units: workshop.units };
 }
 
 export async function action({ request, context }: Route.ActionArgs) {
   const member = requirePermission(context.get(memberContext), "case:open");
   const db = context.get(dbContext);
-  const parsed = OpenSchema.safeParse(Object.fromEntries(await request.formData()));
-  if (!parsed.success) return fail(z.flattenError(parsed.error).fieldErrors as Errors);
-  const input = parsed.data;
+  const form = await readForm(request, OpenSchema);
+  if (!form.ok) return form.answer;
+  const input = form.value;
   const mileage = parseMileage(input.mileage, (await getWorkshop(db, member.workshopId)).units);
-  if (!mileage.ok) return fail({ mileage: [mileage.message] });
+  if (!mileage.ok) return invalid({ mileage: [mileage.message] });
   if (input.mode === "new" && input.vin) {
     const vin = validateVin(input.vin, { requireCheckDigit: false });
-    if (!vin.valid) return fail({ vin: [vin.message] });
+    if (!vin.valid) return invalid({ vin: [vin.message] });
   }
+  let created: { id: string };
   try {
-    const created = await openCase(db, member, {
+    created = await openCase(db, member, {
       vehicleId: input.mode === "known" ? input.vehicleId : undefined,
       newVehicle: input.mode === "new" ? input : undefined,
       mileageKm: mileage.value,
       complaint: input.complaint,
     });
-    throw redirect(`/cases/${created.id}`);
   } catch (error) {
-    const refused = await refusalMessage(error);
-    if (refused) return data({ errors: { form: [refused.message] } as Errors }, { status: refused.status });
-    throw error;
+    return refusedOnForm(error);
   }
+  throw redirect(href("/cases/:caseId", { caseId: created.id }));
 }
 
 export function meta() {
@@ -82,23 +75,16 @@ export function meta() {
 
 const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base";
 
-const FUELS = ["petrol", "diesel", "hybrid", "electric", "lpg"] as const;
-const DRIVES = ["fwd", "rwd", "awd"] as const;
 const NEW_FIELDS = [["ownerName", "Owner's name"], ["ownerPhone", "Owner's phone"], ["registration", "Registration"], ["vin", "VIN (optional)"], ["make", "Make"], ["model", "Model"], ["year", "Year"]] as const;
 
 export default function NewCase({ loaderData, actionData }: Route.ComponentProps) {
-  const errors: Errors = actionData?.errors ?? {};
-  const err = (k: string) =>
-    errors[k] ? (
-      <span id={`${k}-error`} className="block text-sm font-medium text-stop">
-        {errors[k]![0]}
-      </span>
-    ) : null;
-  const described = (k: string) => (errors[k] ? { "aria-invalid": true, "aria-describedby": `${k}-error` } : {});
+  const errors = actionData?.errors;
+  const err = (k: string) => <FieldError errors={errors} name={k} />;
+  const described = (k: string) => describedBy(errors, k);
   return (
     <div className="max-w-2xl">
       <h1 className="text-2xl font-semibold">Open a case</h1>
-      {errors.form ? <p role="alert" className="mt-3 rounded-lg border-2 border-stop bg-card p-3">{errors.form[0]}</p> : null}
+      <FormMessages errors={errors} className="mt-3" />
       <Form method="post" className="mt-4 grid gap-4" noValidate>
         <fieldset className="grid gap-2 rounded-card border border-rule bg-card p-4">
           <legend className="px-1 font-semibold">Vehicle on file</legend>
@@ -114,8 +100,8 @@ export default function NewCase({ loaderData, actionData }: Route.ComponentProps
             {NEW_FIELDS.map(([name, label]) => (
               <label key={name} className="text-sm font-medium">{label}<input name={name} className={field} {...described(name)} />{err(name)}</label>
             ))}
-            <label className="text-sm font-medium">Fuel<select name="fuelType" className={field}>{FUELS.map((f) => <option key={f}>{f}</option>)}</select></label>
-            <label className="text-sm font-medium">Drive<select name="drivetrain" className={field}>{DRIVES.map((f) => <option key={f}>{f}</option>)}</select></label>
+            <label className="text-sm font-medium">Fuel<select name="fuelType" className={field}>{FUEL_TYPES.map((f) => <option key={f} value={f}>{FUEL_LABEL[f]}</option>)}</select></label>
+            <label className="text-sm font-medium">Drive<select name="drivetrain" className={field}>{DRIVETRAINS.map((f) => <option key={f} value={f}>{DRIVETRAIN_LABEL[f]}</option>)}</select></label>
           </div>
         </fieldset>
         <label className="font-medium">

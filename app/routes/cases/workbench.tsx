@@ -1,26 +1,27 @@
 import { useQuery } from "@tanstack/react-query";
-import { data } from "react-router";
 import { useCallback, useEffect, useMemo, useState } from "react";
 import { memberContext, requirePermission } from "~/auth/guards.server";
-import { can } from "~/auth/permissions";
+import { mayConclude, mayWorkOn } from "~/domain/case-access";
+import { can } from "~/domain/permissions";
 import { caseFields, loadCaseForChange, loadCaseWithHistory } from "~/cases/case.server";
 import { CaseHistory } from "~/components/case/case-history";
 import { diagnoseCase } from "~/cases/diagnosis.server";
 import { assertIntentAllowed, runWorkbenchForm, WorkbenchForm } from "~/cases/workbench-actions.server";
 import { ApprenticeMode } from "~/components/case/apprentice-mode";
 import { CaseHeader, SeniorNotes } from "~/components/case/case-header";
-import { caseQuery, type CaseView, type Change, undoOf, useEvidence } from "~/components/case/case-queries";
+import { caseQuery, type CaseView, type Change, undoOf, useEvidence } from "~/cases/case-queries";
 import { CheckPlan, type RecordResult } from "~/components/case/check-plan";
 import { ConclusionPanel, ConfirmedCause } from "~/components/case/conclusion-panel";
 import { UndoNotice } from "~/components/case/undo-notice";
 import { Fold } from "~/components/fold";
+import { FormMessages } from "~/components/ui/form-errors";
 import { EvidenceList } from "~/components/case/evidence-list";
 import { LikelyCauses } from "~/components/case/likely-causes";
 import { CaseQuickFind } from "~/components/case/case-quick-find";
 import { RouteErrorPage } from "~/components/error-page";
-import { fromPayload, toPayload } from "~/components/json-payload";
-import { dbContext } from "~/context";
-import { refusalMessage } from "~/http.server";
+import { fromPayload, toPayload } from "~/http/json-payload";
+import { dbContext } from "~/http/context";
+import { invalid, onForm, zodErrors } from "~/http/forms.server";
 import type { UnitSystem } from "~/measure";
 import { quickFindKey } from "~/quick-find";
 import type { Route } from "./+types/workbench";
@@ -35,8 +36,7 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const { model: _m, evidence: _e, ...diagnosis } = await diagnoseCase(db, member, bundle);
   // The browser keeps one built index per knowledge-base version instead of rebuilding on every revalidation.
   const quickFindCacheKey = quickFindKey(member.workshopId, `${bundle.workshop.kbVersion}-${bundle.id}`, "case");
-  const own = member.role === "apprentice" && bundle.assignedMemberId === member.memberId;
-  const canWork = bundle.state === "open" && (can(member.role, "case:work") || own);
+  const canWork = bundle.state === "open" && mayWorkOn(member, bundle);
   const view: CaseView = { case: caseFields(bundle), diagnosis };
   return {
     // The same shape the browser later fetches from /api/cases/:id, so the live copy starts from it.
@@ -46,7 +46,7 @@ export async function loader({ params, context }: Route.LoaderArgs) {
     me: {
       role: member.role,
       canWork,
-      mayConclude: can(member.role, "case:conclude") || own,
+      mayConclude: mayConclude(member, bundle),
       maySignOff: can(member.role, "case:signoff"),
       mayReopen: can(member.role, "case:reopen"),
       mayClose: can(member.role, "case:close"),
@@ -62,14 +62,8 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const form = Object.fromEntries(await request.formData());
   assertIntentAllowed(member, bundle, form.intent);
   const parsed = WorkbenchForm.safeParse(form);
-  if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "Check the form", notice: null }, { status: 400 });
-  try {
-    return { error: null, notice: await runWorkbenchForm(db, member, bundle, parsed.data) };
-  } catch (error) {
-    const refused = await refusalMessage(error);
-    if (refused && refused.status !== 404) return data({ error: refused.message, notice: null }, { status: refused.status });
-    throw error;
-  }
+  if (!parsed.success) return invalid(zodErrors(parsed.error));
+  return onForm(() => runWorkbenchForm(db, member, bundle, parsed.data));
 }
 
 export function meta({ loaderData }: Route.MetaArgs) {
@@ -132,6 +126,7 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
       mayReopen={me.mayReopen}
       mayClose={me.mayClose}
       isApprentice={me.role === "apprentice"}
+      errors={actionData?.errors}
     />
   );
   return (
@@ -139,16 +134,16 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
       <CaseHeader
         c={c}
         mayEditComplaint={me.mayEditComplaint}
+        errors={actionData?.errors}
         quickFind={me.canWork ? <CaseQuickFind cacheKey={quickFindCacheKey} recent={c.observations.map((o) => o.symptomId)} onAdd={(e, present) => change({ kind: "observe", symptomId: e.id, name: e.title, present })} /> : null}
       />
       <SeniorNotes question={c.question} seniorNote={c.seniorNote} needsSenior={c.needsSenior} />
-      {actionData?.error ? <p role="alert" className="rounded-lg border-2 border-stop bg-card p-3">{actionData.error}</p> : null}
-      {actionData?.notice ? <p role="status" className="rounded-lg border border-sound bg-card p-3">{actionData.notice}</p> : null}
+      <FormMessages errors={actionData?.errors} notice={actionData?.notice} />
       {apprentice ? (
         // Under a car on a phone: the next check, Ask a senior and the evidence come before the statistics.
         <div className="grid gap-4 lg:grid-cols-[1.1fr_1fr]">
           <div className="grid content-start gap-4">
-            <ApprenticeMode plan={d.plan} currency={c.workshop.currency} units={units} record={record} busy={evidence.isPending} error={planError} errorFor={errorFor} needsSenior={c.needsSenior} />
+            <ApprenticeMode plan={d.plan} currency={c.workshop.currency} units={units} record={record} busy={evidence.isPending} error={planError} errorFor={errorFor} needsSenior={c.needsSenior} errors={actionData?.errors} />
             {evidenceList}
           </div>
           <div className="grid content-start gap-4">

@@ -1,8 +1,8 @@
 import { memberContext } from "~/auth/guards.server";
 import { PriorityMark } from "~/components/priority";
-import { dbContext } from "~/context";
+import { dbContext } from "~/http/context";
 import { kbOverview } from "~/kb/overview.server";
-import { SYSTEM_LABEL } from "~/quick-find";
+import { SYSTEM_LABEL } from "~/domain/knowledge";
 import type { Route } from "./+types/overview";
 
 export async function loader({ context }: Route.LoaderArgs) {
@@ -41,7 +41,7 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
           <h2 id="tree" className="text-xl font-semibold">Cause tree</h2>
           {systems.map((sys) => (
             <details key={sys.id} className="mt-3 rounded-card border border-rule bg-card p-3">
-              <summary className="min-h-tap cursor-pointer content-center font-semibold">{SYSTEM_LABEL[sys.system] ?? sys.name}</summary>
+              <summary className="min-h-tap cursor-pointer content-center font-semibold">{SYSTEM_LABEL[sys.system as keyof typeof SYSTEM_LABEL] ?? sys.name}</summary>
               <ul className="mt-2 grid gap-2">
                 {childrenOf(sys.id).map((comp) => (
                   <li key={comp.id}>

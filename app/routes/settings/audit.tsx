@@ -2,9 +2,9 @@ import { Link } from "react-router";
 import { describeAudit } from "~/audit/describe";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { RouteErrorPage } from "~/components/error-page";
-import { formatDate } from "~/components/format";
-import { dbContext } from "~/context";
-import { readAuditLog } from "~/workshop/audit-log.server";
+import { formatDate } from "~/domain/format";
+import { dbContext } from "~/http/context";
+import { readAuditLog } from "~/audit/read.server";
 import type { Route } from "./+types/audit";
 
 export async function loader({ context }: Route.LoaderArgs) {

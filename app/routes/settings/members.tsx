@@ -1,13 +1,11 @@
-import { data, Form, useNavigation } from "react-router";
+import { Form, useNavigation } from "react-router";
 import { z } from "zod";
-import { type Member, memberContext, requirePermission } from "~/auth/guards.server";
-import type { Db } from "~/db/client.server";
-import { refusalMessage, refuse } from "~/http.server";
-import { dbContext } from "~/context";
-import { env } from "~/env.server";
-import { sendMail } from "~/mail.server";
-import { inviteMember, listMembers, listPendingInvitations, revokeInvitation, updateMember } from "~/workshop/members.server";
-import { ROLES } from "../../../seeds/demo/people";
+import { memberContext, requirePermission } from "~/auth/guards.server";
+import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";
+import { ROLE_LABEL, ROLES } from "~/domain/people";
+import { dbContext } from "~/http/context";
+import { onForm, readForm } from "~/http/forms.server";
+import { invite, listMembers, listPendingInvitations, revokeInvitation, updateMember } from "~/workshop/members.server";
 import type { Route } from "./+types/members";
 
 const Role = z.enum(ROLES, { message: "Choose a role from the list" });
@@ -22,8 +20,6 @@ const ActionSchema = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("revoke-invite"), invitationId: z.uuid({ message: "Unknown invitation" }) }),
 ]);
 
-const LOGIN = /^[A-Za-z0-9](?:[A-Za-z0-9-]{0,38})$/;
-
 export async function loader({ context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "member:manage");
   const db = context.get(dbContext);
@@ -34,49 +30,22 @@ export async function loader({ context }: Route.LoaderArgs) {
 export async function action({ request, context }: Route.ActionArgs) {
   const member = requirePermission(context.get(memberContext), "member:manage");
   const db = context.get(dbContext);
-  const parsed = ActionSchema.safeParse(Object.fromEntries(await request.formData()));
-  if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "Check the form", notice: null }, { status: 400 });
-  try {
-    return await perform(db, member, parsed.data);
-  } catch (error) {
-    // Refusals of the server module (last admin, unknown member) are shown on the form, not as an error page.
-    const refused = await refusalMessage(error);
-    if (refused) return data({ error: refused.message, notice: null }, { status: refused.status });
-    throw error;
-  }
-}
-
-async function perform(db: Db, member: Member, input: z.infer<typeof ActionSchema>) {
+  const form = await readForm(request, ActionSchema);
+  if (!form.ok) return form.answer;
+  const input = form.value;
   switch (input.intent) {
-    case "invite": {
-      const isEmail = input.target.includes("@");
-      if (isEmail && !z.email().safeParse(input.target).success) refuse(400, "That e-mail address does not look right");
-      if (!isEmail && !LOGIN.test(input.target)) refuse(400, "A GitHub login has letters, digits and dashes only");
-      await inviteMember(db, member, isEmail ? { email: input.target, role: input.role } : { githubLogin: input.target, role: input.role });
-      const mailed = isEmail
-        ? await sendMail({
-            to: input.target,
-            subject: `You are invited to ${member.workshopName} on Ramplight`,
-            text: `${member.name} invited you to join ${member.workshopName} as ${input.role}.\n\nSign in at ${env().APP_URL}/sign-in with the GitHub account that uses this e-mail address.\n\nThe invitation is valid for 14 days.`,
-          }).catch((error: Error) => {
-            // The invitation stands even when the mail relay is down; say so instead of failing.
-            console.warn("invitation mail not sent:", error.message);
-            return "failed" as const;
-          })
-        : false;
-      if (mailed === "failed") return { error: `Invitation saved, but the e-mail to ${input.target} could not be sent. Tell them to sign in with that address.`, notice: null };
-      return { error: null, notice: mailed ? `Invitation e-mailed to ${input.target}.` : `Invitation saved for ${input.target}: they join as ${input.role} when they next sign in.` };
-    }
+    case "invite":
+      return onForm(() => invite(db, member, input), "target");
     case "role":
-      await updateMember(db, member, input.memberId, { role: input.role });
-      return { error: null, notice: "Role changed." };
+      return onForm(async () => (await updateMember(db, member, input.memberId, { role: input.role }), "Role changed."));
     case "suspend":
     case "reactivate":
-      await updateMember(db, member, input.memberId, { status: input.intent === "suspend" ? "suspended" : "active" });
-      return { error: null, notice: input.intent === "suspend" ? "Member suspended; they can no longer open the workshop." : "Member reactivated." };
+      return onForm(async () => {
+        await updateMember(db, member, input.memberId, { status: input.intent === "suspend" ? "suspended" : "active" });
+        return input.intent === "suspend" ? "Member suspended; they can no longer open the workshop." : "Member reactivated.";
+      });
     case "revoke-invite":
-      await revokeInvitation(db, member, input.invitationId);
-      return { error: null, notice: "Invitation withdrawn." };
+      return onForm(async () => (await revokeInvitation(db, member, input.invitationId), "Invitation withdrawn."));
   }
 }
 
@@ -93,8 +62,7 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
     <div className="grid gap-8">
       <div>
         <h1 className="text-2xl font-semibold">Members</h1>
-        {actionData?.error ? <p role="alert" className="mt-3 rounded-lg border-2 border-stop bg-card p-3">{actionData.error}</p> : null}
-        {actionData?.notice ? <p role="status" className="mt-3 rounded-lg border border-sound bg-card p-3">{actionData.notice}</p> : null}
+        <FormMessages errors={actionData?.errors} notice={actionData?.notice} className="mt-3" />
       </div>
       <section aria-labelledby="invite">
         <h2 id="invite" className="text-xl font-semibold">Invite someone</h2>
@@ -102,12 +70,13 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
           <input type="hidden" name="intent" value="invite" />
           <label className="flex flex-col text-sm font-medium">
             E-mail or GitHub login
-            <input name="target" className={`${control} mt-1 w-72`} autoComplete="off" />
+            <input name="target" className={`${control} mt-1 w-72 max-w-full`} autoComplete="off" {...describedBy(actionData?.errors, "target")} />
+            <FieldError errors={actionData?.errors} name="target" />
           </label>
           <div className="flex flex-col text-sm font-medium">
             <label htmlFor="invite-role">Role</label>
             <select id="invite-role" name="role" defaultValue="technician" className={`${control} mt-1`}>
-              {ROLES.map((r) => <option key={r} value={r}>{r}</option>)}
+              {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
             </select>
           </div>
           <button type="submit" disabled={busy} className="min-h-tap rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700">Send invitation</button>
@@ -126,7 +95,7 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
                 <input type="hidden" name="intent" value="role" />
                 <input type="hidden" name="memberId" value={p.id} />
                 <select name="role" defaultValue={p.role} aria-label={`Role of ${p.name}`} className={control}>
-                  {ROLES.map((r) => <option key={r} value={r}>{r}</option>)}
+                  {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
                 </select>
                 <button type="submit" className={button}>Change role</button>
               </Form>

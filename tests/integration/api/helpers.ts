@@ -3,9 +3,9 @@
 import { and, count, eq, sql } from "drizzle-orm";
 import { RouterContextProvider } from "react-router";
 import { loadAccount } from "~/auth/accounts.server";
-import { asMember, type Member } from "~/auth/guards.server";
+import { asMember, type CurrentMember } from "~/auth/guards.server";
 import { createSession } from "~/auth/session.server";
-import { dbContext } from "~/context";
+import { dbContext } from "~/http/context";
 import type { Db } from "~/db/client.server";
 import { auditLog, findings, observations } from "~/db/schema";
 import { openCase } from "~/cases/workflow.server";
@@ -40,7 +40,7 @@ export async function cookieFor(db: Db, login: string): Promise<string> {
   return cookie;
 }
 
-export async function memberFor(db: Db, login: string): Promise<Member> {
+export async function memberFor(db: Db, login: string): Promise<CurrentMember> {
   const account = await loadAccount(db, seedId(`user:${login}`));
   if (!account) throw new Error(`no demo account ${login}`);
   return asMember(account);

@@ -1,10 +1,10 @@
 // The likely causes the API shows for a case are the reasoning core's rankCauses on the same
 // evidence and the same model: nothing is lost or reordered between the database and the screen.
 import { beforeAll, describe, expect, it } from "vitest";
-import { buildModel, vehicleFacts } from "~/cases/build-model";
+import { buildModel, vehicleFacts } from "~/kb/model";
 import { loadCase } from "~/cases/case.server";
 import { diagnoseCase } from "~/cases/diagnosis.server";
-import { loadKnowledge } from "~/cases/knowledge.server";
+import { loadKnowledge } from "~/kb/knowledge.server";
 import { outcomeCounts } from "./outcome-counts";
 import type { Evidence } from "~/reasoning";
 import { rankCauses } from "~/reasoning";

@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { PERMISSIONS, ROLE_PERMISSIONS } from "~/auth/permissions";
+import { PERMISSIONS, ROLE_PERMISSIONS } from "~/domain/permissions";
 
 // docs/permissions.md is what people read; this keeps it equal to what the server enforces.
 const ROLE_COLUMNS = ["apprentice", "technician", "senior", "advisor", "admin"] as const;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { can, PERMISSIONS, ROLE_HOME, ROLE_PERMISSIONS } from "~/auth/permissions";
-import { ROLES } from "../../../seeds/demo/people";
+import { can, PERMISSIONS, ROLE_HOME, ROLE_PERMISSIONS } from "~/domain/permissions";
+import { ROLES } from "~/domain/people";
 
 describe("role permissions", () => {
   it("gives every role only known permissions and a home", () => {

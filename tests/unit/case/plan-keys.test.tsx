@@ -6,7 +6,7 @@ import userEvent from "@testing-library/user-event";
 import { describe, expect, it, vi } from "vitest";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 import { vehicleLine } from "~/components/case/case-header";
-import { undoOf, type CaseView } from "~/components/case/case-queries";
+import { undoOf, type CaseView } from "~/cases/case-queries";
 import { CheckPlan, needsLine } from "~/components/case/check-plan";
 import { LikelyCauses } from "~/components/case/likely-causes";
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { COUNTRIES, countryDefaults } from "~/workshop/countries";
+import { COUNTRIES, countryDefaults } from "~/domain/countries";
 import { slugify } from "~/workshop/create.server";
 
 describe("country defaults", () => {

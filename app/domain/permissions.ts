@@ -1,4 +1,4 @@
-import type { Role } from "../../seeds/demo/people";
+import type { Role } from "./people";
 
 // Typed permissions, checked on the server by guards and mirrored in the UI (hidden, not disabled).
 // docs/permissions.md is the same matrix in words; the authorization test reads this table.
@@ -38,11 +38,6 @@ export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
 
 export function can(role: Role, permission: Permission): boolean {
   return ROLE_PERMISSIONS[role].includes(permission);
-}
-
-/** The skill level a new member of a role starts with; an admin or advisor counts as a technician. */
-export function skillForRole(role: Role): "apprentice" | "technician" | "senior" {
-  return role === "apprentice" ? "apprentice" : role === "senior" ? "senior" : "technician";
 }
 
 // Where each role lands after signing in: the screen its day starts on.

@@ -1,3 +1,5 @@
+import type { UnitSystem } from "./vehicles";
+
 // Defaults a new workshop gets from its country. The admin can change every one of them.
 // Tax rates are standard VAT rates; check them against the tax authority before relying on them.
 
@@ -6,7 +8,7 @@ export type CountryDefaults = {
   name: string;
   currency: string; // ISO 4217
   taxRate: number; // standard rate as a fraction
-  units: "metric" | "imperial";
+  units: UnitSystem;
   source: string;
 };
 

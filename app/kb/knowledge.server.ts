@@ -1,21 +1,23 @@
 import { eq } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { causes, checkLinks, checks, symptomLinks, symptoms, workshops } from "~/db/schema";
-import type { Knowledge } from "./build-model";
+import { kbCache } from "./cache";
+import type { Knowledge } from "./model";
 
 // The knowledge base changes rarely and is read on every re-rank: keep one copy per workshop and
 // version. A change bumps workshops.kb_version, so the next read reloads.
-const cache = new Map<string, Knowledge>();
+const cache = kbCache<Knowledge>("knowledge", 100);
 
 export async function kbVersion(db: Db, workshopId: string): Promise<number> {
   const [w] = await db.select({ v: workshops.kbVersion }).from(workshops).where(eq(workshops.id, workshopId));
   return w?.v ?? 0;
 }
 
-export async function loadKnowledge(db: Db, workshopId: string, version: number): Promise<Knowledge> {
-  const key = `${workshopId}:${version}`;
-  const hit = cache.get(key);
-  if (hit) return hit;
+export function loadKnowledge(db: Db, workshopId: string, version: number): Promise<Knowledge> {
+  return cache.get(workshopId, version, "", () => readKnowledge(db, workshopId, version));
+}
+
+async function readKnowledge(db: Db, workshopId: string, version: number): Promise<Knowledge> {
   const [s, c, k, sl, cl] = await Promise.all([
     db.select({ id: symptoms.id, name: symptoms.name, leak: symptoms.leak, synonyms: symptoms.synonyms, conditions: symptoms.conditions, system: symptoms.system }).from(symptoms).where(eq(symptoms.workshopId, workshopId)),
     db
@@ -44,8 +46,5 @@ export async function loadKnowledge(db: Db, workshopId: string, version: number)
     db.select({ symptomId: symptomLinks.symptomId, causeId: symptomLinks.causeId, p: symptomLinks.p }).from(symptomLinks).where(eq(symptomLinks.workshopId, workshopId)),
     db.select({ checkId: checkLinks.checkId, causeId: checkLinks.causeId, pFail: checkLinks.pFail }).from(checkLinks).where(eq(checkLinks.workshopId, workshopId)),
   ]);
-  const kb: Knowledge = { kbVersion: version, symptoms: s, causes: c, checks: k, symptomLinks: sl, checkLinks: cl };
-  for (const old of cache.keys()) if (old.startsWith(`${workshopId}:`)) cache.delete(old);
-  cache.set(key, kb);
-  return kb;
+  return { kbVersion: version, symptoms: s, causes: c, checks: k, symptomLinks: sl, checkLinks: cl };
 }

@@ -1,8 +1,8 @@
 import { ZodError, type ZodType } from "zod";
-import { getAccount, asMember, type Member } from "~/auth/guards.server";
-import { can, type Permission } from "~/auth/permissions";
+import { getAccount, asMember, type CurrentMember } from "~/auth/guards.server";
+import { can, type Permission } from "~/domain/permissions";
 import type { Db } from "~/db/client.server";
-import { httpError, refuse } from "~/http.server";
+import { httpError, refuse } from "~/http/errors.server";
 import { MeasureError } from "~/measure";
 import { ReasoningError } from "~/reasoning";
 
@@ -12,11 +12,11 @@ import { ReasoningError } from "~/reasoning";
  * (401 JSON, not a redirect), the permission, and every refusal as `{ error }` with a 4xx.
  * Unexpected failures answer 500 with a plain message and never a stack trace.
  */
-export async function api(request: Request, db: Db, permission: Permission | null, handler: (member: Member) => Promise<unknown>) {
+export async function api(request: Request, db: Db, permission: Permission | null, handler: (member: CurrentMember) => Promise<unknown>) {
   try {
     const account = await getAccount(request, db);
     if (!account) refuse(401, "Sign in first.");
-    let member: Member;
+    let member: CurrentMember;
     try {
       member = asMember(account);
     } catch {

@@ -1,7 +1,8 @@
 // Turns a workshop's knowledge base and one vehicle into the reasoning core's Model. Pure: the
 // server loads the rows, this decides priors and costs, the core does the arithmetic.
 import { checkCost, resolvePriors, type Model, type VehicleFacts } from "~/reasoning";
-import type { Applicability } from "../../seeds/kb/types";
+import type { Applicability } from "~/domain/knowledge";
+import type { Skill } from "~/domain/people";
 
 export type KbSymptom = { id: string; name: string; leak: number; synonyms?: string[]; conditions?: string[]; system?: string };
 export type KbCause = { id: string; parentId: string | null; level: string; name: string; baseRate: number | null; applicability: Applicability; priority?: string | null; repairMinutes?: number | null; partsCost?: number | null };
@@ -11,7 +12,7 @@ export type KbCheck = {
   minutes: number;
   consumablesCost: number;
   access: string[];
-  skill: "apprentice" | "technician" | "senior";
+  skill: Skill;
   falseAlarm: number;
   // What the screens show beside a plan step; not used by the arithmetic.
   instructions?: string[];

@@ -1,21 +1,18 @@
 import { desc, eq, sql } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { cases, owners, vehicles } from "~/db/schema";
-import { loadKnowledge } from "~/cases/knowledge.server";
+import { kbCache } from "./cache";
+import { loadKnowledge } from "./knowledge.server";
 import { caseEntry, entriesFromKnowledgeBase, getIndex, quickFindKey, vehicleEntry, type Entry, type QuickFindIndex } from "~/quick-find";
 
-const entryCache = new Map<string, Entry[]>();
+const entryCache = kbCache<Entry[]>("quick-find-entries", 100);
 
 /** The knowledge-base entries, built once per workshop and knowledge-base version. */
-export async function knowledgeEntries(db: Db, workshopId: string, kbVersion: number): Promise<Entry[]> {
-  const key = `${workshopId}#${kbVersion}`;
-  const hit = entryCache.get(key);
-  if (hit) return hit;
-  const kb = await loadKnowledge(db, workshopId, kbVersion);
-  const entries = entriesFromKnowledgeBase({ symptoms: kb.symptoms, causes: kb.causes, checks: kb.checks });
-  for (const old of entryCache.keys()) if (old.startsWith(`${workshopId}#`)) entryCache.delete(old);
-  entryCache.set(key, entries);
-  return entries;
+export function knowledgeEntries(db: Db, workshopId: string, kbVersion: number): Promise<Entry[]> {
+  return entryCache.get(workshopId, kbVersion, "", async () => {
+    const kb = await loadKnowledge(db, workshopId, kbVersion);
+    return entriesFromKnowledgeBase({ symptoms: kb.symptoms, causes: kb.causes, checks: kb.checks });
+  });
 }
 
 /** Vehicles and the latest cases: they change all day, so they are read fresh (one query each). */

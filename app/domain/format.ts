@@ -1,9 +1,7 @@
-export const STATE_LABEL: Record<string, string> = {
-  open: "Being diagnosed",
-  awaiting_signoff: "Waiting for a senior",
-  concluded: "Cause confirmed",
-  closed: "Closed",
-};
+import { CASE_STATE_LABEL, type CaseState } from "./cases";
+
+/** A case state's words, for a state read as a string from the API. */
+export const STATE_LABEL = CASE_STATE_LABEL as Record<CaseState | (string & {}), string>;
 
 // Building an Intl formatter costs far more than using one: keep one per locale and currency.
 const money = new Map<string, Intl.NumberFormat>();
