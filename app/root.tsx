@@ -1,14 +1,16 @@
-import "@fontsource/ibm-plex-sans/400.css";
-import "@fontsource/ibm-plex-sans/500.css";
-import "@fontsource/ibm-plex-sans/600.css";
-import "@fontsource/ibm-plex-sans/700.css";
+import "./fonts.css";
 import "./app.css";
+import plex400 from "@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-400-normal.woff2?url";
+import plex500 from "@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-500-normal.woff2?url";
+import plex600 from "@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-600-normal.woff2?url";
+import plex700 from "@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-700-normal.woff2?url";
 
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
 import type { Route } from "./+types/root";
 import { RouteErrorPage } from "./components/error-page";
+import { MarkSprite } from "./components/priority";
 import { useNonce } from "./components/nonce";
 import { dbContext } from "~/http/context";
 import { serverDb } from "./db/pool.server";
@@ -34,6 +36,11 @@ export const middleware: Route.MiddlewareFunction[] = [
   },
 ];
 
+// The Latin faces are fetched with the document rather than when the first text needs them, so
+// they are usually there for the first layout (fonts.css says why the face never swaps later).
+export const links: Route.LinksFunction = () =>
+  [plex400, plex500, plex600, plex700].map((href) => ({ rel: "preload", href, as: "font", type: "font/woff2", crossOrigin: "anonymous" as const }));
+
 // Every page has a title, an error page too; routes give their own.
 export function meta() {
   return [{ title: "Ramplight" }];
@@ -52,6 +59,7 @@ export function Layout({ children }: { children: React.ReactNode }) {
         <Links />
       </head>
       <body>
+        <MarkSprite />
         {children}
         <ScrollRestoration nonce={nonce} />
         <Scripts nonce={nonce} />
@@ -63,6 +71,10 @@ export function Layout({ children }: { children: React.ReactNode }) {
 export default function App() {
   // One client per browser tab (and per server render), never shared between requests.
   const [queryClient] = useState(() => new QueryClient({ defaultOptions: { queries: { retry: 1, refetchOnWindowFocus: true } } }));
+  // Marks the page as live (its keys answered): browser tests wait for it before typing.
+  useEffect(() => {
+    document.documentElement.dataset.hydrated = "true";
+  }, []);
   return (
     <QueryClientProvider client={queryClient}>
       <Outlet />

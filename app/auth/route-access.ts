@@ -10,7 +10,7 @@ import type { Permission } from "~/domain/permissions";
 export type RouteAccessLevel = "public" | "account" | "no-workshop" | "member" | Permission;
 
 export type RouteAccess = {
-  path: string; // a concrete URL to try; {case} stands for an open demo case of the Bramblegate workshop
+  path: string; // a concrete URL to try; {case} is an open demo case of the Bramblegate workshop, {check} one of its checks
   api?: true; // JSON route: 401/403 answers instead of redirects
   record?: true; // the URL names a record of one workshop: members of another get 404
   GET?: RouteAccessLevel;
@@ -47,8 +47,10 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/api/what-if.ts": { path: "/api/what-if", api: true, POST: "case:read" },
   "routes/api/case.ts": { path: "/api/cases/{case}", api: true, record: true, GET: "case:read" },
   "routes/api/diagnosis.ts": { path: "/api/cases/{case}/diagnosis", api: true, record: true, GET: "case:read" },
+  "routes/api/history.ts": { path: "/api/cases/{case}/history", api: true, record: true, GET: "case:read" },
   "routes/api/observations.ts": { path: "/api/cases/{case}/observations", api: true, record: true, POST: "case:work" },
-  "routes/api/findings.ts": { path: "/api/cases/{case}/findings", api: true, record: true, POST: "case:work" },
+  "routes/api/findings.ts": { path: "/api/cases/{case}/findings", api: true, record: true, GET: "case:read", POST: "case:work" },
+  "routes/api/kb-check.ts": { path: "/api/kb/checks/{check}", api: true, record: true, GET: "kb:read" },
   "routes/api/not-found.ts": { path: "/api/no-such-thing", GET: "public" },
   "routes/not-found.tsx": { path: "/no-such-page", GET: "public" },
 };

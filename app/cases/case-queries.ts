@@ -5,7 +5,7 @@ import type { Diagnosis } from "~/cases/present-diagnosis";
 // The browser's own fetches for the workbench: the live re-rank after every piece of evidence.
 // Over the wire dates arrive as strings; the screens only format them, so either is fine.
 type Wire<T> = { [K in keyof T]: T[K] extends Date ? string | Date : T[K] extends Date | null ? string | Date | null : T[K] extends (infer U)[] ? Wire<U>[] : T[K] };
-export type CaseView = { case: Wire<CaseFields>; diagnosis: Diagnosis };
+export type CaseView = { case: Wire<CaseFields> & { findingCount: number }; diagnosis: Diagnosis };
 
 export class ApiError extends Error {
   constructor(readonly status: number, message: string) {
@@ -21,7 +21,28 @@ async function call<T>(url: string, init?: RequestInit): Promise<T> {
   return body as T;
 }
 
-export const caseKeys = { all: ["case"] as const, one: (id: string) => ["case", id] as const };
+export const caseKeys = {
+  all: ["case"] as const,
+  one: (id: string) => ["case", id] as const,
+  history: (id: string) => ["case", id, "history"] as const,
+  findings: (id: string) => ["case", id, "findings"] as const,
+};
+
+export type HistoryEntry = { id: number; at: string; action: string; before: unknown; after: unknown; actor: string | null };
+
+export type CheckDetails = { id: string; name: string; instructions: string[]; tools: string[]; cautions: string[]; failMeans: string };
+
+/** A check's steps, read when a folded check of the plan is opened (the plan sends the first few only). */
+export const checkQuery = (checkId: string) =>
+  queryOptions({ queryKey: ["kb", "check", checkId] as const, queryFn: () => call<CheckDetails>(`/api/kb/checks/${checkId}`), staleTime: 5 * 60_000 });
+
+/** Every finding of the case, read when its earlier findings are opened. */
+export const findingsQuery = (caseId: string) =>
+  queryOptions({ queryKey: caseKeys.findings(caseId), queryFn: () => call<{ findings: CaseView["case"]["findings"] }>(`/api/cases/${caseId}/findings`), staleTime: 0 });
+
+/** The case's history, read when its panel is opened and afresh each time (it grows with every change). */
+export const historyQuery = (caseId: string) =>
+  queryOptions({ queryKey: caseKeys.history(caseId), queryFn: () => call<{ history: HistoryEntry[] }>(`/api/cases/${caseId}/history`), staleTime: 0 });
 
 export const caseQuery = (caseId: string) =>
   queryOptions({ queryKey: caseKeys.one(caseId), queryFn: () => call<CaseView>(`/api/cases/${caseId}`), staleTime: 5_000 });
@@ -32,15 +53,15 @@ export type Change =
   | { kind: "find"; checkId: string; name: string; result?: "pass" | "fail"; reading?: string }
   | { kind: "unfind"; id: string };
 
-/** What the server answers to a change: the new row's id when one was added. */
-export type ChangeAnswer = { id?: string } | undefined;
+/** What the server answers to a change: the case and its new diagnosis, and the new row's id when one was added. */
+export type ChangeAnswer = { id?: string; view: CaseView };
 
 /**
  * The change that takes `change` back, given the case as it was before and the server's answer:
  * a new observation or finding is removed, a changed observation gets its old answer back, and a
  * removed one is recorded again as it was. With its words for the notice that offers it.
  */
-export function undoOf(before: CaseView["case"], change: Change, answer: ChangeAnswer): { said: string; undo: Change | null } {
+export function undoOf(before: CaseView["case"], change: Change, answer: Pick<ChangeAnswer, "id"> | undefined): { said: string; undo: Change | null } {
   switch (change.kind) {
     case "observe": {
       const was = before.observations.find((o) => o.symptomId === change.symptomId);
@@ -67,15 +88,18 @@ function send(caseId: string, c: Change): Promise<ChangeAnswer> {
     case "observe":
       return call<ChangeAnswer>(`/api/cases/${caseId}/observations`, { method: "POST", body: JSON.stringify({ symptomId: c.symptomId, present: c.present, source: c.source ?? "technician" }) });
     case "unobserve":
-      return call<undefined>(`/api/cases/${caseId}/observations/${c.id}`, { method: "DELETE" });
+      return call<ChangeAnswer>(`/api/cases/${caseId}/observations/${c.id}`, { method: "DELETE" });
     case "find":
       return call<ChangeAnswer>(`/api/cases/${caseId}/findings`, { method: "POST", body: JSON.stringify({ checkId: c.checkId, result: c.result, reading: c.reading }) });
     case "unfind":
-      return call<undefined>(`/api/cases/${caseId}/findings/${c.id}`, { method: "DELETE" });
+      return call<ChangeAnswer>(`/api/cases/${caseId}/findings/${c.id}`, { method: "DELETE" });
   }
 }
 
-/** Evidence changes with an optimistic list update, rolled back if the server refuses. */
+/**
+ * Evidence changes with an optimistic list update, rolled back if the server refuses. The answer
+ * carries the re-ranked case, which goes straight into the cache: one round trip per change.
+ */
 export function useEvidence(caseId: string) {
   const qc = useQueryClient();
   const key = caseKeys.one(caseId);
@@ -87,10 +111,12 @@ export function useEvidence(caseId: string) {
       if (before) qc.setQueryData<CaseView>(key, { ...before, case: optimistic(before.case, c) });
       return { before };
     },
+    onSuccess: (answer) => qc.setQueryData<CaseView>(key, answer.view),
     onError: (_e, _c, ctx) => {
       if (ctx?.before) qc.setQueryData(key, ctx.before);
+      // Someone else's change may be why it was refused: fetch the case as it is now.
+      void qc.invalidateQueries({ queryKey: key });
     },
-    onSettled: () => qc.invalidateQueries({ queryKey: key }),
   });
 }
 
@@ -102,8 +128,8 @@ function optimistic(c: CaseView["case"], change: Change): CaseView["case"] {
     case "unobserve":
       return { ...c, observations: c.observations.filter((o) => o.id !== change.id) };
     case "find":
-      return { ...c, findings: [...c.findings, { id: `pending-${change.checkId}`, checkId: change.checkId, name: change.name, result: change.result ?? "pass", reading: change.reading ?? "…", note: null, by: null, recordedAt: now }] };
+      return { ...c, findingCount: c.findingCount + 1, findings: [...c.findings, { id: `pending-${change.checkId}`, checkId: change.checkId, name: change.name, result: change.result ?? "pass", reading: change.reading ?? "…", note: null, by: null, recordedAt: now }] };
     case "unfind":
-      return { ...c, findings: c.findings.filter((f) => f.id !== change.id) };
+      return { ...c, findingCount: c.findingCount - 1, findings: c.findings.filter((f) => f.id !== change.id) };
   }
 }

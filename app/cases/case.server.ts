@@ -139,6 +139,11 @@ export async function loadCaseWithHistory(db: Db, member: Pick<CurrentMember, "w
   return read(db, member, caseId, { history: true, outcomes: true });
 }
 
+/** Only the case's latest history rows, newest first (the case must be this workshop's). */
+export async function loadCaseHistory(db: Db, member: Pick<CurrentMember, "workshopId">, caseId: string) {
+  return (await read(db, member, caseId, { history: true, outcomes: false })).history;
+}
+
 /** The case and its evidence, for a change to it: no history, no outcome counts. */
 export async function loadCaseForChange(db: Db, member: Pick<CurrentMember, "workshopId">, caseId: string): Promise<CaseFields> {
   const { history: _h, outcomes: _o, ...fields } = await read(db, member, caseId, { history: false, outcomes: false });

@@ -2,8 +2,9 @@ import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
 import { compileModel, diagnose, type CompiledModel, type Model, type Skill } from "~/reasoning";
 import { buildModel, vehicleFacts } from "~/kb/model";
-import { evidenceOf, type CaseBundle } from "./case.server";
+import { caseFields, evidenceOf, type CaseBundle } from "./case.server";
 import { presentDiagnosis } from "./present-diagnosis";
+import { SHOWN_FINDINGS } from "./shown";
 import { kbCache } from "~/kb/cache";
 import { loadKnowledge } from "~/kb/knowledge.server";
 
@@ -27,5 +28,17 @@ export async function diagnoseCase(db: Db, member: Pick<CurrentMember, "role" | 
   // An apprentice's plan holds only what they may do; everyone else sees every check.
   const maxSkill: Skill = member.role === "apprentice" ? "apprentice" : "senior";
   const { ranking, plan } = diagnose(entry.compiled, evidence, { maxSkill });
-  return { ...presentDiagnosis(kb, ranking, plan, bundle), model, evidence };
+  // The tree's node shares are for the API's diagnosis; the case screens do not draw them.
+  return { ...presentDiagnosis(kb, ranking, plan, bundle, bundle.workshop.units), nodes: ranking.nodes, model, evidence };
+}
+
+/**
+ * The case as its screens and GET /api/cases/:caseId show it: its fields, its latest findings with
+ * their total (a checklist can record dozens; GET …/findings lists them all), and its diagnosis,
+ * which is ranked on every finding.
+ */
+export async function caseView(db: Db, member: Pick<CurrentMember, "role" | "skill" | "workshopId">, bundle: CaseBundle) {
+  const { model: _m, evidence: _e, nodes: _n, ...diagnosis } = await diagnoseCase(db, member, bundle);
+  const fields = caseFields(bundle);
+  return { case: { ...fields, findings: fields.findings.slice(-SHOWN_FINDINGS), findingCount: fields.findings.length }, diagnosis };
 }

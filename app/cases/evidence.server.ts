@@ -15,7 +15,10 @@ export function assertCanWork(member: CurrentMember, c: Pick<CaseFields, "assign
   if (c.state !== "open") refuse(409, "This case is no longer open, so its evidence is fixed. A senior can reopen it.");
 }
 
-export async function recordObservation(db: Db, member: CurrentMember, c: CaseFields, input: { symptomId: string; present: boolean; source: "owner" | "technician"; note?: string }) {
+export type ObservationShown = CaseFields["observations"][number];
+export type FindingShown = CaseFields["findings"][number];
+
+export async function recordObservation(db: Db, member: CurrentMember, c: CaseFields, input: { symptomId: string; present: boolean; source: "owner" | "technician"; note?: string }): Promise<ObservationShown> {
   assertCanWork(member, c);
   const [symptom] = await db.select({ id: symptoms.id, name: symptoms.name }).from(symptoms).where(and(eq(symptoms.id, input.symptomId), eq(symptoms.workshopId, member.workshopId)));
   if (!symptom) refuse(400, "That symptom is not in this workshop's knowledge base.");
@@ -25,9 +28,9 @@ export async function recordObservation(db: Db, member: CurrentMember, c: CaseFi
       .insert(observations)
       .values({ workshopId: member.workshopId, caseId: c.id, symptomId: input.symptomId, present: input.present, source: input.source, note: input.note ?? null, recordedById: member.memberId })
       .onConflictDoUpdate({ target: [observations.caseId, observations.symptomId], set: { present: input.present, source: input.source, note: input.note ?? null, recordedById: member.memberId } })
-      .returning({ id: observations.id });
+      .returning({ id: observations.id, recordedAt: observations.recordedAt });
     await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.observation", entity: "case", entityId: c.id, after: { symptom: symptom.name, present: input.present, source: input.source } });
-    return row;
+    return { id: row.id, symptomId: symptom.id, name: symptom.name, present: input.present, source: input.source, note: input.note ?? null, recordedAt: row.recordedAt, by: member.name };
   });
 }
 
@@ -41,7 +44,7 @@ export async function removeObservation(db: Db, member: CurrentMember, c: CaseFi
   });
 }
 
-export async function recordFinding(db: Db, member: CurrentMember, c: CaseFields, input: { checkId: string; result?: "pass" | "fail"; reading?: string; note?: string }) {
+export async function recordFinding(db: Db, member: CurrentMember, c: CaseFields, input: { checkId: string; result?: "pass" | "fail"; reading?: string; note?: string }): Promise<FindingShown> {
   assertCanWork(member, c);
   const [check] = await db
     .select({ id: checks.id, name: checks.name, skill: checks.skill, resultKind: checks.resultKind, rule: checks.rule, unit: checks.unit })
@@ -73,11 +76,11 @@ export async function recordFinding(db: Db, member: CurrentMember, c: CaseFields
       .insert(findings)
       .values({ workshopId: member.workshopId, caseId: c.id, checkId: check.id, result: result!, reading, value, unit: check.unit, note: input.note ?? null, recordedById: member.memberId })
       .onConflictDoNothing()
-      .returning({ id: findings.id, result: findings.result });
+      .returning({ id: findings.id, result: findings.result, recordedAt: findings.recordedAt });
     // Two people recording the same check at once: the second loses the race and is told so.
     if (!row) refuse(409, `“${check.name}” was recorded by someone else a moment ago.`);
     await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.finding", entity: "case", entityId: c.id, after: { check: check.name, result, reading } });
-    return row;
+    return { id: row.id, checkId: check.id, name: check.name, result: row.result, reading, note: input.note ?? null, recordedAt: row.recordedAt, by: member.name };
   });
 }
 
@@ -89,4 +92,22 @@ export async function removeFinding(db: Db, member: CurrentMember, c: CaseFields
     if (gone.length === 0) refuse(404, "That finding is not on this case.");
     await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.finding_remove", entity: "case", entityId: c.id, before: { checkId: gone[0].checkId, result: gone[0].result, reading: gone[0].reading } });
   });
+}
+
+/**
+ * The case as it stands after one change of its evidence, without reading it again: the answer to
+ * a recording carries the new ranking in the same round trip (the change was made on this very
+ * bundle, in this request).
+ */
+export function withEvidence<T extends Pick<CaseFields, "observations" | "findings">>(c: T, change: { added?: ObservationShown | FindingShown; removed?: string }): T {
+  const observations = c.observations.filter((o) => o.id !== change.removed);
+  const findings = c.findings.filter((f) => f.id !== change.removed);
+  const added = change.added;
+  if (added && "symptomId" in added) {
+    // Answered again, an observation keeps its row and its place (the list is in recording order).
+    const at = observations.findIndex((o) => o.symptomId === added.symptomId);
+    return { ...c, observations: at < 0 ? [...observations, added] : observations.map((o, i) => (i === at ? added : o)), findings };
+  }
+  if (added) return { ...c, observations, findings: [...findings, added] };
+  return { ...c, observations, findings };
 }

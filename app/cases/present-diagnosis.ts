@@ -3,13 +3,29 @@
 import type { Plan, Ranking, WhatIf } from "~/reasoning";
 import type { Knowledge } from "~/kb/model";
 
-/** Causes the screen shows with their "why"; the evidence is listed for these only. */
-export const WHY_CAUSES = 5;
+import { PLAN_OPEN, SENT_CAUSES, SENT_STEPS, WHY_CAUSES } from "./shown";
+import { describeRule } from "~/measure";
+import type { UnitSystem } from "~/domain/vehicles";
+
+// Rules are few and their words do not change: put each into words once per unit system.
+const limitCache = new Map<string, string>();
+function limitWords(rule: string, units: UnitSystem): string {
+  const key = `${units}|${rule}`;
+  let words = limitCache.get(key);
+  if (words === undefined) {
+    if (limitCache.size > 2000) limitCache.clear();
+    limitCache.set(key, (words = describeRule(rule, units)));
+  }
+  return words;
+}
+
+export { WHY_CAUSES };
 const WHY_ITEMS = 8; // pieces of evidence per cause
-const WHY_MIN = 0.01; // |log likelihood ratio| below this moves nothing visible
-const DETAILED_STEPS = 12; // steps sent with instructions: more than the plan offers at once (it skips unlikely ones)
-const SENT_CAUSES = 30; // the screen shows five and folds the rest; past thirty the shares round to 0%
-const SENT_STEPS = 20;
+// |log likelihood ratio| below 0.05 changes the odds by under 5%: a passed check that bears on
+// another system nudges every cause a hair, and listing those would hide the evidence that counts.
+const WHY_MIN = 0.05;
+// Steps past those offered travel without instructions; the page is smaller for it.
+const DETAILED_STEPS = PLAN_OPEN;
 
 /** One line of a cause's "why": the evidence, what was recorded, and its log likelihood ratio. */
 export type WhyLine = { label: string; recorded: string; weight: number };
@@ -38,7 +54,7 @@ function byId(kb: Knowledge) {
   };
 }
 
-export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan, recorded: Recorded) {
+export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan, recorded: Recorded, units: UnitSystem) {
   let maps = lookups.get(kb);
   if (!maps) lookups.set(kb, (maps = byId(kb)));
   const { cause, symptom, check } = maps;
@@ -66,11 +82,16 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan, re
   const name = (id: string | null) => (id ? cause.get(id)?.name ?? id : "Not in the knowledge base");
   const outcome = (o: WhatIf["ifFail"]) => (o ? { topCause: name(o.topCauseId), probability: o.probability } : null);
   // Full instructions only for the steps the screen opens; the rest carry what the folded list shows.
-  const step = <T extends { checkId: string }>(s: T, i: number) => {
+  const step = <T extends { checkId: string; pFind: number; cost: number; skill: string }>(s: T, i: number) => {
     const k = check.get(s.checkId);
-    // Cautions, tools and access always travel: any step may end up on the screen.
-    if (i >= DETAILED_STEPS) return { ...s, name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: k?.tools ?? [], access: k?.access ?? [], cautions: k?.cautions ?? [], instructions: [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, rule: k?.rule ?? null, failMeans: "" };
-    return { ...s, name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: k?.tools ?? [], access: k?.access ?? [], cautions: k?.cautions ?? [], instructions: k?.instructions ?? [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, rule: k?.rule ?? null, failMeans: k?.failMeans ?? "" };
+    // Cautions, tools and access always travel: any step may end up on the screen. A measured
+    // check's limit is put in words here, in the workshop's units, so the browser needs no unit library.
+    // Only what the screen shows: the plan's ratio and reach stay with the reasoning core.
+    const shown = { checkId: s.checkId, pFind: s.pFind, cost: s.cost, skill: s.skill, ...("before" in s ? { before: s.before as number } : {}), name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: k?.tools ?? [], access: k?.access ?? [], cautions: k?.cautions ?? [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, limit: k?.rule ? limitWords(k.rule, units) : null };
+    // Past the first few, the steps travel without their instructions (the screen fetches them
+    // when such a check is opened): `detailed` says which.
+    if (i >= DETAILED_STEPS) return { ...shown, detailed: false, instructions: [] as string[], failMeans: "" };
+    return { ...shown, detailed: true, instructions: k?.instructions ?? [], failMeans: k?.failMeans ?? "" };
   };
   const whatIfFor = (w: WhatIf | null) => (w ? { checkId: w.checkId, pFail: w.pFail, ifFail: outcome(w.ifFail), ifPass: outcome(w.ifPass) } : null);
   const rest = ranking.causes.slice(SENT_CAUSES);
@@ -79,7 +100,6 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan, re
     // What the causes not sent add up to, so the shares on screen still account for everything.
     otherCauses: { count: rest.length, probability: rest.reduce((sum, c) => sum + c.probability, 0) },
     unlisted: ranking.unlisted,
-    nodes: ranking.nodes,
     plan: {
       steps: plan.steps.slice(0, SENT_STEPS).map(step),
       moreSteps: Math.max(0, plan.steps.length - SENT_STEPS),

@@ -54,12 +54,13 @@ export function AppShell({ member, permissions, children }: { member: { name: st
   return (
     <div className="flex min-h-dvh flex-col">
       <header className="border-b border-rule bg-card">
-        <div className="mx-auto flex max-w-6xl items-center gap-x-4 px-3 py-1.5 sm:px-4">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 px-3 pt-1.5 pb-1 sm:px-4 md:pb-1.5">
           <span className="inline-flex items-center gap-2 text-lg font-semibold tracking-tight">
             <BrandMark />
             <span className="hidden sm:inline">Ramplight</span>
           </span>
-          {nav("hidden gap-1 md:flex")}
+          {/* One list of areas: a second row that scrolls sideways on a phone, inline from tablet width. */}
+          {nav("order-last -mx-1 flex w-full gap-1 overflow-x-auto md:order-none md:mx-0 md:w-auto")}
           <div className="ml-auto flex items-center gap-2">
             {permissions.includes("case:read") ? <GlobalQuickFind /> : null}
             <details ref={menu} className="relative">
@@ -78,7 +79,6 @@ export function AppShell({ member, permissions, children }: { member: { name: st
             </details>
           </div>
         </div>
-        {nav("mx-auto flex max-w-6xl gap-1 overflow-x-auto px-2 pb-1 md:hidden")}
       </header>
       <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-4 sm:py-6">{children}</main>
     </div>

@@ -1,6 +1,7 @@
 import { eq } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { causes, checkLinks, checks, symptomLinks, symptoms, workshops } from "~/db/schema";
+import { refuse, requireId } from "~/http/errors.server";
 import { kbCache } from "./cache";
 import type { Knowledge } from "./model";
 
@@ -47,4 +48,13 @@ async function readKnowledge(db: Db, workshopId: string, version: number): Promi
     db.select({ checkId: checkLinks.checkId, causeId: checkLinks.causeId, pFail: checkLinks.pFail }).from(checkLinks).where(eq(checkLinks.workshopId, workshopId)),
   ]);
   return { kbVersion: version, symptoms: s, causes: c, checks: k, symptomLinks: sl, checkLinks: cl };
+}
+
+/** One check as the plan shows it, from the cached knowledge base; another workshop's is "not found". */
+export async function checkDetails(db: Db, workshopId: string, checkId: string) {
+  requireId(checkId, "No such check in this workshop's knowledge base.");
+  const kb = await loadKnowledge(db, workshopId, await kbVersion(db, workshopId));
+  const k = kb.checks.find((c) => c.id === checkId);
+  if (!k) refuse(404, "No such check in this workshop's knowledge base.");
+  return { id: k.id, name: k.name, instructions: k.instructions, tools: k.tools, cautions: k.cautions, failMeans: k.failMeans };
 }

@@ -10,6 +10,7 @@ import routes from "~/routes";
 import type { Role } from "~/domain/people";
 import { DEMO_PEOPLE } from "../../seeds/demo/people";
 import { seedId } from "../../seeds/ids";
+import { kbId } from "../../seeds/knowledge";
 
 // Every route × every kind of caller, against the running production server. Expected outcomes
 // come from app/auth/route-access.ts and the role table; docs/permissions.md states both in words.
@@ -22,6 +23,8 @@ function routeFiles(list: { file: string; children?: unknown[] }[]): string[] {
 
 // Case #1041 of the demo (Bramblegate, open, assigned to the technician).
 const OPEN_CASE = seedId("case:b1");
+// A check of the Bramblegate knowledge base (seeds/kb/brakes.ts).
+const A_CHECK = kbId("bramblegate", "check", "brake_road_test");
 const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 2 });
 const actors: Actor[] = [{ name: "anonymous", kind: "anonymous" }];
 
@@ -87,7 +90,7 @@ describe("authorization matrix", () => {
           const want = expected(access, actor, rule);
           // Signing out revokes the session it is sent with: use a spare one.
           const cookie = file === "routes/auth/sign-out.tsx" && actor.userId ? `rl_session=${await createSession(db, actor.userId, "spare")}` : actor.cookie;
-          const res = await fetch(`${base}${rule.path.replace("{case}", OPEN_CASE)}`, {
+          const res = await fetch(`${base}${rule.path.replace("{case}", OPEN_CASE).replace("{check}", A_CHECK)}`, {
             method,
             redirect: "manual",
             headers: { ...(cookie ? { cookie } : {}), ...(method === "POST" ? { origin: base, "content-type": rule.api ? "application/json" : "application/x-www-form-urlencoded" } : {}) },

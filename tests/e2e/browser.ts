@@ -56,3 +56,8 @@ export async function signOut(page: Page) {
   await page.getByRole("banner").locator("summary").last().click();
   await page.getByRole("button", { name: "Sign out", exact: true }).click();
 }
+
+/** Waits until the page's script has taken over (app/root.tsx marks it), so keys reach its handlers. */
+export async function hydrated(page: Page) {
+  await page.locator("html[data-hydrated]").waitFor({ state: "attached" });
+}

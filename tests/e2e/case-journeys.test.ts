@@ -1,7 +1,7 @@
 import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
 import { seedId } from "../../seeds/ids";
-import { baseUrl, signInAs, useBrowser } from "./browser";
+import { baseUrl, hydrated, signInAs, useBrowser } from "./browser";
 
 // The diagnostic journeys on the demo data, in Chromium against the production build.
 const browser = useBrowser();
@@ -34,6 +34,7 @@ describe("a technician diagnoses a vibration under braking with the keyboard onl
     await signInAs(page, "priya-hale");
     await page.goto(caseUrl("b1"));
     await page.getByRole("heading", { name: "Likely causes" }).waitFor();
+    await hydrated(page);
     const before = await topCause(page);
 
     await page.keyboard.press("Control+k");
@@ -64,7 +65,10 @@ describe("a technician diagnoses a vibration under braking with the keyboard onl
       await page.keyboard.press("ArrowDown");
     }
     expect(await focusedLabel(page), `plan was: ${seen.join(" | ")}`).toBe("Measure front disc lateral run-out with a dial gauge");
-    await page.keyboard.press("Enter"); // into the reading field
+    // Past the first three the plan's checks are folded: Enter opens one (its cautions first);
+    // on an open check, Enter goes into the reading field.
+    if (await page.evaluate(() => Boolean(document.activeElement?.querySelector('button[aria-label^="Open "]')))) await page.keyboard.press("Enter");
+    await page.keyboard.press("Enter");
     await page.keyboard.type("5 kPa");
     await page.keyboard.press("Enter");
     // A reading in the wrong unit is refused with a message, and nothing is recorded.
@@ -85,6 +89,9 @@ describe("a technician diagnoses a vibration under braking with the keyboard onl
     expect(after.share).toBeGreaterThan(mid.share);
     expect(after.share).toBeGreaterThan(before.share);
 
+    // The conclusion form is folded until wanted: Tab to it, Enter opens it.
+    await tabTo(page, (el) => el.tag === "summary" && el.text === "Conclude the case…");
+    await page.keyboard.press("Enter");
     await tabTo(page, (el) => el.tag === "select" && el.name === "causeId");
     expect(await page.evaluate(() => (document.activeElement as HTMLSelectElement).selectedOptions[0].text)).toContain("run-out");
     await page.keyboard.press("Tab");
@@ -185,6 +192,7 @@ describe("Quick find outside a case", () => {
     const { page, errors } = await browser.newPage();
     await signInAs(page, "tomas-varga");
     await page.getByRole("heading", { level: 1, name: "Board" }).waitFor();
+    await hydrated(page);
     await page.keyboard.press("Control+k");
     await page.keyboard.type("#1041");
     await page.getByRole("option").first().filter({ hasText: "1041" }).waitFor();

@@ -14,7 +14,7 @@ import { cases } from "~/db/schema";
 import { eq } from "drizzle-orm";
 import { seedId } from "../../seeds/ids";
 import { kbId } from "../../seeds/knowledge";
-import { baseUrl, signInAs, useBrowser } from "./browser";
+import { baseUrl, hydrated, signInAs, useBrowser } from "./browser";
 
 const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 2 });
 afterAll(() => pool.end());
@@ -46,10 +46,12 @@ describe("stray keys and undo", () => {
     await page.goto(`${baseUrl()}/cases/${id}`);
     const plan = page.getByRole("list", { name: "Checks, best value first" });
     await plan.waitFor();
+    await hydrated(page);
 
     // Ctrl+K a second time keeps the palette, and the typing, where they are.
     await page.keyboard.press("Control+k");
-    await page.keyboard.type("clunk over bumps");
+    await page.keyboard.type("clunk over bumps"); // kept even while the palette's code is still loading
+    await page.getByRole("dialog").waitFor();
     await page.keyboard.press("Control+k");
     await expect(page.getByRole("dialog").count()).resolves.toBe(1);
     await expect(page.getByRole("combobox").inputValue()).resolves.toBe("clunk over bumps");
@@ -84,6 +86,7 @@ describe("stray keys and undo", () => {
     const { page, errors } = await browser.newPage();
     await signInAs(page, "priya-hale");
     await page.goto(`${baseUrl()}/cases/${id}`);
+    await hydrated(page);
     const first = page.locator("[data-step]").first();
     const name = await first.getAttribute("aria-label");
     await first.getByRole("button", { name: "Passed" }).click();
@@ -127,6 +130,9 @@ describe("the workshop's units and the why", () => {
     await recordObservation(db, await member("priya-hale"), c, { symptomId: symptom("vibration_braking"), present: true, source: "technician" });
     await page.reload();
     const step = page.locator('[data-step][aria-label="Measure front disc lateral run-out with a dial gauge"]');
+    // Past the first three the plan's checks are folded; open it if it is one of those.
+    const open = step.getByRole("button", { name: /^Open / });
+    if (await open.count()) await open.click();
     const field = step.getByRole("textbox");
     await expect(field.getAttribute("placeholder")).resolves.toBe("limit: at most 0.00197 in (0.05 mm)");
     await field.fill("65 %");
@@ -225,7 +231,7 @@ describe("each person's screen", () => {
     await ollie.page.getByLabel("What do you need help with?").fill("Is a glazed pad enough to squeal like this?");
     await ollie.page.getByRole("button", { name: "Ask a senior" }).click();
     await ollie.page.getByRole("status").filter({ hasText: "A senior has been asked." }).waitFor();
-    await ollie.page.getByRole("button", { name: "Send for a senior's sign-off" }).waitFor();
+    await ollie.page.getByText("Send for a senior's sign-off…").click();
     await ollie.page.getByLabel("What you found and the repair").fill("Pads glazed; cleaned and chamfered.");
     await ollie.page.getByRole("button", { name: "Send for a senior's sign-off" }).click();
     await ollie.page.getByRole("status").filter({ hasText: "Sent for a senior's sign-off." }).waitFor();

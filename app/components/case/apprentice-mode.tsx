@@ -1,6 +1,6 @@
 import { Form } from "react-router";
 import type { Diagnosis } from "~/cases/present-diagnosis";
-import type { UnitSystem } from "~/measure";
+import type { UnitSystem } from "~/domain/vehicles";
 import type { FormErrors } from "~/http/forms";
 import { describedBy, FieldError } from "../ui/form-errors";
 import { CheckPlan, type RecordResult } from "./check-plan";

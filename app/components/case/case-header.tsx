@@ -1,5 +1,5 @@
 import { Form, href, Link } from "react-router";
-import { formatMileage, type UnitSystem } from "~/measure";
+import { formatMileage, type UnitSystem } from "~/measure/mileage";
 import { STATE_LABEL } from "~/domain/format";
 import type { FormErrors } from "~/http/forms";
 import { describedBy, FieldError } from "../ui/form-errors";

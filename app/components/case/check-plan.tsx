@@ -1,6 +1,9 @@
 import { useEffect, useId, useRef, useState } from "react";
 import type { Diagnosis } from "~/cases/present-diagnosis";
-import { describeRule, type UnitSystem } from "~/measure";
+import { useQuery } from "@tanstack/react-query";
+import { checkQuery } from "~/cases/case-queries";
+import { PLAN_OPEN, PLAN_SHOWN } from "~/cases/shown";
+import type { UnitSystem } from "~/domain/vehicles";
 import { formatMoney, formatPercent } from "~/domain/format";
 import { Fold } from "../fold";
 import { Cautions } from "./cautions";
@@ -9,7 +12,10 @@ type Step = Diagnosis["plan"]["steps"][number];
 type Result = "pass" | "fail";
 export type RecordResult = (step: Step, result: { result?: Result; reading?: string }) => void;
 
-const SHOWN = 8;
+const SHOWN = PLAN_SHOWN;
+// The first few offered checks are open in full; the rest are one line each until opened, and only
+// an opened check can be recorded, so its cautions are always on screen before it is.
+const OPEN_FULL = PLAN_OPEN;
 const WORTH = 0.02; // below a 2% chance of finding the fault a check waits in the folded list
 
 const ACCESS_LABEL: Record<string, string> = { ramp: "ramp", road_test: "road test", scan_tool: "scan tool", wheels_off: "wheels off", bonnet_open: "bonnet open", cold_engine: "cold engine" };
@@ -33,7 +39,7 @@ type Armed = { checkId: string; result: Result } | null;
  * asks for Enter before anything is recorded, and any other key lets go. Stray typing on the page
  * can therefore never record a result; the buttons record at once, and every recording can be undone.
  */
-function onPlanKey(e: React.KeyboardEvent<HTMLOListElement>, steps: Step[], armed: Armed, setArmed: (a: Armed) => void, record: RecordResult) {
+function onPlanKey(e: React.KeyboardEvent<HTMLOListElement>, steps: Step[], armed: Armed, setArmed: (a: Armed) => void, record: RecordResult, isOpen: (checkId: string) => boolean, open: (checkId: string) => void) {
   if (e.ctrlKey || e.metaKey || e.altKey || e.key === "Shift") return;
   const items = [...e.currentTarget.querySelectorAll<HTMLElement>("[data-step]")];
   const at = items.indexOf(document.activeElement as HTMLElement);
@@ -47,6 +53,11 @@ function onPlanKey(e: React.KeyboardEvent<HTMLOListElement>, steps: Step[], arme
   }
   if (!step || e.target !== items[at]) return; // typing in a reading field is not a command
   const key = e.key.toLowerCase();
+  if (!isOpen(step.checkId)) {
+    // A folded check opens first (Enter, P or F), so its cautions are read before anything is recorded.
+    if (e.key === "Enter" || key === "p" || key === "f") (e.preventDefault(), open(step.checkId));
+    return;
+  }
   if ((key === "p" || key === "f") && step.resultKind === "pass_fail") {
     e.preventDefault();
     setArmed({ checkId: step.checkId, result: key === "p" ? "pass" : "fail" });
@@ -86,6 +97,9 @@ export function CheckPlan({ plan, currency, units, record, busy, errorFor, error
   const later = single ? [] : steps.filter((s) => !shown.includes(s));
   const list = useRef<HTMLOListElement>(null);
   const [armed, setArmed] = useState<Armed>(null);
+  const [opened, setOpened] = useState<ReadonlySet<string>>(new Set());
+  const isOpen = (checkId: string) => shown.findIndex((s) => s.checkId === checkId) < OPEN_FULL || opened.has(checkId);
+  const open = (checkId: string) => setOpened((o) => new Set(o).add(checkId));
   // Alt+N moves to the next check from anywhere on the page. It only moves the focus; a single
   // letter would be reached by ordinary typing.
   useEffect(() => {
@@ -98,7 +112,7 @@ export function CheckPlan({ plan, currency, units, record, busy, errorFor, error
     return () => window.removeEventListener("keydown", onKey);
   }, []);
   return (
-    <section aria-labelledby="plan" className="rounded-card border border-rule bg-card p-4">
+    <section aria-labelledby="plan" className="card">
       <h2 id="plan" className="text-xl font-semibold">{single ? "Your next check" : "Check plan"}</h2>
       {!single && steps.length ? (
         <p className="mt-1 text-sm text-graphite-700" data-testid="plan-saving">
@@ -120,9 +134,21 @@ export function CheckPlan({ plan, currency, units, record, busy, errorFor, error
       <p className="mt-2 hidden text-sm text-graphite-600 sm:pointer-fine:block">
         <kbd>Alt</kbd>+<kbd>N</kbd> next check · <kbd>↑</kbd>/<kbd>↓</kbd> move · <kbd>P</kbd> or <kbd>F</kbd> then <kbd>Enter</kbd> records passed or a fault · <kbd>Enter</kbd> type a reading
       </p>
-      <ol ref={list} className="mt-3 grid gap-3" aria-label="Checks, best value first" onKeyDown={(e) => onPlanKey(e, shown, armed, setArmed, record)} onBlur={() => setArmed(null)}>
+      <ol ref={list} className="mt-3 grid gap-3" aria-label="Checks, best value first" onKeyDown={(e) => onPlanKey(e, shown, armed, setArmed, record, isOpen, open)} onBlur={() => setArmed(null)}>
         {shown.map((s, i) => (
-          <PlanStep key={s.checkId} step={s} first={i === 0} currency={currency} units={units} record={record} busy={busy} error={errorFor(s.checkId)} armed={armed?.checkId === s.checkId ? armed.result : null} />
+          <PlanStep
+            key={s.checkId}
+            step={s}
+            first={i === 0}
+            folded={!isOpen(s.checkId) && !errorFor(s.checkId)}
+            onOpen={() => open(s.checkId)}
+            currency={currency}
+            units={units}
+            record={record}
+            busy={busy}
+            error={errorFor(s.checkId)}
+            armed={armed?.checkId === s.checkId ? armed.result : null}
+          />
         ))}
       </ol>
       {later.length ? (
@@ -151,12 +177,30 @@ export function CheckPlan({ plan, currency, units, record, busy, errorFor, error
   );
 }
 
-type StepProps = { step: Step; first: boolean; currency: string; units: UnitSystem; record: RecordResult; busy: boolean; error: string | null; armed: Result | null };
+type StepProps = { step: Step; first: boolean; folded: boolean; onOpen: () => void; currency: string; units: UnitSystem; record: RecordResult; busy: boolean; error: string | null; armed: Result | null };
 
-function PlanStep({ step, first, currency, units, record, busy, error, armed }: StepProps) {
+function PlanStep({ step, first, folded, onOpen, currency, units, record, busy, error, armed }: StepProps) {
   const [reading, setReading] = useState("");
   const errorId = useId();
-  const limit = step.rule ? describeRule(step.rule, units) : null;
+  const limit = step.limit;
+  // A check opened from the folded part of the plan came without its steps: read them now.
+  const details = useQuery({ ...checkQuery(step.checkId), enabled: !folded && !step.detailed });
+  const instructions = step.detailed ? step.instructions : (details.data?.instructions ?? []);
+  const failMeans = step.detailed ? step.failMeans : (details.data?.failMeans ?? "");
+  // One <li> folded or open, so opening it from the keyboard keeps the focus where it was.
+  if (folded) {
+    return (
+      <li data-step={step.checkId} tabIndex={0} aria-label={step.name} className="flex flex-wrap items-center justify-between gap-2 rounded-lg border border-rule p-3 outline-offset-2">
+        <span>
+          <span className="font-semibold">{step.name}</span>
+          <span className="meta tabular block">{`${formatPercent(step.pFind)} to find it · ${step.minutes} min · ${formatMoney(step.cost, currency)}${step.cautions.length ? " · needs care" : ""}`}</span>
+        </span>
+        <button type="button" className="btn" onClick={onOpen} aria-label={`Open ${step.name}`}>
+          Open
+        </button>
+      </li>
+    );
+  }
   return (
     <li
       data-step={step.checkId}
@@ -167,17 +211,17 @@ function PlanStep({ step, first, currency, units, record, busy, error, armed }: 
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h3 className="font-semibold">{first ? "Next: " : ""}{step.name}</h3>
         <span className="tabular text-sm">
-          <strong>{formatPercent(step.pFind)}</strong> to find it · {step.minutes} min · {formatMoney(step.cost, currency)}
+          <strong>{formatPercent(step.pFind)}</strong>{` to find it · ${step.minutes} min · ${formatMoney(step.cost, currency)}`}
         </span>
       </div>
-      <p className="text-sm text-graphite-600">{needsLine(step)}</p>
+      <p className="meta">{needsLine(step)}</p>
       {/* Every check on offer can be recorded straight away, so its cautions are always shown in
           full; only the instructions fold. */}
       <Cautions cautions={step.cautions} />
-      {step.instructions.length ? (
+      {instructions.length ? (
         <Fold className="mt-1" open={first} summaryClassName="inline-flex min-h-tap cursor-pointer items-center font-medium" summary="How to do it">
           <ol className="mt-1 list-decimal pl-6 text-sm">
-            {step.instructions.map((line, i) => <li key={i}>{line}</li>)}
+            {instructions.map((line, i) => <li key={i}>{line}</li>)}
           </ol>
         </Fold>
       ) : null}
@@ -195,31 +239,31 @@ function PlanStep({ step, first, currency, units, record, busy, error, armed }: 
           }}
         >
           <label className="flex flex-col text-sm font-medium">
-            Reading for {step.name.toLowerCase()}
+            {`Reading for ${step.name.toLowerCase()}`}
             <input
               value={reading}
               onChange={(e) => setReading(e.target.value)}
               placeholder={limit ? `limit: ${limit}` : step.unit ?? ""}
               aria-invalid={error ? true : undefined}
               aria-describedby={error ? errorId : undefined}
-              className="mt-1 min-h-tap w-64 max-w-full rounded-lg border border-rule bg-card px-3 text-base"
+              className="field mt-1 w-64 max-w-full"
             />
           </label>
-          <button type="submit" disabled={busy} className="min-h-tap rounded-lg bg-uv-600 px-4 font-semibold text-white">Record reading</button>
-          {limit ? <p className="w-full text-sm text-graphite-600">Passes when the reading is {limit}.</p> : null}
+          <button type="submit" disabled={busy} className="btn-primary">Record reading</button>
+          {limit ? <p className="meta w-full">{`Passes when the reading is ${limit}.`}</p> : null}
         </form>
       ) : (
         <div className="mt-2 flex flex-wrap gap-2">
-          <button type="button" disabled={busy} onClick={() => record(step, { result: "pass" })} className="min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper">
+          <button type="button" disabled={busy} onClick={() => record(step, { result: "pass" })} className="btn">
             Passed
           </button>
-          <button type="button" disabled={busy} onClick={() => record(step, { result: "fail" })} className="min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper">
+          <button type="button" disabled={busy} onClick={() => record(step, { result: "fail" })} className="btn">
             Found a fault
           </button>
         </div>
       )}
       {error ? <p id={errorId} role="alert" className="mt-2 rounded-lg border-2 border-stop p-2">{error}</p> : null}
-      {step.failMeans ? <p className="mt-1 text-sm text-graphite-600">A fail means: {step.failMeans}</p> : null}
+      {failMeans ? <p className="meta mt-1">{`A fail means: ${failMeans}`}</p> : null}
     </li>
   );
 }

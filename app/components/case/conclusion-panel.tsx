@@ -1,5 +1,7 @@
 import { Form } from "react-router";
 import type { ShownCause } from "~/cases/present-diagnosis";
+import { SENT_CAUSES } from "~/cases/shown";
+import { Fold } from "../fold";
 import { formatPercent } from "~/domain/format";
 import type { FormErrors } from "~/http/forms";
 import { describedBy, FieldError } from "../ui/form-errors";
@@ -50,13 +52,21 @@ export function ConclusionPanel({ state, version, causes, conclusion, mayConclud
       {state === "awaiting_signoff" ? <p className="mt-2 font-medium text-uv-700">Waiting for a senior's sign-off.</p> : null}
       {state === "closed" ? <p className="mt-2 text-graphite-700">The case is closed; its confirmed cause counts in the workshop's outcome statistics.</p> : null}
       {open && mayConclude ? (
+        // Folded until wanted: a case is concluded once, at its end, and the form (with every likely
+        // cause as a choice) stays out of the page until then. It opens by itself to show an error.
+        <Fold
+          open={Boolean(errors?.causeId || errors?.notes)}
+          className="mt-2"
+          summaryClassName="inline-flex min-h-tap cursor-pointer items-center font-semibold text-uv-700"
+          summary={isApprentice ? "Send for a senior's sign-off…" : "Conclude the case…"}
+        >
         <Form method="post" className="mt-3 grid gap-3">
           <input type="hidden" name="intent" value="conclude" />
           <input type="hidden" name="version" value={version} />
           <label className="font-medium">
             Confirmed cause
             <select name="causeId" className={field} defaultValue={causes[0]?.id} {...describedBy(errors, "causeId")}>
-              {causes.slice(0, 15).map((c) => (
+              {causes.slice(0, SENT_CAUSES).map((c) => (
                 <option key={c.id} value={c.id}>{c.name} ({formatPercent(c.probability)})</option>
               ))}
             </select>
@@ -71,6 +81,7 @@ export function ConclusionPanel({ state, version, causes, conclusion, mayConclud
             {isApprentice ? "Send for a senior's sign-off" : "Conclude the case"}
           </button>
         </Form>
+        </Fold>
       ) : null}
       {state === "awaiting_signoff" && maySignOff ? (
         <Form method="post" className="mt-3 grid gap-3">

@@ -1,3 +1,4 @@
+import { lazy, Suspense } from "react";
 import type { CaseView } from "~/cases/case-queries";
 import { Fold } from "../fold";
 import { formatDate } from "~/domain/format";
@@ -5,12 +6,13 @@ import { formatDate } from "~/domain/format";
 type Finding = CaseView["case"]["findings"][number];
 
 // A long case keeps its latest findings in view; the earlier ones open on request.
-const RECENT_FINDINGS = 10;
+// The view carries the latest findings; the earlier ones are read (and their code loaded) on opening.
+const EarlierFindings = lazy(() => import("./earlier-findings"));
 
 /** What has been noticed and found so far, newest last, each removable while the case is open. */
 export function EvidenceList({ c, canWork, remove }: { c: CaseView["case"]; canWork: boolean; remove: (kind: "unobserve" | "unfind", id: string) => void }) {
   return (
-    <section aria-labelledby="evidence" className="rounded-card border border-rule bg-card p-4">
+    <section aria-labelledby="evidence" className="card">
       <h2 id="evidence" className="text-xl font-semibold">Evidence</h2>
       <h3 className="mt-3 font-semibold">Observations</h3>
       {c.observations.length === 0 ? <p className="text-graphite-600">None yet. Press Ctrl+K (⌘K) to add what you notice.</p> : null}
@@ -22,37 +24,37 @@ export function EvidenceList({ c, canWork, remove }: { c: CaseView["case"]; canW
               <span className="text-sm text-graphite-600">({o.source === "owner" ? "owner says" : "confirmed"}{o.by ? `, ${o.by}` : ""})</span>
             </span>
             {canWork && !o.id.startsWith("pending") ? (
-              <button type="button" onClick={() => remove("unobserve", o.id)} className="min-h-tap rounded-lg px-2 text-sm text-graphite-600 hover:bg-paper" aria-label={`Remove observation ${o.name}`}>Remove</button>
+              <button type="button" onClick={() => remove("unobserve", o.id)} className="btn-small" aria-label={`Remove observation ${o.name}`}>Remove</button>
             ) : null}
           </li>
         ))}
       </ul>
       <h3 className="mt-4 font-semibold">Findings</h3>
       {c.findings.length === 0 ? <p className="text-graphite-600">No checks done yet.</p> : null}
-      {c.findings.length > RECENT_FINDINGS ? (
-        <Fold className="mt-1" summaryClassName="min-h-tap cursor-pointer content-center text-sm text-graphite-700" summary={`${c.findings.length - RECENT_FINDINGS} earlier findings`}>
-          <ol className="grid gap-1" aria-label="Earlier findings">
-            {c.findings.slice(0, -RECENT_FINDINGS).map((f) => <FindingRow key={f.id} f={f} canWork={canWork} remove={remove} />)}
-          </ol>
+      {c.findingCount > c.findings.length ? (
+        <Fold className="mt-1" summaryClassName="min-h-tap cursor-pointer content-center text-sm text-graphite-700" summary={`${c.findingCount - c.findings.length} earlier findings`}>
+          <Suspense fallback={<p className="meta mt-1">Loading…</p>}>
+            <EarlierFindings caseId={c.id} latestIds={c.findings.map((f) => f.id)} canWork={canWork} remove={remove} />
+          </Suspense>
         </Fold>
       ) : null}
       <ol className="mt-1 grid gap-1" aria-label="Findings">
-        {c.findings.slice(-RECENT_FINDINGS).map((f) => <FindingRow key={f.id} f={f} canWork={canWork} remove={remove} />)}
+        {c.findings.map((f) => <FindingRow key={f.id} f={f} canWork={canWork} remove={remove} />)}
       </ol>
     </section>
   );
 }
 
-function FindingRow({ f, canWork, remove }: { f: Finding; canWork: boolean; remove: (kind: "unfind", id: string) => void }) {
+export function FindingRow({ f, canWork, remove }: { f: Finding; canWork: boolean; remove: (kind: "unfind", id: string) => void }) {
   return (
     <li className="flex items-center justify-between gap-2">
       <span>
-        <strong className={f.result === "fail" ? "text-stop" : ""}>{f.id.startsWith("pending") ? "Recording…" : f.result === "fail" ? "Fault found" : "Passed"}</strong>: {f.name}
-        {f.reading ? <span className="tabular"> — {f.reading}</span> : null}{" "}
-        <span className="tabular text-sm text-graphite-600">{f.by ? `${f.by}, ` : ""}{formatDate(f.recordedAt)}</span>
+        <strong className={f.result === "fail" ? "text-stop" : ""}>{f.id.startsWith("pending") ? "Recording…" : f.result === "fail" ? "Fault found" : "Passed"}</strong>
+        {`: ${f.name}${f.reading ? ` — ${f.reading}` : ""} `}
+        <span className="meta tabular">{`${f.by ? `${f.by}, ` : ""}${formatDate(f.recordedAt)}`}</span>
       </span>
       {canWork && !f.id.startsWith("pending") ? (
-        <button type="button" onClick={() => remove("unfind", f.id)} className="min-h-tap rounded-lg px-2 text-sm text-graphite-600 hover:bg-paper" aria-label={`Remove finding ${f.name}`}>Remove</button>
+        <button type="button" onClick={() => remove("unfind", f.id)} className="btn-small" aria-label={`Remove finding ${f.name}`}>Remove</button>
       ) : null}
     </li>
   );

@@ -1,5 +1,6 @@
 import { useEffect, useRef } from "react";
-import { type ShownCause, WHY_CAUSES } from "~/cases/present-diagnosis";
+import type { ShownCause } from "~/cases/present-diagnosis";
+import { WHY_CAUSES } from "~/cases/shown";
 import { Fold } from "../fold";
 import { formatPercent } from "~/domain/format";
 import { PriorityMark } from "../priority";
@@ -18,7 +19,7 @@ export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlis
   const top = causes.slice(0, SHOWN);
   const rest = causes.slice(SHOWN).filter((c) => c.probability >= 0.001);
   return (
-    <section aria-labelledby="likely" className="rounded-card border border-rule bg-card p-4">
+    <section aria-labelledby="likely" className="card">
       <h2 id="likely" className="text-xl font-semibold">Likely causes</h2>
       <ol className="mt-3 grid gap-3" aria-label="Likely causes, most likely first">
         {top.map((c, i) => (
@@ -53,7 +54,7 @@ function Bar({ label, value, muted = false, moved = false }: { label: string; va
         <span className="tabular font-semibold">{formatPercent(value)}</span>
       </div>
       <div className={`mt-1 h-3 rounded-full bg-data-soft ${moved ? "motion-safe:animate-pulse" : ""}`} aria-hidden="true">
-        <div className={`h-3 rounded-full ${muted ? "bg-graphite-500" : "bg-data"}`} style={{ width: `${Math.max(0.5, value * 100)}%` }} />
+        <div className={`h-3 rounded-full ${muted ? "bg-graphite-500" : "bg-data"}`} style={{ width: `${Math.max(0.5, value * 100).toFixed(1)}%` }} />
       </div>
     </div>
   );
@@ -73,12 +74,12 @@ function CauseRow({ cause, rank, moved, open }: { cause: ShownCause; rank: numbe
         {cause.why.length === 0 ? (
           <p className="text-sm text-graphite-600">No evidence bears on it yet: its share is its usual frequency.</p>
         ) : (
-          <ul className="mt-1 grid gap-2 text-sm" aria-label={`Evidence for and against ${cause.name}`}>
+          <ul className="mt-1 grid gap-2 text-sm" aria-label="Evidence for and against it">
             {cause.why.map((w) => (
               <li key={w.label} className="grid grid-cols-[1fr_6rem] items-center gap-2" data-why={w.weight > 0 ? "up" : "down"}>
                 <span>
                   {w.label}
-                  {w.recorded ? <span className="text-graphite-700">: {w.recorded}</span> : null}
+                  {w.recorded ? <span className="text-graphite-700">{`: ${w.recorded}`}</span> : null}
                   <span className={`block font-medium ${w.weight > 0 ? "text-data" : "text-graphite-700"}`}>
                     {w.weight > 0 ? "▲ makes it more likely" : "▼ makes it less likely"}
                   </span>
@@ -86,7 +87,7 @@ function CauseRow({ cause, rank, moved, open }: { cause: ShownCause; rank: numbe
                 <span className="relative h-2 rounded bg-data-soft" aria-hidden="true">
                   <span
                     className={`absolute top-0 h-2 rounded ${w.weight > 0 ? "left-1/2 bg-data" : "right-1/2 bg-graphite-500"}`}
-                    style={{ width: `${(Math.abs(w.weight) / max) * 50}%` }}
+                    style={{ width: `${((Math.abs(w.weight) / max) * 50).toFixed(1)}%` }}
                   />
                 </span>
               </li>

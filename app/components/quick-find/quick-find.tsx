@@ -1,132 +1,61 @@
 // Quick find: the keyboard palette for adding symptoms to a case and jumping to causes, checks,
-// vehicles and cases. Opens with ⌘K / Ctrl+K or its button. cmdk draws the list and handles the
-// arrow keys; ranking is ours (app/quick-find), so cmdk's own filter is off.
-import { Command } from "cmdk";
-import { useCallback, useMemo, useRef, useState } from "react";
-import { type Entry, type EntryKind, GROUP_HEADING, search } from "~/quick-find";
-import { itemValue, ResultRow } from "./result-row";
-import { type EntrySource, useQuickFindIndex } from "./use-index";
+// vehicles and cases. Opens with ⌘K / Ctrl+K or its button. This module is the button and the
+// shortcut only; the palette itself (cmdk, the index builder) loads on first use.
+import { lazy, Suspense, useCallback, useEffect, useRef, useState } from "react";
+import type { QuickFindProps } from "./palette";
 import { useQuickFindShortcut, useShortcutLabel } from "./use-shortcut";
 
-export type QuickFindPick = { present?: boolean };
+export type { QuickFindPick, QuickFindProps } from "./palette";
 
-export type QuickFindProps = {
-  /** The entries, or a loader called the first time the palette opens. Keep the array stable
-   *  across renders (or pass cacheKey): a new array means a new index. */
-  entries: EntrySource;
-  /** Shares the built index across mounts, e.g. quickFindKey(workshopId, kbVersion). */
-  cacheKey?: string;
-  recentIds?: readonly string[];
-  kinds?: readonly EntryKind[];
-  limit?: number;
-  /** A symptom comes with present: true or false; anything else is a jump to that item. */
-  onPick: (entry: Entry, pick: QuickFindPick) => void;
-  open?: boolean;
-  onOpenChange?: (open: boolean) => void;
-  placeholder?: string;
-};
+const Palette = lazy(() => import("./palette"));
+/** Fetches the palette's code ahead of the first open, when the pointer or focus comes near. */
+const preload = () => void import("./palette");
 
 const KBD = "rounded border border-rule bg-paper px-1.5 font-sans text-base text-graphite-700";
-const GROUP = "[&_[cmdk-group-heading]]:px-3 [&_[cmdk-group-heading]]:pt-3 [&_[cmdk-group-heading]]:pb-1 [&_[cmdk-group-heading]]:text-base [&_[cmdk-group-heading]]:font-semibold [&_[cmdk-group-heading]]:text-graphite-600";
 
 export function QuickFind(props: QuickFindProps) {
-  const { entries, cacheKey, recentIds, kinds, limit, onPick, placeholder } = props;
-  const [ownOpen, setOwnOpen] = useState(false);
-  const open = props.open ?? ownOpen;
-  const [opened, setOpened] = useState(false); // build nothing until the palette is first wanted
-  const [query, setQuery] = useState("");
-  const [selection, setSelection] = useState<{ query: string; value: string } | null>(null);
-  const [added, setAdded] = useState<string | null>(null);
+  const [open, setOpen] = useState(false);
+  const [wanted, setWanted] = useState(false); // mount (and load) nothing until first opened
+  const input = useRef<HTMLInputElement | null>(null);
   const shortcut = useShortcutLabel();
-
-  const setOpen = useCallback(
-    (next: boolean) => {
-      if (next) setOpened(true);
-      else (setQuery(""), setAdded(null));
-      if (props.open === undefined) setOwnOpen(next);
-      props.onOpenChange?.(next);
-    },
-    [props.open, props.onOpenChange],
-  );
-  const input = useRef<HTMLInputElement>(null);
+  const show = useCallback(() => (setWanted(true), setOpen(true)), []);
+  // Until the palette's code has loaded, the keys typed after Ctrl+K are kept here and handed to it,
+  // so a fast typist loses nothing and nothing reaches the page.
+  const typedAhead = useRef("");
+  const [ready, setReady] = useState(false);
+  useEffect(() => {
+    if (!wanted || ready) return;
+    const hold = (e: KeyboardEvent) => {
+      if (e.ctrlKey || e.metaKey || e.altKey) return;
+      if (e.key.length === 1) typedAhead.current += e.key;
+      else if (e.key === "Backspace") typedAhead.current = typedAhead.current.slice(0, -1);
+      else return;
+      e.preventDefault();
+      e.stopPropagation();
+    };
+    window.addEventListener("keydown", hold, { capture: true });
+    return () => window.removeEventListener("keydown", hold, { capture: true });
+  }, [wanted, ready]);
   // Ctrl+K opens the palette; pressed again while it is open it keeps the typing there (closing
   // it would send the next words to the page). Esc closes.
-  useQuickFindShortcut(useCallback(() => (open ? input.current?.focus() : setOpen(true)), [open, setOpen]));
-
-  const { index, loading, error } = useQuickFindIndex(entries, cacheKey, opened || open);
-  const groups = useMemo(() => (index ? search(index, query, { recentIds, kinds, limit }) : []), [index, query, recentIds, kinds, limit]);
-  const visible = useMemo(() => groups.flatMap((g) => g.items.map((i) => i.entry)), [groups]);
-  // The highlight follows the user's arrows within one query and returns to the top on a new one.
-  const picked = selection?.query === query ? visible.find((e) => itemValue(e) === selection.value) : undefined;
-  const current = picked ?? visible[0];
-
-  const choose = (entry: Entry, present: boolean | undefined) => {
-    if (entry.kind === "symptom") {
-      onPick(entry, { present: present ?? true });
-      // Stay open: a technician usually adds several symptoms in a row.
-      setAdded(`Added “${entry.title}” as ${present === false ? "absent" : "present"}.`);
-      setQuery("");
-      return;
-    }
-    onPick(entry, {});
-    setOpen(false);
-  };
-
+  useQuickFindShortcut(useCallback(() => (open ? input.current?.focus() : show()), [open, show]));
   return (
     <>
       <button
         type="button"
-        onClick={() => setOpen(true)}
+        onClick={show}
+        onPointerEnter={preload}
+        onFocus={preload}
         aria-keyshortcuts="Control+K Meta+K"
         className="inline-flex min-h-tap items-center gap-3 rounded-lg border border-rule bg-card px-3 text-base font-medium text-graphite-700 hover:bg-paper"
       >
         Quick find <kbd className={`${KBD} hidden sm:pointer-fine:inline`}>{shortcut}</kbd>
       </button>
-      <Command.Dialog
-        open={open}
-        onOpenChange={setOpen}
-        label="Quick find"
-        shouldFilter={false}
-        vimBindings={false}
-        loop
-        value={current ? itemValue(current) : ""}
-        onValueChange={(value) => setSelection({ query, value })}
-        onKeyDown={(e) => {
-          // Shift+Enter adds the highlighted symptom as absent; cmdk leaves prevented keys alone.
-          if (e.key !== "Enter" || !e.shiftKey || !current) return;
-          e.preventDefault();
-          choose(current, current.kind === "symptom" ? false : undefined);
-        }}
-        overlayClassName="fixed inset-0 bg-graphite-950/40"
-        contentClassName="fixed left-1/2 top-[8vh] w-[min(42rem,calc(100vw-1.5rem))] -translate-x-1/2 overflow-hidden rounded-card border border-rule bg-card text-base text-graphite-900 shadow-xl"
-      >
-        {/* cmdk names the input after the dialog's label ("Quick find") through its own hidden label. */}
-        <Command.Input
-          ref={input}
-          value={query}
-          onValueChange={setQuery}
-          placeholder={placeholder ?? "Symptom, cause, check, registration, VIN or #case"}
-          className="min-h-tap w-full border-b border-rule bg-transparent px-4 py-3 text-lg outline-none placeholder:text-graphite-600"
-        />
-        <Command.List className="max-h-[60vh] overflow-y-auto p-2" aria-describedby="quick-find-keys">
-          {loading ? <Command.Loading label="Loading Quick find">Loading…</Command.Loading> : null}
-          {error ? <p className="px-3 py-2 text-stop">{error}</p> : null}
-          {index && query.trim() ? <Command.Empty className="px-3 py-2 text-graphite-600">Nothing found. Try another word, a registration or a case number.</Command.Empty> : null}
-          {groups.map((g) => (
-            <Command.Group key={g.kind} heading={GROUP_HEADING[g.kind]} className={GROUP}>
-              {g.items.map(({ entry }) => (
-                <ResultRow key={itemValue(entry)} entry={entry} onChoose={choose} />
-              ))}
-            </Command.Group>
-          ))}
-        </Command.List>
-        <footer id="quick-find-keys" className="flex flex-wrap items-center gap-x-4 gap-y-1 border-t border-rule px-4 py-2 text-base text-graphite-600">
-          <span><kbd className={KBD}>Enter</kbd> add as present / open</span>
-          <span><kbd className={KBD}>Shift</kbd>+<kbd className={KBD}>Enter</kbd> add as absent</span>
-          <span><kbd className={KBD}>Esc</kbd> close</span>
-        </footer>
-        <p role="status" className="px-4 pb-2 text-base text-graphite-700 empty:hidden">{added}</p>
-      </Command.Dialog>
+      {wanted ? (
+        <Suspense fallback={null}>
+          <Palette {...props} open={open} onOpenChange={setOpen} inputRef={input} typedAhead={typedAhead} onReady={() => setReady(true)} />
+        </Suspense>
+      ) : null}
     </>
   );
 }

@@ -8,7 +8,8 @@ import { describedBy, FieldError, FormMessages } from "~/components/ui/form-erro
 import { invalid, readForm, refusedOnForm } from "~/http/forms.server";
 import { listVehicles } from "~/vehicles/vehicles.server";
 import { DRIVETRAIN_LABEL, DRIVETRAINS, FUEL_LABEL, FUEL_TYPES } from "~/domain/vehicles";
-import { mileageUnit, parseMileage, validateVin } from "~/measure";
+import { validateVin } from "~/measure";
+import { mileageUnit, parseMileage } from "~/measure/mileage";
 import { getWorkshop } from "~/workshop/settings.server";
 import type { Route } from "./+types/new";
 

@@ -1,11 +1,11 @@
 import { useQuery } from "@tanstack/react-query";
-import { useCallback, useEffect, useMemo, useState } from "react";
+import { useCallback, useEffect, useState } from "react";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { mayConclude, mayWorkOn } from "~/domain/case-access";
 import { can } from "~/domain/permissions";
-import { caseFields, loadCaseForChange, loadCaseWithHistory } from "~/cases/case.server";
+import { loadCase, loadCaseForChange } from "~/cases/case.server";
 import { CaseHistory } from "~/components/case/case-history";
-import { diagnoseCase } from "~/cases/diagnosis.server";
+import { caseView } from "~/cases/diagnosis.server";
 import { assertIntentAllowed, runWorkbenchForm, WorkbenchForm } from "~/cases/workbench-actions.server";
 import { ApprenticeMode } from "~/components/case/apprentice-mode";
 import { CaseHeader, SeniorNotes } from "~/components/case/case-header";
@@ -19,10 +19,9 @@ import { EvidenceList } from "~/components/case/evidence-list";
 import { LikelyCauses } from "~/components/case/likely-causes";
 import { CaseQuickFind } from "~/components/case/case-quick-find";
 import { RouteErrorPage } from "~/components/error-page";
-import { fromPayload, toPayload } from "~/http/json-payload";
 import { dbContext } from "~/http/context";
 import { invalid, onForm, zodErrors } from "~/http/forms.server";
-import type { UnitSystem } from "~/measure";
+import type { UnitSystem } from "~/domain/vehicles";
 import { quickFindKey } from "~/quick-find";
 import type { Route } from "./+types/workbench";
 
@@ -32,15 +31,14 @@ export const handle = { quickFind: "own" };
 export async function loader({ params, context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "case:read");
   const db = context.get(dbContext);
-  const { history, ...bundle } = await loadCaseWithHistory(db, member, params.caseId);
-  const { model: _m, evidence: _e, ...diagnosis } = await diagnoseCase(db, member, bundle);
+  const bundle = await loadCase(db, member, params.caseId);
+  const view: CaseView = await caseView(db, member, bundle);
   // The browser keeps one built index per knowledge-base version instead of rebuilding on every revalidation.
   const quickFindCacheKey = quickFindKey(member.workshopId, `${bundle.workshop.kbVersion}-${bundle.id}`, "case");
   const canWork = bundle.state === "open" && mayWorkOn(member, bundle);
-  const view: CaseView = { case: caseFields(bundle), diagnosis };
   return {
-    // The same shape the browser later fetches from /api/cases/:id, so the live copy starts from it.
-    page: toPayload({ view, history }),
+    // The shape the browser later fetches from /api/cases/:id, so the live copy starts from it.
+    view,
     quickFindCacheKey,
     number: bundle.number,
     me: {
@@ -72,7 +70,7 @@ export function meta({ loaderData }: Route.MetaArgs) {
 
 export default function Workbench({ loaderData, actionData }: Route.ComponentProps) {
   const { me, quickFindCacheKey } = loaderData;
-  const { view: initial, history } = useMemo(() => fromPayload(loaderData.page), [loaderData.page]);
+  const initial = loaderData.view as CaseView;
   const id = initial.case.id;
   const query = useQuery({ ...caseQuery(id), initialData: initial });
   const view = query.data ?? initial;
@@ -149,7 +147,7 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
           <div className="grid content-start gap-4">
             {ranking}
             {conclusion}
-            <CaseHistory entries={history} />
+            <CaseHistory caseId={c.id} />
           </div>
         </div>
       ) : (
@@ -161,7 +159,7 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
           <div className="grid content-start gap-4">
             {me.canWork ? <CheckPlan plan={d.plan} currency={c.workshop.currency} units={units} record={record} busy={evidence.isPending} error={planError} errorFor={errorFor} /> : null}
             {conclusion}
-            <CaseHistory entries={history} />
+            <CaseHistory caseId={c.id} />
           </div>
         </div>
       )}

@@ -1,14 +1,14 @@
 // GET /api/cases/:caseId and …/diagnosis: who gets the case, and what the refusals look like.
 import { randomUUID } from "node:crypto";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { members } from "~/db/schema";
+import { checks, members } from "~/db/schema";
 import { loader as caseLoader } from "~/routes/api/case";
 import { loader as diagnosisLoader } from "~/routes/api/diagnosis";
-import { loader as findingsLoader } from "~/routes/api/findings";
+import { action as findingsAction, loader as findingsLoader } from "~/routes/api/findings";
 import { seedId } from "../../../seeds/ids";
 import { testDb } from "../../setup/integration-worker";
-import { caseId, cookieFor, isCleanError, request, run, symptomId } from "./helpers";
+import { caseId, cookieFor, freshCase, isCleanError, memberFor, request, run, symptomId } from "./helpers";
 
 const get = async (id: string, cookie: string | null) => run(caseLoader, testDb(), request(`/api/cases/${id}`, { cookie }), { caseId: id });
 
@@ -99,10 +99,27 @@ describe("GET /api/cases/:caseId/diagnosis", () => {
   });
 });
 
-describe("GET on an evidence collection", () => {
-  it("answers 405 and points to the case endpoint", async () => {
-    const res = findingsLoader();
-    expect(res.status).toBe(405);
-    expect(((await res.json()) as { error: string }).error).toMatch(/GET \/api\/cases\/:caseId/);
+describe("a case's findings", () => {
+  it("the case view carries the latest ten and their total; GET …/findings lists every one, in order", async () => {
+    const priya = await cookieFor(testDb(), "priya-hale");
+    const id = await freshCase(testDb());
+    const member = await memberFor(testDb(), "priya-hale");
+    const ids = (await testDb().select({ id: checks.id }).from(checks).where(and(eq(checks.workshopId, member.workshopId), eq(checks.resultKind, "pass_fail"))).orderBy(checks.id).limit(14)).map((k) => k.id);
+    for (const checkId of ids) await run(findingsAction, testDb(), request(`/api/cases/${id}/findings`, { cookie: priya, json: { checkId, result: "pass" } }), { caseId: id });
+    const view = await run(caseLoader, testDb(), request(`/api/cases/${id}`, { cookie: priya }), { caseId: id });
+    const c = view.body.case as { findings: { checkId: string }[]; findingCount: number };
+    expect(c.findingCount).toBe(14);
+    expect(c.findings.map((f) => f.checkId)).toEqual(ids.slice(-10));
+    const all = await run(findingsLoader, testDb(), request(`/api/cases/${id}/findings`, { cookie: priya }), { caseId: id });
+    expect(all.status).toBe(200);
+    expect((all.body.findings as { checkId: string }[]).map((f) => f.checkId)).toEqual(ids);
+  });
+
+  it("refuses another workshop's case with 404 and an item id with 405", async () => {
+    const rowan = await cookieFor(testDb(), "rowan-quill");
+    const other = await run(findingsLoader, testDb(), request(`/api/cases/${caseId("b1")}/findings`, { cookie: rowan }), { caseId: caseId("b1") });
+    expect(other.status).toBe(404);
+    const item = await run(findingsLoader, testDb(), request(`/api/cases/${caseId("b1")}/findings/x`, { cookie: await cookieFor(testDb(), "priya-hale") }), { caseId: caseId("b1"), itemId: "x" });
+    expect(item.status).toBe(405);
   });
 });

@@ -1,6 +1,6 @@
 // Who may add and remove evidence through the API (docs/permissions.md): technicians and seniors
 // on any open case, an apprentice on the cases assigned to them and only checks within their
-// skill, advisors and admins never. Removal answers 204, an unknown item 404.
+// skill, advisors and admins never. Removal answers 200 with the re-ranked case, an unknown item 404.
 import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
@@ -83,12 +83,13 @@ describe("roles that never record evidence", () => {
 });
 
 describe("removing evidence", () => {
-  it("DELETE of an observation answers 204, removes it and writes an audit row", async () => {
+  it("DELETE of an observation answers 200 with the case without it, removes it and writes an audit row", async () => {
     const added = await as("priya-hale", "observations", caseId("b1"), obs("pull_braking"));
     const id = added.body.id as string;
     const before = await snapshot(testDb(), caseId("b1"));
     const a = await as("priya-hale", "observations", caseId("b1"), { method: "DELETE" }, id);
-    expect(a.status).toBe(204);
+    expect(a.status).toBe(200);
+    expect(JSON.stringify(a.body.view)).not.toContain(id);
     expect(await testDb().select().from(observations).where(eq(observations.id, id))).toEqual([]);
     const after = await snapshot(testDb(), caseId("b1"));
     expect(after.observations).toBe(before.observations - 1);
@@ -96,11 +97,12 @@ describe("removing evidence", () => {
     expect(rows).toHaveLength(1);
   });
 
-  it("DELETE of a finding answers 204 and removes it", async () => {
+  it("DELETE of a finding answers 200 with the case without it, and removes it", async () => {
     const added = await as("priya-hale", "findings", caseId("b1"), pass("brake_road_test"));
     expect(added.status).toBe(201);
     const a = await as("priya-hale", "findings", caseId("b1"), { method: "DELETE" }, added.body.id as string);
-    expect(a.status).toBe(204);
+    expect(a.status).toBe(200);
+    expect(JSON.stringify(a.body.view)).not.toContain(added.body.id as string);
     expect(await testDb().select().from(findings).where(eq(findings.id, added.body.id as string))).toEqual([]);
     // Gone, so the same check may be recorded again.
     expect((await as("priya-hale", "findings", caseId("b1"), pass("brake_road_test"))).status).toBe(201);

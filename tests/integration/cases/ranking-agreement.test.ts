@@ -1,5 +1,6 @@
 // The likely causes the API shows for a case are the reasoning core's rankCauses on the same
 // evidence and the same model: nothing is lost or reordered between the database and the screen.
+import { SENT_CAUSES } from "~/cases/shown";
 import { beforeAll, describe, expect, it } from "vitest";
 import { buildModel, vehicleFacts } from "~/kb/model";
 import { loadCase } from "~/cases/case.server";
@@ -35,8 +36,8 @@ const evidenceFrom = (c: ApiCase): Evidence => ({
 });
 
 function expectSameRanking(shown: ApiCase["diagnosis"], ranking: ReturnType<typeof rankCauses>) {
-  // The API sends the 30 most likely causes (the screen shows five); they are the same, in the same order.
-  expect(shown.causes.length).toBe(Math.min(30, ranking.causes.length));
+  // The API sends the SENT_CAUSES most likely causes (the screen shows five); they are the same, in the same order.
+  expect(shown.causes.length).toBe(Math.min(SENT_CAUSES, ranking.causes.length));
   expect(shown.causes.map((c) => c.id)).toEqual(ranking.causes.slice(0, shown.causes.length).map((c) => c.id));
   const mine = new Map(ranking.causes.map((c) => [c.id, c.probability]));
   for (const c of shown.causes) expect(Math.abs(c.probability - mine.get(c.id)!), c.id).toBeLessThanOrEqual(1e-12);

@@ -4,17 +4,21 @@
 import { act, fireEvent, render, screen, within } from "@testing-library/react";
 import { hydrateRoot } from "react-dom/client";
 import { renderToString } from "react-dom/server";
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { describe, expect, it, vi } from "vitest";
 import { CheckPlan } from "~/components/case/check-plan";
 import { LikelyCauses } from "~/components/case/likely-causes";
 import { Fold } from "~/components/fold";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 
+/** Components that read through React Query need its client, as the app's root gives them. */
+const renderWithQuery = (ui: React.ReactElement) => render(<QueryClientProvider client={new QueryClient()}>{ui}</QueryClientProvider>);
+
 type Step = Diagnosis["plan"]["steps"][number];
 const cause = (n: number, probability: number) => ({ id: `c${n}`, name: `Cause ${n}`, probability, priority: null, why: [{ label: `Evidence for ${n}`, recorded: "present", weight: 1.5 }] });
 const step = (n: number, cautions: string[] = []): Step => ({
-  checkId: `k${n}`, name: `Check ${n}`, pFind: 0.5 / n, cost: 10 * n, ratio: 0.05 / n, skill: "technician", pReached: 1, minutes: 10,
-  tools: [], access: [], cautions, instructions: [`Do step ${n}`], resultKind: "pass_fail", unit: null, rule: null, failMeans: `Fault ${n}`,
+  checkId: `k${n}`, name: `Check ${n}`, pFind: 0.5 / n, cost: 10 * n, skill: "technician", minutes: 10,
+  tools: [], access: [], cautions, instructions: [`Do step ${n}`], resultKind: "pass_fail", unit: null, limit: null, detailed: true, failMeans: `Fault ${n}`,
 });
 const plan = (steps: Step[]): Diagnosis["plan"] => ({ steps, moreSteps: 0, aboveSkill: [], expectedCost: 20, cheapestFirstExpectedCost: 25, saving: 5, whatIf: null });
 
@@ -33,7 +37,7 @@ describe("likely causes", () => {
 
 describe("check plan", () => {
   it("shows every offered check's cautions in full and folds only the later checks' instructions", () => {
-    render(<CheckPlan plan={plan([step(1, ["lifting"]), step(2, ["hot_parts"])])} currency="GBP" units="metric" record={vi.fn()} busy={false} error={null} errorFor={() => null} />);
+    renderWithQuery(<CheckPlan plan={plan([step(1, ["lifting"]), step(2, ["hot_parts"])])} currency="GBP" units="metric" record={vi.fn()} busy={false} error={null} errorFor={() => null} />);
     const [first, second] = screen.getAllByRole("listitem").filter((li) => li.hasAttribute("data-step"));
     expect(within(first).getByText(/never work under a car held only by a jack/)).toBeTruthy();
     expect(within(first).getByText("Do step 1")).toBeTruthy();
@@ -48,7 +52,7 @@ describe("check plan", () => {
 
   it("shows the cautions of a check that has no instructions", () => {
     const bare = { ...step(2, ["high_voltage"]), instructions: [] };
-    render(<CheckPlan plan={plan([step(1), bare])} currency="GBP" units="metric" record={vi.fn()} busy={false} error={null} errorFor={() => null} />);
+    renderWithQuery(<CheckPlan plan={plan([step(1), bare])} currency="GBP" units="metric" record={vi.fn()} busy={false} error={null} errorFor={() => null} />);
     const second = screen.getAllByRole("listitem").filter((li) => li.hasAttribute("data-step"))[1];
     expect(within(second).getByRole("note", { name: "Cautions" }).textContent).toMatch(/only trained and authorised people/);
   });

@@ -3,6 +3,7 @@
 // The why says what was recorded and which way it pushes.
 import { fireEvent, render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { describe, expect, it, vi } from "vitest";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 import { vehicleLine } from "~/components/case/case-header";
@@ -10,16 +11,19 @@ import { undoOf, type CaseView } from "~/cases/case-queries";
 import { CheckPlan, needsLine } from "~/components/case/check-plan";
 import { LikelyCauses } from "~/components/case/likely-causes";
 
+/** Components that read through React Query need its client, as the app's root gives them. */
+const renderWithQuery = (ui: React.ReactElement) => render(<QueryClientProvider client={new QueryClient()}>{ui}</QueryClientProvider>);
+
 type Step = Diagnosis["plan"]["steps"][number];
 const step = (n: number, extra: Partial<Step> = {}): Step => ({
-  checkId: `k${n}`, name: `Check ${n}`, pFind: 0.5 / n, cost: 10 * n, ratio: 0.05 / n, skill: "technician", pReached: 1, minutes: 10,
-  tools: [], access: [], cautions: [], instructions: [], resultKind: "pass_fail", unit: null, rule: null, failMeans: "", ...extra,
+  checkId: `k${n}`, name: `Check ${n}`, pFind: 0.5 / n, cost: 10 * n, skill: "technician", minutes: 10,
+  tools: [], access: [], cautions: [], instructions: [], resultKind: "pass_fail", unit: null, limit: null, detailed: true, failMeans: "", ...extra,
 });
 const plan = (steps: Step[]): Diagnosis["plan"] => ({ steps, moreSteps: 0, aboveSkill: [], expectedCost: 20, cheapestFirstExpectedCost: 25, saving: 5, whatIf: null });
 
 function renderPlan(steps: Step[], errorFor: (id: string) => string | null = () => null) {
   const record = vi.fn();
-  render(
+  renderWithQuery(
     <div>
       <p tabIndex={-1}>page</p>
       <CheckPlan plan={plan(steps)} currency="GBP" units="imperial" record={record} busy={false} error={null} errorFor={errorFor} />
@@ -56,6 +60,24 @@ describe("keys on the check plan", () => {
     expect(record.mock.calls[0][1]).toEqual({ result: "fail" });
   });
 
+  it("folds the offered checks after the third to one line; one opens before it can be recorded, cautions first", async () => {
+    const user = userEvent.setup();
+    const steps = [1, 2, 3, 4].map((n) => step(n, n === 4 ? { cautions: ["lifting"] } : {}));
+    const { record, items } = renderPlan(steps);
+    expect(within(items[3]).queryByRole("button", { name: "Passed" })).toBeNull();
+    expect(within(items[3]).queryByRole("note", { name: "Cautions" })).toBeNull();
+    expect(items[3].textContent).toMatch(/needs care/);
+    items[3].focus();
+    await user.keyboard("p");
+    expect(record).not.toHaveBeenCalled();
+    // Opened in place, with the focus still on it.
+    expect(document.activeElement).toBe(items[3]);
+    expect(within(items[3]).getByRole("note", { name: "Cautions" }).textContent).toMatch(/never work under a car held only by a jack/);
+    await user.keyboard("p{Enter}");
+    expect(record).toHaveBeenCalledTimes(1);
+    expect(record.mock.calls[0][0].checkId).toBe("k4");
+  });
+
   it("Alt+N moves to the next check but records nothing", async () => {
     const user = userEvent.setup();
     const { record, items } = renderPlan([step(1)]);
@@ -66,7 +88,7 @@ describe("keys on the check plan", () => {
   });
 
   it("shows a reading's error at its own field, and the limit in the workshop's units", () => {
-    const measured = step(1, { resultKind: "measurement", rule: "value <= 0.05 mm", unit: "mm" });
+    const measured = step(1, { resultKind: "measurement", limit: "at most 0.00197 in (0.05 mm)", unit: "mm" }); // as the server words "value <= 0.05 mm" for imperial
     const { items } = renderPlan([measured, step(2)], (id) => (id === "k1" ? "That reading is in kPa; this check needs a length, such as 0.05 mm." : null));
     const field = within(items[0]).getByRole("textbox");
     expect(field.getAttribute("placeholder")).toBe("limit: at most 0.00197 in (0.05 mm)");

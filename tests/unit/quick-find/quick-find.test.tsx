@@ -6,7 +6,12 @@ import { QuickFind } from "~/components/quick-find/quick-find";
 import type { Entry } from "~/quick-find";
 import { allEntries } from "./fixtures";
 
-const openWithCtrlK = () => fireEvent.keyDown(window, { key: "k", ctrlKey: true });
+const pressCtrlK = () => fireEvent.keyDown(window, { key: "k", ctrlKey: true });
+/** Ctrl+K, then the palette's code loads (it is split off: nothing of it ships with the page). */
+const openWithCtrlK = async () => {
+  pressCtrlK();
+  await screen.findByRole("dialog");
+};
 const input = () => screen.getByRole("combobox", { name: "Quick find" });
 const type = (text: string) => fireEvent.change(input(), { target: { value: text } });
 const options = () => screen.getAllByRole("option");
@@ -19,25 +24,39 @@ function setup(extra: Partial<React.ComponentProps<typeof QuickFind>> = {}) {
 }
 
 describe("Quick find palette", () => {
-  it("opens with Ctrl+K as a dialog labelled “Quick find” with a labelled input", () => {
+  it("keeps what is typed straight after Ctrl+K, while its code loads, and lets none of it reach the page", async () => {
+    setup();
+    const reachedPage = vi.fn();
+    document.body.addEventListener("keydown", reachedPage);
+    // The first test of the file: the palette's code has not been loaded yet.
+    pressCtrlK();
+    for (const key of "judderx") fireEvent.keyDown(document.body, { key });
+    fireEvent.keyDown(document.body, { key: "Backspace" });
+    await screen.findByRole("dialog");
+    expect((input() as HTMLInputElement).value).toBe("judder");
+    expect(reachedPage).not.toHaveBeenCalled();
+    document.body.removeEventListener("keydown", reachedPage);
+  });
+
+  it("opens with Ctrl+K as a dialog labelled “Quick find” with a labelled input", async () => {
     setup();
     expect(screen.queryByRole("dialog")).toBeNull();
-    openWithCtrlK();
+    await openWithCtrlK();
     expect(screen.getByRole("dialog", { name: "Quick find" })).toBeTruthy();
     expect(document.activeElement).toBe(input());
   });
 
-  it("also opens from its visible button, which shows the shortcut", () => {
+  it("also opens from its visible button, which shows the shortcut", async () => {
     setup();
     const button = screen.getByRole("button", { name: /quick find/i });
     expect(button.textContent).toMatch(/K/);
     fireEvent.click(button);
-    expect(screen.getByRole("dialog", { name: "Quick find" })).toBeTruthy();
+    expect(await screen.findByRole("dialog", { name: "Quick find" })).toBeTruthy();
   });
 
-  it("puts the braking vibration first, under the Symptoms heading, and Enter adds it as present", () => {
+  it("puts the braking vibration first, under the Symptoms heading, and Enter adds it as present", async () => {
     const onPick = setup();
-    openWithCtrlK();
+    await openWithCtrlK();
     type("judder when braking");
     expect(options()[0].textContent).toContain("Vibration through the steering wheel under braking");
     expect(selected()).toBe(options()[0]);
@@ -51,9 +70,9 @@ describe("Quick find palette", () => {
     expect(screen.getByRole("status").textContent).toMatch(/as present/);
   });
 
-  it("adds the highlighted symptom as absent with Shift+Enter, following the arrow keys", () => {
+  it("adds the highlighted symptom as absent with Shift+Enter, following the arrow keys", async () => {
     const onPick = setup();
-    openWithCtrlK();
+    await openWithCtrlK();
     type("pulls left");
     const second = options()[1];
     fireEvent.keyDown(input(), { key: "ArrowDown" });
@@ -64,18 +83,18 @@ describe("Quick find palette", () => {
     expect(onPick.mock.calls[0][1]).toEqual({ present: false });
   });
 
-  it("adds as absent from the row's Absent chip, for a tap with no keyboard", () => {
+  it("adds as absent from the row's Absent chip, for a tap with no keyboard", async () => {
     const onPick = setup();
-    openWithCtrlK();
+    await openWithCtrlK();
     type("squeal brake");
     fireEvent.click(within(options()[0]).getByText("Absent"));
     expect(onPick).toHaveBeenCalledTimes(1);
     expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ id: "squeal_braking" }), { present: false }]);
   });
 
-  it("jumps to a vehicle with Enter and closes", () => {
+  it("jumps to a vehicle with Enter and closes", async () => {
     const onPick = setup();
-    openWithCtrlK();
+    await openWithCtrlK();
     type("DEMO 101");
     expect(screen.getByText("Vehicles")).toBeTruthy();
     fireEvent.keyDown(input(), { key: "Enter" });
@@ -83,24 +102,24 @@ describe("Quick find palette", () => {
     expect(screen.queryByRole("dialog")).toBeNull();
   });
 
-  it("shows recent items first when the box is empty", () => {
+  it("shows recent items first when the box is empty", async () => {
     setup({ recentIds: ["clunk_front_bumps", "b1"] });
-    openWithCtrlK();
+    await openWithCtrlK();
     expect(screen.getByText("Recent")).toBeTruthy();
     expect(options()[0].textContent).toContain("Clunk from the front over bumps");
     expect(options()[1].textContent).toContain("#1041");
   });
 
-  it("closes with Escape; Ctrl+K pressed again keeps it open, with the typing in its box", () => {
+  it("closes with Escape; Ctrl+K pressed again keeps it open, with the typing in its box", async () => {
     setup();
-    openWithCtrlK();
+    await openWithCtrlK();
     fireEvent.keyDown(input(), { key: "Escape" });
     expect(screen.queryByRole("dialog")).toBeNull();
-    openWithCtrlK();
+    await openWithCtrlK();
     expect(screen.getByRole("dialog")).toBeTruthy();
     fireEvent.change(input(), { target: { value: "clunk" } });
     (document.activeElement as HTMLElement | null)?.blur();
-    openWithCtrlK();
+    pressCtrlK();
     expect(screen.getByRole("dialog")).toBeTruthy();
     expect(document.activeElement).toBe(input());
     expect((input() as HTMLInputElement).value).toBe("clunk");
@@ -110,8 +129,9 @@ describe("Quick find palette", () => {
     const loader = vi.fn(async () => allEntries);
     setup({ entries: loader });
     expect(loader).not.toHaveBeenCalled();
-    openWithCtrlK();
+    await openWithCtrlK();
     await act(async () => {});
+    await screen.findAllByRole("option");
     expect(loader).toHaveBeenCalledTimes(1);
     type("drinks fuel");
     expect(options()[0].textContent).toContain("High fuel consumption");

@@ -1,0 +1,129 @@
+// Quick find's palette: the dialog, its search and its list. Loaded the first time the palette
+// opens (quick-find.tsx holds the button and the shortcut), so pages ship neither cmdk nor the
+// index builder until someone wants them. cmdk draws the list and handles the arrow keys; ranking
+// is ours (app/quick-find), so cmdk's own filter is off.
+import { Command } from "cmdk";
+import { type RefObject, useCallback, useEffect, useMemo, useState } from "react";
+import { type Entry, type EntryKind, GROUP_HEADING, search } from "~/quick-find";
+import { itemValue, ResultRow } from "./result-row";
+import { type EntrySource, useQuickFindIndex } from "./use-index";
+
+
+export type QuickFindPick = { present?: boolean };
+
+export type QuickFindProps = {
+  /** The entries, or a loader called the first time the palette opens. Keep the array stable
+   *  across renders (or pass cacheKey): a new array means a new index. */
+  entries: EntrySource;
+  /** Shares the built index across mounts, e.g. quickFindKey(workshopId, kbVersion). */
+  cacheKey?: string;
+  recentIds?: readonly string[];
+  kinds?: readonly EntryKind[];
+  limit?: number;
+  /** A symptom comes with present: true or false; anything else is a jump to that item. */
+  onPick: (entry: Entry, pick: QuickFindPick) => void;
+  placeholder?: string;
+};
+
+type PaletteProps = QuickFindProps & {
+  open: boolean;
+  onOpenChange: (open: boolean) => void;
+  inputRef: RefObject<HTMLInputElement | null>;
+  /** What was typed while the palette's code was loading; taken over (and emptied) once it is here. */
+  typedAhead: RefObject<string>;
+  onReady: () => void;
+};
+
+const KBD = "rounded border border-rule bg-paper px-1.5 font-sans text-base text-graphite-700";
+const GROUP = "[&_[cmdk-group-heading]]:px-3 [&_[cmdk-group-heading]]:pt-3 [&_[cmdk-group-heading]]:pb-1 [&_[cmdk-group-heading]]:text-base [&_[cmdk-group-heading]]:font-semibold [&_[cmdk-group-heading]]:text-graphite-600";
+
+export default function QuickFindPalette(props: PaletteProps) {
+  const { entries, cacheKey, recentIds, kinds, limit, onPick, placeholder, open, inputRef } = props;
+  const [query, setQuery] = useState("");
+  // The keys pressed between Ctrl+K and this code arriving belong in the box, not on the page.
+  useEffect(() => {
+    if (props.typedAhead.current) setQuery(props.typedAhead.current);
+    props.typedAhead.current = "";
+    inputRef.current?.focus();
+    props.onReady();
+  }, []);
+  const [selection, setSelection] = useState<{ query: string; value: string } | null>(null);
+  const [added, setAdded] = useState<string | null>(null);
+  const setOpen = useCallback(
+    (next: boolean) => {
+      if (!next) (setQuery(""), setAdded(null));
+      props.onOpenChange(next);
+    },
+    [props.onOpenChange],
+  );
+
+  // Mounted only once wanted: the index is built from the first open on.
+  const { index, loading, error } = useQuickFindIndex(entries, cacheKey, true);
+  const groups = useMemo(() => (index ? search(index, query, { recentIds, kinds, limit }) : []), [index, query, recentIds, kinds, limit]);
+  const visible = useMemo(() => groups.flatMap((g) => g.items.map((i) => i.entry)), [groups]);
+  // The highlight follows the user's arrows within one query and returns to the top on a new one.
+  const picked = selection?.query === query ? visible.find((e) => itemValue(e) === selection.value) : undefined;
+  const current = picked ?? visible[0];
+
+  const choose = (entry: Entry, present: boolean | undefined) => {
+    if (entry.kind === "symptom") {
+      onPick(entry, { present: present ?? true });
+      // Stay open: a technician usually adds several symptoms in a row.
+      setAdded(`Added “${entry.title}” as ${present === false ? "absent" : "present"}.`);
+      setQuery("");
+      return;
+    }
+    onPick(entry, {});
+    setOpen(false);
+  };
+
+  return (
+    <>
+      <Command.Dialog
+        open={open}
+        onOpenChange={setOpen}
+        label="Quick find"
+        shouldFilter={false}
+        vimBindings={false}
+        loop
+        value={current ? itemValue(current) : ""}
+        onValueChange={(value) => setSelection({ query, value })}
+        onKeyDown={(e) => {
+          // Shift+Enter adds the highlighted symptom as absent; cmdk leaves prevented keys alone.
+          if (e.key !== "Enter" || !e.shiftKey || !current) return;
+          e.preventDefault();
+          choose(current, current.kind === "symptom" ? false : undefined);
+        }}
+        overlayClassName="fixed inset-0 bg-graphite-950/40"
+        contentClassName="fixed left-1/2 top-[8vh] w-[min(42rem,calc(100vw-1.5rem))] -translate-x-1/2 overflow-hidden rounded-card border border-rule bg-card text-base text-graphite-900 shadow-xl"
+      >
+        {/* cmdk names the input after the dialog's label ("Quick find") through its own hidden label. */}
+        <Command.Input
+          ref={inputRef}
+          value={query}
+          onValueChange={setQuery}
+          placeholder={placeholder ?? "Symptom, cause, check, registration, VIN or #case"}
+          className="min-h-tap w-full border-b border-rule bg-transparent px-4 py-3 text-lg outline-none placeholder:text-graphite-600"
+        />
+        <Command.List className="max-h-[60vh] overflow-y-auto p-2" aria-describedby="quick-find-keys">
+          {loading ? <Command.Loading label="Loading Quick find">Loading…</Command.Loading> : null}
+          {error ? <p className="px-3 py-2 text-stop">{error}</p> : null}
+          {index && query.trim() ? <Command.Empty className="px-3 py-2 text-graphite-600">Nothing found. Try another word, a registration or a case number.</Command.Empty> : null}
+          {groups.map((g) => (
+            <Command.Group key={g.kind} heading={GROUP_HEADING[g.kind]} className={GROUP}>
+              {g.items.map(({ entry }) => (
+                <ResultRow key={itemValue(entry)} entry={entry} onChoose={choose} />
+              ))}
+            </Command.Group>
+          ))}
+        </Command.List>
+        <footer id="quick-find-keys" className="flex flex-wrap items-center gap-x-4 gap-y-1 border-t border-rule px-4 py-2 text-base text-graphite-600">
+          <span><kbd className={KBD}>Enter</kbd> add as present / open</span>
+          <span><kbd className={KBD}>Shift</kbd>+<kbd className={KBD}>Enter</kbd> add as absent</span>
+          <span><kbd className={KBD}>Esc</kbd> close</span>
+        </footer>
+        <p role="status" className="px-4 pb-2 text-base text-graphite-700 empty:hidden">{added}</p>
+      </Command.Dialog>
+    </>
+  );
+}
