@@ -22,9 +22,16 @@ export const SYSTEM_LABEL: Record<string, string> = {
 };
 const systemLabel = (s: string | undefined) => (s ? (SYSTEM_LABEL[s] ?? s.replace(/_/g, " ")) : undefined);
 
-export type SymptomRow = Identified & { name: string; synonyms?: readonly string[]; conditions?: readonly string[]; system?: string };
+export type SymptomRow = Identified & {
+  name: string;
+  synonyms?: readonly string[];
+  conditions?: readonly string[];
+  system?: string;
+  kind?: string; // "trouble_code" with no code: the generic "trouble code stored" symptom
+  code?: string | null; // a trouble-code symptom's code
+};
 export type CauseRow = Identified & { name: string; system?: string; level?: string; parentName?: string };
-export type CheckRow = Identified & { name: string; tools?: readonly string[]; minutes?: number };
+export type CheckRow = Identified & { name: string; tools?: readonly string[]; minutes?: number; instructions?: readonly string[] };
 export type VehicleRow = { id: string; registration: string; vin?: string | null; make?: string; model?: string; year?: number; ownerName?: string };
 export type CaseRow = { id: string; number: number; registration?: string; vehicle?: string; complaint?: string; ownerName?: string };
 
@@ -37,6 +44,7 @@ export function symptomEntry(s: SymptomRow): Entry {
     subtitle: [systemLabel(s.system), conditions.join(", ")].filter(Boolean).join(" · ") || undefined,
     // Conditions are part of what the symptom means: "under braking" must find it from "brake".
     keywords: [...(s.synonyms ?? []), ...conditions],
+    ...(s.code ? { dtc: s.code.toUpperCase() } : s.kind === "trouble_code" ? { anyDtc: true } : {}),
   };
 }
 
@@ -49,7 +57,8 @@ export function causeEntry(c: CauseRow): Entry {
 
 export function checkEntry(c: CheckRow): Entry {
   const minutes = c.minutes !== undefined ? `${c.minutes} min` : undefined;
-  return { kind: "check", id: idOf(c), title: c.name, subtitle: minutes, keywords: [...(c.tools ?? [])] };
+  // The steps find the check by what is done in it ("rock at 12 and 6 o'clock").
+  return { kind: "check", id: idOf(c), title: c.name, subtitle: minutes, keywords: [...(c.tools ?? [])], ...(c.instructions?.length ? { details: [...c.instructions] } : {}) };
 }
 
 export function vehicleEntry(v: VehicleRow): Entry {
