@@ -56,7 +56,7 @@ export const THESAURUS = compileThesaurus(SYNONYM_GROUPS);
 /** The concept of one word, as written or by its stem. */
 export const conceptOf = (w: string, th: Thesaurus = THESAURUS): string | null => th.wordConcept.get(w) ?? th.wordConcept.get(porterStem(w)) ?? null;
 
-function phraseAt(ws: string[], i: number, th: Thesaurus): Phrase | null {
+function matchAt(ws: string[], i: number, th: Thesaurus): Phrase | null {
   for (const p of th.phrasesByFirst.get(porterStem(ws[i])) ?? []) {
     if (i + p.words.length > ws.length) continue;
     let ok = true;
@@ -66,7 +66,28 @@ function phraseAt(ws: string[], i: number, th: Thesaurus): Phrase | null {
   return null;
 }
 
-export type Analysis = { tokens: Token[]; negated: boolean };
+function phraseAt(ws: string[], i: number, th: Thesaurus): Phrase | null {
+  const p = matchAt(ws, i, th);
+  // A phrase that starts with a negation ("no power") yields to a longer phrase that starts on its
+  // second word ("power steering"): "no power steering light" is the lamp, absent.
+  if (p && NEGATIONS.has(ws[i]) && i + 1 < ws.length) {
+    const next = matchAt(ws, i + 1, th);
+    if (next && i + 1 + next.words.length > i + p.words.length) return null;
+  }
+  return p;
+}
+
+/**
+ * Words that say a thing works, not that it is faulty: "no problem opening it from the outside",
+ * "fine under braking", and a negated fault word ("the other windows aren't dead"). A complaint
+ * saying so offers every symptom as absent.
+ */
+const ALL_WELL: ReadonlySet<string> = new Set(["fine", "ok", "okay", "normal", "normally"]);
+/** After a negation these say "it works": fillers ("no problem") are dropped, fault words ("isn't dead") kept for matching. */
+const NO_FAULT_FILLERS: ReadonlySet<string> = new Set(["problem", "problems", "trouble", "issue", "issues", "bother"]);
+const FAULT_WORDS: ReadonlySet<string> = new Set(["dead", "broken"]);
+
+export type Analysis = { tokens: Token[]; negated: boolean; allWell: boolean };
 
 /**
  * Words that start a new clause. A negation counts only in the first clause, the complaint
@@ -83,6 +104,7 @@ const CLAUSE_BREAKS: ReadonlySet<string> = new Set(["but", "and", "though", "alt
 export function analyseWithPolarity(ws: string[], th: Thesaurus = THESAURUS): Analysis {
   const tokens: Token[] = [];
   let negated = false;
+  let allWell = false;
   let firstClause = true;
   for (let i = 0; i < ws.length; ) {
     const p = phraseAt(ws, i, th);
@@ -96,6 +118,14 @@ export function analyseWithPolarity(ws: string[], th: Thesaurus = THESAURUS): An
     const w = ws[i++];
     if (NEGATIONS.has(w)) {
       if (firstClause) negated = true;
+      // "no problem …", "isn't dead": the thing works
+      const next = ws[i] ?? "";
+      if (firstClause && (NO_FAULT_FILLERS.has(next) || FAULT_WORDS.has(next))) allWell = true;
+      if (NO_FAULT_FILLERS.has(next)) i++;
+      continue;
+    }
+    if (ALL_WELL.has(w)) {
+      if (firstClause) allWell = true;
       continue;
     }
     // A break only after some content: "and no squeal" still starts with its complaint.
@@ -106,7 +136,7 @@ export function analyseWithPolarity(ws: string[], th: Thesaurus = THESAURUS): An
     if (!firstClause) t.later = true;
     tokens.push(t);
   }
-  return { tokens, negated };
+  return { tokens, negated, allWell };
 }
 
 export const analyseWords = (ws: string[], th: Thesaurus = THESAURUS): Token[] => analyseWithPolarity(ws, th).tokens;

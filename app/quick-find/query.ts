@@ -31,6 +31,8 @@ export type ParsedQuery = {
   caseNumber: boolean;
   /** The query says a symptom is not there: "no grinding", "doesn't pull". */
   negated: boolean;
+  /** The query says something works: "no problem opening it", "fine under braking". Every symptom is offered as absent. */
+  allWell: boolean;
   /** Conditions the query names ("when braking" → braking). */
   conditions: Condition[];
   /** Valid SAE J2012 trouble codes typed in the query, upper case, in order. */
@@ -41,7 +43,7 @@ const CODE_SHAPE = /^[pcbu][0-9a-f]{4}$/;
 
 export function parseQuery(raw: string): ParsedQuery {
   const ws = words(raw);
-  const { tokens: analysed, negated } = analyseWithPolarity(ws);
+  const { tokens: analysed, negated, allWell } = analyseWithPolarity(ws);
   const typing = ws.length > 0 && !/\s$/.test(raw);
   const lastWord = ws[ws.length - 1];
   const tokens = analysed.map((t, i): QueryToken => ({
@@ -70,6 +72,7 @@ export function parseQuery(raw: string): ParsedQuery {
     typing: stillTyping,
     caseNumber: /^\s*#\s*\d/.test(raw),
     negated,
+    allWell,
     conditions: conditionsOf(analysed),
     codes,
   };

@@ -180,21 +180,26 @@ function nameBonus(index: QuickFindIndex, d: number, q: ParsedQuery): number {
 
 /**
  * Whether a symptom is offered as present. A negative query ("no grinding", "doesn't pull") offers
- * a symptom as absent unless the entry phrase it is closest to (most token keys in common, the
+ * a symptom as absent unless the entry phrase it is closest to (by token keys in common, the
  * name first on a tie) is negative too: "door won't open" against "Door will not open …" is
  * present. A positive query is always present: "horn stopped working" means "Horn does not sound".
  */
 export function presentFor(index: QuickFindIndex, d: number, query: ParsedQuery): boolean | undefined {
   const fields = index.polarity[d];
   if (!fields) return undefined;
+  if (query.allWell) return false;
   if (!query.negated) return true;
   if (fields.length === 0) return false;
+  // Closest by Jaccard similarity of token keys, so a short synonym said in full ("handbrake won't
+  // release") beats a long name that shares as many words.
   let best = fields[0];
-  let bestOverlap = -1;
+  let bestScore = -1;
+  const q = new Set(query.keys);
   for (const f of fields) {
     let overlap = 0;
-    for (const k of query.keys) if (f.keys.has(k)) overlap++;
-    if (overlap > bestOverlap) [best, bestOverlap] = [f, overlap];
+    for (const k of q) if (f.keys.has(k)) overlap++;
+    const score = overlap / (q.size + f.keys.size - overlap || 1);
+    if (score > bestScore) [best, bestScore] = [f, score];
   }
   return best.negated;
 }

@@ -21,7 +21,7 @@ export const SYNONYM_GROUPS: SynonymGroup[] = [
   { concept: "click", members: ["click", "clicking", "clicks"] },
   { concept: "buzz", members: ["buzz", "buzzing", "tinny"] },
   { concept: "smell", members: ["smell", "smells", "smelly", "stink", "odour", "odor", "whiff"] },
-  { concept: "leak", members: ["leak", "leaking", "drip", "dripping", "drips", "puddle", "weep", "weeping"] },
+  { concept: "leak", members: ["leak", "leaking", "drip", "dripping", "drips", "puddle", "weep", "weeping", "patch", "patches", "stain", "on the floor", "on the ground", "on the drive"] },
   // Handling
   { concept: "pull", members: ["pull", "pulls", "pulling to", "drift", "drifts", "drifting", "veer", "veers", "veering", "wander", "wanders", "wandering", "tramlining"] },
   { concept: "misfire", members: ["misfire", "misfiring", "stutter", "stuttering", "hesitate", "hesitates", "hesitation", "hesitating", "splutter", "spluttering", "flat spot", "lumpy", "jerk", "jerks", "jerking", "jerky", "kangaroo"] },
@@ -61,6 +61,7 @@ export const SYNONYM_GROUPS: SynonymGroup[] = [
   { concept: "revs", members: ["revs", "rev", "rpm", "revving", "engine speed"] },
   { concept: "temperature", members: ["temperature", "temp"] },
   { concept: "gauge", members: ["gauge", "needle"] },
+  { concept: "power_steering", members: ["power steering", "power assisted steering", "steering assist"] },
   { concept: "switch", members: ["switch", "switches", "button", "buttons"] },
   { concept: "underneath", members: ["underneath", "underside", "beneath", "under the car", "from under"] },
   { concept: "dashboard", members: ["dash", "dashboard", "instrument panel", "clocks"] },

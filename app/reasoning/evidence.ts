@@ -8,12 +8,25 @@ import type { Evidence, Observation } from "./schema";
 
 export type EvidenceItem = {
   key: string; // "symptom:<id>" or "check:<id>": the key of this item in a cause's contributions
-  defaultLik: number; // for unlisted hypothesis and for leaves not in `leaves`
+  defaultLik: number; // for leaves not in `leaves`
+  unlistedLik: number; // for "not in the knowledge base"
   leaves: Int32Array;
   liks: Float64Array; // likelihood at leaves[j]
 };
 
-export function resolveEvidence(index: ModelIndex, evidence: Evidence, ownerReliability: number): EvidenceItem[] {
+/**
+ * P(symptom present | the fault is not in the knowledge base) = max(leak, ρ): a fault nobody has
+ * written down still shows itself, so it explains any symptom with at least ρ (the unlisted
+ * symptom rate), not only with the symptom's leak. A symptom may state its own figure instead
+ * (`own`, NaN when it has none). Absent: 1 − that. Checks are unchanged: under "not in the
+ * knowledge base" a check fails only by false alarm.
+ */
+export function unlistedSymptomLik(leak: number, rate: number, present: boolean, own = Number.NaN): number {
+  const p = Number.isNaN(own) ? Math.max(leak, rate) : own;
+  return present ? p : 1 - p;
+}
+
+export function resolveEvidence(index: ModelIndex, evidence: Evidence, ownerReliability: number, unlistedRate = 0): EvidenceItem[] {
   if (!evidence || !Array.isArray(evidence.observations) || !Array.isArray(evidence.findings)) {
     fail("INVALID_INPUT", "Evidence needs a list of observations and a list of findings.");
   }
@@ -22,6 +35,7 @@ export function resolveEvidence(index: ModelIndex, evidence: Evidence, ownerReli
     const s = index.symptomIndex.get(o.symptomId);
     if (s === undefined) fail("UNKNOWN_ID", `An observation names symptom "${o.symptomId}", which is not in the model.`);
     const item = expandItem(index, `symptom:${o.symptomId}`, index.leak[s], index.linkStart, index.linkNode, index.linkP, s, o.present);
+    item.unlistedLik = unlistedSymptomLik(index.leak[s], unlistedRate, o.present, index.unlistedP[s]);
     if ((o.source ?? "technician") === "owner") temperOwnerReport(index, item, ownerReliability);
     items.push(item);
   }
@@ -64,13 +78,15 @@ function expandItem(
     leaves[j] = ex.leafAt(j);
     liks[j] = positive ? ex.valueAt(j) : 1 - ex.valueAt(j);
   }
-  return { key, defaultLik: positive ? background : 1 - background, leaves, liks };
+  const defaultLik = positive ? background : 1 - background;
+  return { key, defaultLik, unlistedLik: defaultLik, leaves, liks };
 }
 
 // Owner report: P'(e|h) = r·P(e|h) + (1 − r)·P(e), with P(e) the chance of the report under the
 // prior. Mixing (rather than raising to a power) keeps a wrong owner report from ruling a cause
 // out entirely: P' is never 0 while P(e) > 0.
 function temperOwnerReport(index: ModelIndex, item: EvidenceItem, r: number): void {
+  const pU = index.prior[index.leafCount];
   let linkedMass = 0;
   let linkedLik = 0;
   for (let j = 0; j < item.leaves.length; j++) {
@@ -78,8 +94,9 @@ function temperOwnerReport(index: ModelIndex, item: EvidenceItem, r: number): vo
     linkedMass += w;
     linkedLik += w * item.liks[j];
   }
-  const marginal = Math.min(1, Math.max(0, item.defaultLik * (1 - linkedMass) + linkedLik));
+  const marginal = Math.min(1, Math.max(0, item.defaultLik * Math.max(0, 1 - linkedMass - pU) + linkedLik + pU * item.unlistedLik));
   item.defaultLik = r * item.defaultLik + (1 - r) * marginal;
+  item.unlistedLik = r * item.unlistedLik + (1 - r) * marginal;
   for (let j = 0; j < item.liks.length; j++) item.liks[j] = r * item.liks[j] + (1 - r) * marginal;
 }
 

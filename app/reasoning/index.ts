@@ -4,7 +4,7 @@ export { ModelSchema, EvidenceSchema, SkillSchema, SKILL_LEVELS, parseModel, par
 export type { Model, Evidence, Cause, Symptom, Link, Check, Observation, Finding, Skill } from "./schema";
 export { ReasoningError, REASONING_ERROR_CODES } from "./errors";
 export type { ReasoningErrorCode } from "./errors";
-export { DEFAULT_UNLISTED_PRIOR, DEFAULT_OWNER_RELIABILITY, DEFAULT_CHECK_SKILL } from "./options";
+export { DEFAULT_UNLISTED_PRIOR, DEFAULT_OWNER_RELIABILITY, DEFAULT_CHECK_SKILL, DEFAULT_UNLISTED_SYMPTOM_RATE } from "./options";
 export type { RankOptions, PlanOptions } from "./options";
 export { rankCauses, RankedCause } from "./rank";
 export type { Ranking } from "./rank";

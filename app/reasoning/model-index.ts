@@ -16,6 +16,7 @@ export type BaseIndex = {
   leafWeightSum: number;
   symptomIndex: Map<string, number>;
   leak: Float64Array;
+  unlistedP: Float64Array; // the symptom's own P(s | not in the knowledge base), NaN where it has none
   linkStart: Int32Array; // links of symptom s: linkNode/linkP[linkStart[s] .. linkStart[s+1])
   linkNode: Int32Array; // cause index (leaf or inner node)
   linkP: Float64Array;
@@ -48,11 +49,13 @@ export function buildIndex(model: Model): BaseIndex {
 
   const symptomIndex = new Map<string, number>();
   const leak = new Float64Array(model.symptoms.length);
+  const unlistedP = new Float64Array(model.symptoms.length).fill(Number.NaN);
   for (let i = 0; i < model.symptoms.length; i++) {
     const s = model.symptoms[i];
     if (symptomIndex.has(s.id)) fail("DUPLICATE_ID", `Two symptoms have the id "${s.id}".`);
     symptomIndex.set(s.id, i);
     leak[i] = checkProbability(s.leak, () => `The leak of symptom "${s.id}"`);
+    if (s.unlisted !== undefined) unlistedP[i] = checkProbability(s.unlisted, () => `P(${s.id} | not in the knowledge base)`);
   }
 
   const links = model.links ?? [];
@@ -113,6 +116,7 @@ export function buildIndex(model: Model): BaseIndex {
     leafWeightSum,
     symptomIndex,
     leak,
+    unlistedP,
     linkStart: link.start,
     linkNode: link.node,
     linkP: link.value,

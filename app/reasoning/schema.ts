@@ -22,6 +22,9 @@ export const SymptomSchema = z.object({
   id,
   leak: probability, // P(symptom | no listed cause)
   name: z.string().optional(),
+  // P(symptom | the fault is not in the knowledge base), where a curator knows better than the
+  // default max(leak, unlistedSymptomRate): a code the base does not list points outside it.
+  unlisted: probability.optional(),
 });
 
 export const LinkSchema = z.object({ symptomId: id, causeId: id, p: probability }); // P(symptom | cause)

@@ -20,9 +20,10 @@ export const troubleCodesOther: KnowledgeBaseSeed = {
     // Any other valid code lands here, the code itself kept with the observation: one symptom for
     // every code the base does not list by itself (chassis, body and network codes, bank-2 and
     // higher-cylinder engine codes). A code nobody has written down also hints at a fault outside
-    // the base, which is why its leak is higher than a listed code's.
+    // the base: its leak is higher than a listed code's, and a fault that is not in the base is
+    // taken to store such a code half the time (starter estimate).
     { key: "trouble_code_stored", name: "Trouble code stored that is not listed by itself", system: "engine_fuel_emissions", kind: "trouble_code",
-      synonyms: ["other trouble code", "unlisted fault code", "scan tool shows another code", "code not on the list"], conditions: ["in the fault memory"], leak: 0.05 },
+      synonyms: ["other trouble code", "unlisted fault code", "scan tool shows another code", "code not on the list"], conditions: ["in the fault memory"], leak: 0.05, unlisted: 0.5 },
   ],
   causes: [],
   checks: [],

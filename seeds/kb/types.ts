@@ -68,6 +68,9 @@ export type SymptomSeed = {
   code?: string; // kind "trouble_code" only, and required there: the code itself, upper case ("P0420")
   conditions: string[]; // "under braking", "over bumps", "cold start", "at idle", "cornering", "at speed"
   leak: number; // P(symptom | no listed cause) in [0, 1]
+  // P(symptom | the fault is not in the knowledge base), where it should differ from the engine's
+  // default max(leak, unlisted symptom rate): a starter estimate, as every figure here.
+  unlisted?: number;
 };
 
 export type Applicability = {

@@ -1,7 +1,8 @@
 // The starter knowledge base as the server would hand it to the reasoning core: seed rows as
 // knowledge rows (keys as ids), turned into a Model per vehicle by the app's own buildModel. The
 // optional fields the engine reads (a link's conditions, a bearing's graded figures) are carried
-// over from the seed; the server's loader will do the same once its tables hold them.
+// over from the seed (a symptom's P(s | not in the KB), a link's conditions, a bearing's graded
+// figures); the server's loader will do the same once its tables hold them.
 import { buildModel, type Knowledge } from "../../../app/cases/build-model";
 import type { Model } from "../../../app/reasoning";
 import { starterKnowledgeBase as kb } from "../../../seeds/kb";
@@ -22,6 +23,8 @@ export function knowledgeFromSeed(): Knowledge {
 }
 
 type Extra = Record<string, unknown>;
+const symptomExtra = new Map<string, Extra>();
+for (const s of kb.symptoms) if (s.unlisted !== undefined) symptomExtra.set(s.key, { unlisted: s.unlisted });
 const linkExtra = new Map<string, Extra>();
 const bearExtra = new Map<string, Extra>();
 for (const l of kb.symptomLinks as (typeof kb.symptomLinks[number] & Extra)[]) {
@@ -37,9 +40,10 @@ const knowledge = knowledgeFromSeed();
 
 export function modelFor(vehicle: Vehicle): Model {
   const model = buildModel(knowledge, { fuel: vehicle.fuel, drivetrain: vehicle.drivetrain, ageYears: vehicle.ageYears, km: vehicle.km }, LABOUR_RATE);
-  if (linkExtra.size === 0 && bearExtra.size === 0) return model;
+  if (linkExtra.size === 0 && bearExtra.size === 0 && symptomExtra.size === 0) return model;
   return {
     ...model,
+    symptoms: model.symptoms.map((s) => ({ ...s, ...symptomExtra.get(s.id) })),
     links: model.links.map((l) => ({ ...l, ...linkExtra.get(`${l.symptomId}|${l.causeId}`) })),
     checks: model.checks.map((k) => ({ ...k, bears: k.bears.map((b) => ({ ...b, ...bearExtra.get(`${k.id}|${b.causeId}`) })) })),
   };

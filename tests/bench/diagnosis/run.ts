@@ -6,7 +6,7 @@
 // same runner measured the code before and after the changes.
 import * as measure from "../../../app/measure";
 import * as quickFind from "../../../app/quick-find";
-import { compileModel, planChecks, rankCauses, type Evidence } from "../../../app/reasoning";
+import { compileModel, planChecks, rankCauses, type Evidence, type RankOptions } from "../../../app/reasoning";
 import { starterKnowledgeBase as kb } from "../../../seeds/kb";
 import type { BenchCase, CaseFinding, Phrase } from "./case-types";
 import { modelFor } from "./model";
@@ -58,6 +58,8 @@ export type CaseOutcome = {
   phrases: PhraseOutcome[];
   rankHistory: number; // rank of the answer (1 = first) among the causes and "not in the knowledge base"
   rankFindings: number;
+  rankHistoryMeant: number; // the same with each phrase recorded as meant (Quick find bypassed): the engine alone
+  rankFindingsMeant: number;
   unlistedRankHistory: number;
   unlistedRankFindings: number;
   unlistedFindings: number;
@@ -67,8 +69,8 @@ export type CaseOutcome = {
 
 const UNLISTED = "(not in the KB)";
 
-function ranks(model: ReturnType<typeof compileModel>, evidence: Evidence, answer: string) {
-  const r = rankCauses(model, evidence);
+function ranks(model: ReturnType<typeof compileModel>, evidence: Evidence, answer: string, options?: RankOptions) {
+  const r = rankCauses(model, evidence, options);
   const pAnswer = answer === UNLISTED ? r.unlisted : (r.causes.find((c) => c.id === answer)?.probability ?? 0);
   const above = (p: number) => r.causes.filter((c) => c.probability > p).length;
   const rank = 1 + above(pAnswer) + (answer !== UNLISTED && r.unlisted > pAnswer ? 1 : 0);
@@ -77,7 +79,8 @@ function ranks(model: ReturnType<typeof compileModel>, evidence: Evidence, answe
   return { rank, unlistedRank, unlisted: r.unlisted, top };
 }
 
-export function runCase(c: BenchCase): CaseOutcome {
+/** One case; `options` lets a calibration sweep try other figures (the bench itself uses the defaults). */
+export function runCase(c: BenchCase, options?: RankOptions): CaseOutcome {
   const compiled = compileModel(modelFor(c.vehicle));
   const looked = c.said.map(lookUp);
   const observations = looked.flatMap((l) => (l.observation ? [l.observation] : []));
@@ -86,10 +89,18 @@ export function runCase(c: BenchCase): CaseOutcome {
   const history: Evidence = { observations: observations.filter((o) => !seen.has(`${o.symptomId}|${o.source}`) && seen.add(`${o.symptomId}|${o.source}`)), findings: [] };
   const full: Evidence = { observations: history.observations, findings: c.findings.map(findingOf) };
   const answer = "cause" in c.answer ? c.answer.cause : UNLISTED;
-  const h = ranks(compiled, history, answer);
-  const f = ranks(compiled, full, answer);
+  const h = ranks(compiled, history, answer, options);
+  const f = ranks(compiled, full, answer, options);
+  const meant: Evidence = {
+    observations: c.said.flatMap((p) => (p.means !== null && symptomKeys.has(p.means) ? [{ symptomId: p.means, present: p.present, source: p.by }] : [])),
+    findings: [],
+  };
+  const seenMeant = new Set<string>();
+  meant.observations = meant.observations.filter((o) => !seenMeant.has(`${o.symptomId}|${o.source}`) && seenMeant.add(`${o.symptomId}|${o.source}`));
+  const hm = ranks(compiled, meant, answer, options);
+  const fm = ranks(compiled, { ...meant, findings: full.findings }, answer, options);
   const plan = [history, full].map((e) => {
-    const p = planChecks(compiled, e);
+    const p = planChecks(compiled, e, options);
     return { expected: p.expectedCost, cheapest: p.cheapestFirstExpectedCost };
   });
   return {
@@ -98,6 +109,8 @@ export function runCase(c: BenchCase): CaseOutcome {
     phrases: looked.map(({ observation: _o, ...rest }) => rest),
     rankHistory: h.rank,
     rankFindings: f.rank,
+    rankHistoryMeant: hm.rank,
+    rankFindingsMeant: fm.rank,
     unlistedRankHistory: h.unlistedRank,
     unlistedRankFindings: f.unlistedRank,
     unlistedFindings: f.unlisted,
@@ -128,6 +141,10 @@ export function summarise(outcomes: CaseOutcome[]): Summary {
     top3History: pct(listed.filter((o) => o.rankHistory <= 3).length, listed.length),
     top1Findings: pct(listed.filter((o) => o.rankFindings <= 1).length, listed.length),
     top3Findings: pct(listed.filter((o) => o.rankFindings <= 3).length, listed.length),
+    meantTop1History: pct(listed.filter((o) => o.rankHistoryMeant <= 1).length, listed.length),
+    meantTop3History: pct(listed.filter((o) => o.rankHistoryMeant <= 3).length, listed.length),
+    meantTop1Findings: pct(listed.filter((o) => o.rankFindingsMeant <= 1).length, listed.length),
+    meantTop3Findings: pct(listed.filter((o) => o.rankFindingsMeant <= 3).length, listed.length),
     allTop1Findings: pct(outcomes.filter((o) => o.rankFindings <= 1).length, outcomes.length),
     allTop3Findings: pct(outcomes.filter((o) => o.rankFindings <= 3).length, outcomes.length),
     unlistedTop2History: pct(missing.filter((o) => o.unlistedRankHistory <= 2).length, missing.length),
