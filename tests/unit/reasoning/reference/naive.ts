@@ -6,7 +6,7 @@ import type { Evidence, Model } from "~/reasoning";
 
 const SKILLS = ["apprentice", "technician", "senior"];
 
-export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.7, maxSkill = "senior", rho = 0.05) {
+export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.7, maxSkill = "senior", rho = 0.04) {
   const leaves = model.causes.filter((c) => !model.causes.some((d) => d.parentId === c.id));
   const chainOf = (id: string): string[] => {
     const chain = [id];
