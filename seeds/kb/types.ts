@@ -1,5 +1,7 @@
 // The starter knowledge base as plain data. Seeding copies it into a workshop's own tables,
 // where seniors then curate it. Keys are stable slugs so re-seeding is idempotent.
+import type { BandFigures } from "../../app/reasoning/bands";
+import type { Condition } from "../../app/reasoning/conditions";
 
 export const SYSTEMS = [
   "brakes",
@@ -101,7 +103,10 @@ export type CauseSeed = {
 export type CheckResult =
   | { kind: "pass_fail"; failMeans: string }
   // rule is a mathjs comparison over `value` that is true when the reading PASSES, e.g. "value <= 0.05 mm"
-  | { kind: "measurement"; quantity: string; unit: string; rule: string; failMeans: string };
+  // gradeScale (optional): the distance from the limit that counts as one whole "miss" when the
+  // reading is graded (well within / near / beyond / far beyond), where the limit itself is no
+  // good scale (a limit of 0 mm, a voltage); see docs/reasoning.md.
+  | { kind: "measurement"; quantity: string; unit: string; rule: string; failMeans: string; gradeScale?: string };
 
 export type CheckSeed = {
   key: string;
@@ -117,8 +122,11 @@ export type CheckSeed = {
   falseAlarm: number; // P(check fails | none of its causes), in [0, 1]
 };
 
-export type SymptomLinkSeed = { symptom: string; cause: string; p: number }; // P(symptom | cause)
-export type CheckLinkSeed = { check: string; cause: string; pFail: number }; // cause may be a tree node
+// P(symptom | cause); `when` (optional): the conditions under which this cause shows the symptom.
+export type SymptomLinkSeed = { symptom: string; cause: string; p: number; when?: Condition[] };
+// P(check fails | cause), cause may be a tree node; `graded` (optional): P(reading band | cause)
+// for a measurement, whose two failing bands add up to pFail (a senior can edit them).
+export type CheckLinkSeed = { check: string; cause: string; pFail: number; graded?: BandFigures };
 
 export type KnowledgeBaseSeed = {
   symptoms: SymptomSeed[];
