@@ -1,9 +1,11 @@
 // Several faults at once: once a cause is confirmed, the evidence it explains is set aside and the
 // rest is ranked as a second fault. The single-fault model stays as it is; it is applied again to
 // what is left. An item is explained by a confirmed cause when that cause makes it more likely
-// than the background does: a present symptom it produces more often than the symptom's leak, a
-// failed (or out-of-limit) check it fails more often than the false-alarm rate. Absent symptoms and
-// passed checks are kept: they still rule causes out. The confirmed causes themselves get prior 0,
+// than the background does (a present symptom it produces more often than the symptom's leak, a
+// failed or out-of-limit check it fails more often than the false-alarm rate) and at least as
+// likely as any other candidate does: a symptom the confirmed cause shows only now and then but
+// another cause shows often is left for the second fault. Absent symptoms and passed checks are
+// kept (a confirmed cause makes them less likely, never more): they still rule causes out. The confirmed causes themselves get prior 0,
 // the other candidates and "not in the knowledge base" share their prior in the same proportions.
 import { toCompiled, type CompiledModel } from "./compiled";
 import { fail } from "./errors";
@@ -37,10 +39,18 @@ export function rankSecondFault(model: Model | CompiledModel, evidence: Evidence
 
   const items = resolveEvidence(base, evidence, opts.ownerReliability, opts.unlistedSymptomRate);
   const explained = new Set<string>();
+  const isConfirmed = new Uint8Array(base.leafCount);
+  for (const leaf of leaves) isConfirmed[leaf] = 1;
   for (const item of items) {
+    // The best figure among the confirmed causes, against the best among all the others
+    // (unlinked ones, and "not in the knowledge base", have the default).
+    let mine = -1;
+    let others = Math.max(item.defaultLik, item.unlistedLik);
     for (let j = 0; j < item.leaves.length; j++) {
-      if (leaves.includes(item.leaves[j]) && item.liks[j] > item.defaultLik) explained.add(item.key);
+      if (isConfirmed[item.leaves[j]]) mine = Math.max(mine, item.liks[j]);
+      else others = Math.max(others, item.liks[j]);
     }
+    if (mine > item.defaultLik && mine >= others) explained.add(item.key);
   }
   const kept: Evidence = {
     observations: evidence.observations.filter((o) => !explained.has(`symptom:${o.symptomId}`)),
