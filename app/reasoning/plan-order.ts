@@ -13,16 +13,19 @@ import type { ModelIndex } from "./model-index";
 const MIN_GAIN = 1e-12;
 
 /**
- * Adjacent-swap passes over `order` (changed in place) until a pass swaps nothing or `maxPasses`
- * is reached. Every swap lowers the expected cost, so the result is never worse than the start.
- * Returns the number of swaps made.
+ * Adjacent-swap passes over the first `window` steps of `order` (changed in place) until a pass
+ * swaps nothing or `maxPasses` is reached. The head of a plan is where the order matters: later
+ * steps are reached only if everything before them failed to find the fault (the unlisted share,
+ * which no check finds, pays for every step in any order). Every swap lowers the expected cost, so
+ * the result is never worse than the start. Returns the number of swaps made.
  */
-export function improveBySwaps(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, order: Int32Array, maxPasses: number): number {
+export function improveBySwaps(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, order: Int32Array, maxPasses: number, window = order.length): number {
   let swaps = 0;
+  const end = Math.min(order.length, window);
   for (let pass = 0; pass < maxPasses; pass++) {
     const s = new Survival(prob);
     let swapped = false;
-    for (let i = 0; i + 1 < order.length; i++) {
+    for (let i = 0; i + 1 < end; i++) {
       const a = order[i];
       const b = order[i + 1];
       const r = s.reach();

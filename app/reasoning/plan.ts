@@ -17,8 +17,9 @@ import { orderByKeyDesc } from "./sort-keys";
 import { whatIfFrom, type WhatIf } from "./what-if";
 
 const RATIO_TIE_BITS = 20;
-/** Neighbour-swap passes over an order: a handful settle every order seen in practice. */
+/** Neighbour-swap passes over an order, over its first SWAP_WINDOW steps: a handful settle every order seen in practice. */
 const SWAP_PASSES = 8;
+const SWAP_WINDOW = 64;
 
 export type PlanStep = {
   checkId: string;
@@ -108,12 +109,12 @@ export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: E
   // Should it still cost more than cheapest-first, cheapest-first improved the same way is shown
   // instead: every swap lowers the cost, so the plan is never worse than cheapest-first.
   let within = withinAll.slice(0, n);
-  improveBySwaps(index, cl, post.prob, within, SWAP_PASSES);
+  improveBySwaps(index, cl, post.prob, within, SWAP_PASSES, SWAP_WINDOW);
   let ecr = expectedCost(index, cl, post.prob, within);
   let started: Plan["order"] = "value";
   if (ecr.total > cheapestFirstExpectedCost) {
     const alt = cheapest.slice();
-    improveBySwaps(index, cl, post.prob, alt, SWAP_PASSES);
+    improveBySwaps(index, cl, post.prob, alt, SWAP_PASSES, SWAP_WINDOW);
     const altEcr = expectedCost(index, cl, post.prob, alt);
     if (altEcr.total < ecr.total) [within, ecr, started] = [alt, altEcr, "cheapest-first"];
   }

@@ -103,17 +103,25 @@ export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.
     }
     return cost;
   };
+  // One pass walks the first 64 steps with the survival of every hypothesis written out; swapping
+  // steps i and i+1 changes only their two terms: C_a·R + C_b·R_a against C_b·R + C_a·R_b.
   const improve = (start: typeof within) => {
     const order = [...start];
     for (let pass = 0; pass < 8; pass++) {
       let swapped = false;
-      for (let i = 0; i + 1 < order.length; i++) {
-        const swappedOrder = [...order];
-        [swappedOrder[i], swappedOrder[i + 1]] = [order[i + 1], order[i]];
-        if (ecr(swappedOrder) < ecr(order) - 1e-12 * (order[i].check.cost + order[i + 1].check.cost)) {
-          order.splice(0, order.length, ...swappedOrder);
+      let survive = [...post];
+      for (let i = 0; i + 1 < Math.min(order.length, 64); i++) {
+        const [a, b] = [order[i], order[i + 1]];
+        const r = survive.reduce((x, y) => x + y, 0);
+        const after = (s: (typeof order)[number]) => survive.reduce((x, v, h) => x + (s.borne[h] ? v * (1 - s.q[h]) : v), 0);
+        const keep = a.check.cost * r + b.check.cost * after(a);
+        const swap = b.check.cost * r + a.check.cost * after(b);
+        if (swap < keep - 1e-12 * (a.check.cost + b.check.cost)) {
+          [order[i], order[i + 1]] = [b, a];
           swapped = true;
         }
+        const ran = order[i];
+        survive = survive.map((v, h) => (ran.borne[h] ? v * (1 - ran.q[h]) : v));
       }
       if (!swapped) break;
     }
