@@ -1,6 +1,6 @@
 // The diagnostic benchmark: our own invented workshop cases (tests/bench/diagnosis/) run through
 // Quick find, the measurement rules, the ranking and the check plan, printed beside the figures
-// measured before the changes of issue 14 (baseline.json) and the targets. A measurement, not a
+// measured on the code before these changes (baseline.json) and the targets. A measurement, not a
 // test: it prints and never fails. Run: NODE_ENV=production npx tsx tests/bench/diagnosis.bench.ts
 // (--save-baseline rewrites baseline.json from this run, which only makes sense on the old code;
 // --misses lists the cases that miss).
