@@ -2,7 +2,7 @@
 // normalised here, so a keystroke only looks things up. Fuse gets pre-normalised documents and a
 // prebuilt FuseIndex whose records are reused for whichever few candidates a query leaves.
 import Fuse, { type FuseIndex, type IFuseOptions } from "fuse.js";
-import { analyseWithPolarity, canonical, literal, THESAURUS, tokenKey, type Token } from "./analyse";
+import { analyseWithPolarity, canonical, literal, tokenKey, type Token } from "./analyse";
 import { hasDigit, porterStem, STOPWORDS, words } from "./normalise";
 import { PostingTable } from "./postings";
 import { ENTRY_KINDS, type Entry } from "./types";
@@ -185,6 +185,3 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
     builtMs: performance.now() - started,
   };
 }
-
-/** The thesaurus the index was built with, for lookups of a completed word's concept. */
-export const wordConcept = THESAURUS.wordConcept;
