@@ -24,7 +24,7 @@ try {
   before = null;
 }
 
-type Row = [label: string, key: string, unit: "%" | "n" | "money", target?: string];
+type Row = [label: string, key: string, unit: "%" | "n" | "money" | "rank", target?: string];
 const ROWS: Row[] = [
   ["phrase → symptom (intent and present/absent)", "phraseAccuracy", "%", "≥ 90 %"],
   ["  phrases with the right symptom but the wrong polarity", "phraseWrongPolarity", "n"],
@@ -41,13 +41,17 @@ const ROWS: Row[] = [
   ["top-3, with findings (all cases)", "allTop3Findings", "%"],
   ["\"not in the KB\" 1st or 2nd, history only (missing-cause cases)", "unlistedTop2History", "%"],
   ["\"not in the KB\" 1st or 2nd, with findings (missing-cause cases)", "unlistedTop2Findings", "%", "≥ 80 %"],
+  ["mean rank of \"not in the KB\", history only (missing-cause cases)", "unlistedMeanRankHistory", "rank"],
+  ["mean rank of \"not in the KB\", with findings (missing-cause cases)", "unlistedMeanRankFindings", "rank"],
+  ["worst rank of \"not in the KB\", with findings (missing-cause cases)", "unlistedWorstRankFindings", "n"],
   ["mean P(not in the KB) with findings, missing-cause cases", "unlistedMeanMissing", "%"],
   ["mean P(not in the KB) with findings, listed-cause cases", "unlistedMeanListed", "%"],
   ["plan expected cost, mean per plan (see note)", "planExpected", "money"],
   ["cheapest-first expected cost, mean per plan (see note)", "planCheapest", "money"],
   ["plans whose expected cost is above cheapest-first", "planWorseThanCheapest", "n", "0"],
 ];
-const show = (v: number | undefined, unit: Row[2]) => (v === undefined ? "–" : unit === "%" ? `${v.toFixed(1)} %` : unit === "money" ? v.toFixed(2) : String(v));
+const show = (v: number | undefined, unit: Row[2]) =>
+  v === undefined ? "–" : unit === "%" ? `${v.toFixed(1)} %` : unit === "money" ? v.toFixed(2) : unit === "rank" ? v.toFixed(1) : String(v);
 const head = ["figure", "before", "now", "target"];
 const body = ROWS.map(([label, key, unit, target]) => [label, show(before?.[key], unit), show(now[key], unit), target ?? ""]);
 const widths = head.map((h, i) => Math.max(h.length, ...body.map((r) => r[i].length)));
@@ -55,6 +59,8 @@ const line = (cells: string[]) => cells.map((c, i) => (i === 0 ? c.padEnd(widths
 console.log(`Diagnostic benchmark: ${now.cases} cases (${now.listedCases} with a listed cause, ${now.missingCases} whose cause is not in the knowledge base), ${now.phrases} phrases, ${now.plans} plans; Node ${process.version}`);
 console.log(line(head));
 for (const r of body) console.log(line(r));
+const missingRanks = outcomes.filter((o) => !o.listed).map((o) => `${o.id.replace(/^missing-/, "")} ${o.unlistedRankHistory}→${o.unlistedRankFindings}`);
+console.log(`"not in the KB" rank per missing-cause case now (history → with findings): ${missingRanks.join(", ")}`);
 console.log(
   "Note: the expected cost now runs until a check finds the fault (a false alarm is followed up and the search goes on); before, a false alarm ended the plan, so the two money rows measure different things. The count of plans above cheapest-first is on each side's own definition.",
 );

@@ -64,6 +64,10 @@ describe("negation and “only”", () => {
     expect(hit?.entry.id === "rear_windows_driver_only" && hit.present !== false).toBe(false);
   });
 
+  it("lands an “only” complaint said positively on the “only” symptom, present", () => {
+    expect(top("back windows only work from the driver's switches")).toMatchObject({ entry: { id: "rear_windows_driver_only" }, present: true });
+  });
+
   it("keeps a negative symptom present when the words are negative too", () => {
     expect(top("back door won't open from the inside")).toMatchObject({ entry: { id: "door_wont_open_inside" }, present: true });
     // a phrase of the synonym table is a complaint, not a negation
