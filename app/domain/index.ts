@@ -2,8 +2,10 @@
 // permissions, the reasoning core, the screens and the seeds all import it from here.
 export * from "./case-access";
 export * from "./cases";
+export * from "./conditions";
 export * from "./countries";
 export * from "./knowledge";
 export * from "./people";
 export * from "./permissions";
+export * from "./readings";
 export * from "./vehicles";

@@ -4,7 +4,9 @@
 // Browser-safe: the shapes and their zod schema, no database.
 import { z } from "zod";
 import { type Applicability, CAUSE_LEVELS, CAUTIONS, CHECK_ACCESS, type Caution, type CheckAccess, PRIORITIES, type Priority, SYMPTOM_KINDS, type SymptomKind, SYSTEMS, type System } from "~/domain/knowledge";
+import { CONDITIONS, type Condition } from "~/domain/conditions";
 import { SKILLS, type Skill } from "~/domain/people";
+import type { BandFigures } from "~/domain/readings";
 import { DRIVETRAINS, FUEL_TYPES } from "~/domain/vehicles";
 
 export const KB_FORMAT = "ramplight.knowledge-base";
@@ -19,6 +21,9 @@ export type SymptomItem = {
   code?: string; // kind "trouble_code" only, and required there: the code itself, upper case ("P0420")
   conditions: string[]; // "under braking", "over bumps", "cold start", "at idle", "cornering", "at speed"
   leak: number; // P(symptom | no listed cause) in [0, 1]
+  // P(symptom | the fault is not in the knowledge base), where it should differ from the engine's
+  // default max(leak, unlisted symptom rate): a starter estimate, as every figure here.
+  unlisted?: number;
 };
 
 export type CauseItem = {
@@ -41,7 +46,10 @@ export type CauseItem = {
 export type CheckResult =
   | { kind: "pass_fail"; failMeans: string }
   // rule is a mathjs comparison over `value` that is true when the reading PASSES, e.g. "value <= 0.05 mm"
-  | { kind: "measurement"; quantity: string; unit: string; rule: string; failMeans: string };
+  // gradeScale (optional): the distance from the limit that counts as one whole "miss" when the
+  // reading is graded (well within / near / beyond / far beyond), where the limit itself is no
+  // good scale (a limit of 0 mm, a voltage); see docs/reasoning.md.
+  | { kind: "measurement"; quantity: string; unit: string; rule: string; failMeans: string; gradeScale?: string };
 
 export type CheckItem = {
   key: string;
@@ -57,8 +65,11 @@ export type CheckItem = {
   falseAlarm: number; // P(check fails | none of its causes), in [0, 1]
 };
 
-export type SymptomLinkItem = { symptom: string; cause: string; p: number }; // P(symptom | cause)
-export type CheckLinkItem = { check: string; cause: string; pFail: number }; // cause may be a tree node
+// P(symptom | cause); `when` (optional): the conditions under which this cause shows the symptom.
+export type SymptomLinkItem = { symptom: string; cause: string; p: number; when?: Condition[] };
+// P(check fails | cause), cause may be a tree node; `graded` (optional): P(reading band | cause)
+// for a measurement, whose two failing bands add up to pFail (a senior can edit them).
+export type CheckLinkItem = { check: string; cause: string; pFail: number; graded?: BandFigures };
 
 /** The items of a knowledge base, without the document's envelope. */
 export type KnowledgeItems = {
@@ -99,6 +110,7 @@ export const SymptomItemSchema = z
     code: z.string().regex(/^[PCBU][0-9A-F]{4}$/, "a trouble code is a letter P, C, B or U and four characters, such as P0420").optional(),
     conditions: z.array(text(80)).max(20),
     leak: probability,
+    unlisted: probability.optional(),
   })
   .strict();
 
@@ -133,7 +145,7 @@ export const CheckItemSchema = z
     cautions: z.array(z.enum(CAUTIONS)),
     result: z.discriminatedUnion("kind", [
       z.object({ kind: z.literal("pass_fail"), failMeans: z.string().max(1000) }).strict(),
-      z.object({ kind: z.literal("measurement"), quantity: text(120), unit: z.string().max(20), rule: text(200), failMeans: z.string().max(1000) }).strict(),
+      z.object({ kind: z.literal("measurement"), quantity: text(120), unit: z.string().max(20), rule: text(200), failMeans: z.string().max(1000), gradeScale: text(40).optional() }).strict(),
     ]),
     falseAlarm: probability,
   })
@@ -147,7 +159,15 @@ export const KnowledgeDocumentSchema = z
     symptoms: z.array(SymptomItemSchema).max(5_000),
     causes: z.array(CauseItemSchema).max(5_000),
     checks: z.array(CheckItemSchema).max(5_000),
-    symptomLinks: z.array(z.object({ symptom: key, cause: key, p: probability }).strict()).max(50_000),
-    checkLinks: z.array(z.object({ check: key, cause: key, pFail: probability }).strict()).max(50_000),
+    symptomLinks: z.array(z.object({ symptom: key, cause: key, p: probability, when: z.array(z.enum(CONDITIONS)).max(10).optional() }).strict()).max(50_000),
+    checkLinks: z
+      .array(
+        z
+          .object({ check: key, cause: key, pFail: probability, graded: z.object({ well_within: probability, near: probability, beyond: probability, far_beyond: probability }).strict().optional() })
+          .strict()
+          .refine((l) => !l.graded || Math.abs(l.graded.well_within + l.graded.near + l.graded.beyond + l.graded.far_beyond - 1) < 1e-6, "the four band figures of a graded link add up to 1")
+          .refine((l) => !l.graded || Math.abs(l.graded.beyond + l.graded.far_beyond - l.pFail) < 1e-6, "a graded link's two failing bands add up to its pFail"),
+      )
+      .max(50_000),
   })
   .strict();

@@ -6,6 +6,8 @@ export { math } from "./math";
 export { parseReading, readReading } from "./reading";
 export type { Reading, ReadingInput } from "./reading";
 export { compileRule, evaluateRule, findingFromReading } from "./rules";
+export { BAND_EDGES, gradedFinding, gradeReading, READING_BANDS } from "./grade";
+export type { GradedReading, ReadingBand } from "./grade";
 export type { CompiledRule, RuleResult } from "./rules";
 export { kindOf } from "./dimensions";
 export { validateVin, vinCheckDigit } from "./vin";

@@ -2,8 +2,8 @@
 // normalised here, so a keystroke only looks things up. Fuse gets pre-normalised documents and a
 // prebuilt FuseIndex whose records are reused for whichever few candidates a query leaves.
 import Fuse, { type FuseIndex, type IFuseOptions } from "fuse.js";
-import { analyseWords, canonical, literal, THESAURUS, type Token } from "./analyse";
-import { hasDigit, STOPWORDS, words } from "./normalise";
+import { analyseWithPolarity, canonical, literal, tokenKey, type Token } from "./analyse";
+import { hasDigit, porterStem, STOPWORDS, words } from "./normalise";
 import { PostingTable } from "./postings";
 import { ENTRY_KINDS, type Entry } from "./types";
 
@@ -22,6 +22,10 @@ export type QuickFindIndex = {
   typoWords: Map<number, string[]>; // letters-only words of 4+ letters, by length
   phrases: string[][]; // canonical title and keyword phrases per entry
   literals: string[][]; // the same phrases word for word
+  polarity: (FieldPolarity[] | null)[]; // symptoms only: each phrase's token keys and whether it is negative
+  titleKeys: (ReadonlySet<string> | null)[]; // symptoms, causes and checks: the name's token keys
+  dtcEntry: Map<string, number>; // trouble code (upper case) → the symptom entry that stands for it
+  anyDtcEntry: number; // the generic "trouble code stored" symptom, or −1
   fuseDocs: FuseDoc[];
   fuseRecords: FuseIndex<FuseDoc>["records"];
   rerank: Fuse<FuseDoc>; // runs over a subset of fuseRecords per query
@@ -32,7 +36,8 @@ export type QuickFindIndex = {
 
 // Where a word was found matters: the name is what the technician reads, synonyms and
 // conditions back it up, the subtitle is context.
-export const FIELD_WEIGHT = { title: 1, keyword: 0.75, subtitle: 0.5 } as const;
+// A check's steps ("rock the wheel at 12 and 6 o'clock") find it too, below everything else.
+export const FIELD_WEIGHT = { title: 1, keyword: 0.75, subtitle: 0.5, detail: 0.4 } as const;
 const MIN_FRAGMENT = 3;
 
 export const FUSE_KEYS = [
@@ -52,7 +57,9 @@ function fuseText(tokens: Token[]): string {
   return parts.join(" ");
 }
 
-type FieldAnalysis = { words: string[]; concepts: string[]; fragments: string[]; canonical: string; literal: string; fuse: string };
+type FieldAnalysis = { words: string[]; concepts: string[]; fragments: string[]; canonical: string; literal: string; fuse: string; polarity: FieldPolarity };
+/** What one phrase of an entry says, for comparing its polarity (and word order) with a query's. */
+export type FieldPolarity = { keys: ReadonlySet<string>; seq: readonly string[]; negated: boolean };
 
 const fragmentMemo = new Map<string, string[]>();
 /** Inner fragments of a code, from the second character on, at least MIN_FRAGMENT long. */
@@ -69,10 +76,17 @@ function fragmentsOf(code: string): string[] {
 
 function analyseField(text: string): FieldAnalysis {
   const all = words(text);
-  const tokens = analyseWords(all);
-  const out: FieldAnalysis = { words: [], concepts: [], fragments: [], canonical: canonical(tokens), literal: literal(tokens), fuse: fuseText(tokens) };
+  const { tokens, negated } = analyseWithPolarity(all);
+  const seq = tokens.map(tokenKey);
+  const polarity = { keys: new Set(seq), seq, negated };
+  const out: FieldAnalysis = { words: [], concepts: [], fragments: [], canonical: canonical(tokens), literal: literal(tokens), fuse: fuseText(tokens), polarity };
   for (const t of tokens) {
-    if (t.word) out.words.push(t.word);
+    if (t.word) {
+      out.words.push(t.word);
+      // The stem too, so "jerks" finds "jerking"; the word as written stays for prefixes.
+      const stem = porterStem(t.word);
+      if (stem !== t.word) out.words.push(stem);
+    }
     if (t.concept) out.concepts.push(t.concept);
     out.words.push(...t.covered);
     // A VIN is typed in fragments, often from the middle: index its inner fragments.
@@ -97,6 +111,10 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
   const analysed = new Map<string, FieldAnalysis>();
   const phrases: string[][] = [];
   const literals: string[][] = [];
+  const polarity: (FieldPolarity[] | null)[] = [];
+  const titleKeys: (ReadonlySet<string> | null)[] = [];
+  const dtcEntry = new Map<string, number>();
+  let anyDtcEntry = -1;
   const fuseDocs: FuseDoc[] = [];
   const byId = new Map<string, number>();
   const kindOf = new Uint8Array(entries.length);
@@ -106,20 +124,26 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
     kindOf[i] = ENTRY_KINDS.indexOf(e.kind);
     const own: string[] = [];
     const ownLiteral: string[] = [];
-    const field = (text: string, weight: number): string => {
+    const ownPolarity: FieldPolarity[] | null = e.kind === "symptom" ? [] : null;
+    const field = (text: string, weight: number, phrase = true): string => {
       let a = analysed.get(text);
       if (!a) analysed.set(text, (a = analyseField(text)));
       for (const w of a.words) wordP.add(w, i, weight);
       for (const c of a.concepts) conceptP.add(c, i, weight);
       for (const f of a.fragments) codeP.add(f, i, weight);
-      if (a.canonical) (own.push(a.canonical), ownLiteral.push(a.literal));
+      if (phrase && a.canonical) (own.push(a.canonical), ownLiteral.push(a.literal), ownPolarity?.push(a.polarity));
       return a.fuse;
     };
     const title = field(e.title, FIELD_WEIGHT.title);
+    titleKeys.push(e.kind === "symptom" || e.kind === "cause" || e.kind === "check" ? analysed.get(e.title)!.polarity.keys : null);
     const keywords = e.keywords.map((k) => field(k, FIELD_WEIGHT.keyword));
     const subtitle = e.subtitle ? field(e.subtitle, FIELD_WEIGHT.subtitle) : "";
+    for (const d of e.details ?? []) field(d, FIELD_WEIGHT.detail, false);
+    if (e.dtc && !dtcEntry.has(e.dtc.toUpperCase())) dtcEntry.set(e.dtc.toUpperCase(), i);
+    if (e.anyDtc && anyDtcEntry < 0) anyDtcEntry = i;
     phrases.push(own);
     literals.push(ownLiteral);
+    polarity.push(ownPolarity);
     fuseDocs.push({ title, keywords, subtitle });
   });
 
@@ -149,6 +173,10 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
     typoWords,
     phrases,
     literals,
+    polarity,
+    titleKeys,
+    dtcEntry,
+    anyDtcEntry,
     fuseDocs,
     fuseRecords: full.records,
     rerank,
@@ -157,6 +185,3 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
     builtMs: performance.now() - started,
   };
 }
-
-/** The thesaurus the index was built with, for lookups of a completed word's concept. */
-export const wordConcept = THESAURUS.wordConcept;

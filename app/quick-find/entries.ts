@@ -15,9 +15,16 @@ import { SYSTEM_LABEL } from "~/domain/knowledge";
 export { SYSTEM_LABEL };
 const systemLabel = (s: string | undefined) => (s ? ((SYSTEM_LABEL as Record<string, string>)[s] ?? s.replace(/_/g, " ")) : undefined);
 
-export type SymptomInput = Identified & { name: string; synonyms?: readonly string[]; conditions?: readonly string[]; system?: string };
+export type SymptomInput = Identified & {
+  name: string;
+  synonyms?: readonly string[];
+  conditions?: readonly string[];
+  system?: string;
+  kind?: string; // "trouble_code" with no code: the generic "trouble code stored" symptom
+  code?: string | null; // a trouble-code symptom's code
+};
 export type CauseInput = Identified & { name: string; system?: string; level?: string; parentName?: string };
-export type CheckInput = Identified & { name: string; tools?: readonly string[]; minutes?: number };
+export type CheckInput = Identified & { name: string; tools?: readonly string[]; minutes?: number; instructions?: readonly string[] };
 export type VehicleInput = { id: string; registration: string; vin?: string | null; make?: string; model?: string; year?: number; ownerName?: string };
 export type CaseInput = { id: string; number: number; registration?: string; vehicle?: string; complaint?: string; ownerName?: string };
 
@@ -30,6 +37,7 @@ export function symptomEntry(s: SymptomInput): Entry {
     subtitle: [systemLabel(s.system), conditions.join(", ")].filter(Boolean).join(" · ") || undefined,
     // Conditions are part of what the symptom means: "under braking" must find it from "brake".
     keywords: [...(s.synonyms ?? []), ...conditions],
+    ...(s.code ? { dtc: s.code.toUpperCase() } : s.kind === "trouble_code" ? { anyDtc: true } : {}),
   };
 }
 
@@ -42,7 +50,8 @@ export function causeEntry(c: CauseInput): Entry {
 
 export function checkEntry(c: CheckInput): Entry {
   const minutes = c.minutes !== undefined ? `${c.minutes} min` : undefined;
-  return { kind: "check", id: idOf(c), title: c.name, subtitle: minutes, keywords: [...(c.tools ?? [])] };
+  // The steps find the check by what is done in it ("rock at 12 and 6 o'clock").
+  return { kind: "check", id: idOf(c), title: c.name, subtitle: minutes, keywords: [...(c.tools ?? [])], ...(c.instructions?.length ? { details: [...c.instructions] } : {}) };
 }
 
 export function vehicleEntry(v: VehicleInput): Entry {

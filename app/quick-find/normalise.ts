@@ -1,5 +1,6 @@
 // Text → comparable words, applied identically to entries (once, at build) and to queries (per
 // keystroke), so both sides always agree on what a "word" is.
+import { stemmer } from "stemmer";
 
 /** Words that carry no meaning in a complaint ("the wheel shakes when I brake"). */
 export const STOPWORDS: ReadonlySet<string> = new Set([
@@ -7,6 +8,26 @@ export const STOPWORDS: ReadonlySet<string> = new Set([
   "is", "it", "its", "be", "been", "was", "are", "i", "my", "me", "we", "our", "you", "your",
   "when", "while", "whenever", "under", "over", "as", "that", "this", "then", "there", "just",
   "very", "bit", "some", "gets", "get", "car", "vehicle", "s",
+  // Auxiliaries carry no symptom ("does not hold", "will not open"); the negation beside them is
+  // kept as the phrase's polarity (NEGATIONS below).
+  "do", "does", "did", "will", "would", "can", "could", "has", "have", "had",
+  // Fillers of an owner's sentence: how often and how much, not what.
+  "every", "few", "than", "ever", "really", "quite", "lot", "sometimes", "always", "now", "again", "still",
+  "also", "too", "even", "time", "times",
+  // Verbs of motion and feeling that only carry the sentence ("it goes cold", "it feels loose").
+  "go", "goes", "going", "gone", "went", "come", "comes", "came", "coming", "keep", "keeps", "kept", "got",
+  "feel", "feels", "felt", "seem", "seems", "try", "tried",
+]);
+
+/**
+ * Words that turn a statement round: "no grinding", "doesn't pull", "do not work". They are not
+ * looked up as words; a phrase holding one is negative, and Quick find compares that polarity with
+ * the entry's own wording ("door will not open" is itself negative). Apostrophes are dropped before
+ * this, so "don't" arrives as "dont". "nothing" is left out: "click or nothing" is still a symptom.
+ */
+export const NEGATIONS: ReadonlySet<string> = new Set([
+  "no", "not", "never", "none", "cannot", "dont", "doesnt", "didnt", "isnt", "arent", "wasnt", "werent",
+  "wont", "cant", "couldnt", "wouldnt", "hasnt", "havent", "hadnt", "aint",
 ]);
 
 const APOSTROPHES = /['’‘`]/g;
@@ -36,6 +57,23 @@ export function stem(word: string): string {
   if (/(?:sh|ch|x|ss)es$/.test(word)) return word.slice(0, -2);
   if (word.endsWith("s") && !/(?:ss|us|is)$/.test(word)) return word.slice(0, -1);
   return word;
+}
+
+const porterMemo = new Map<string, string>();
+/**
+ * The Porter stem of a letters-only word (M. F. Porter, "An algorithm for suffix stripping",
+ * Program 14(3), 1980), through the `stemmer` package: "jerking" and "jerks" both become "jerk",
+ * "braking" and "brakes" "brake". Used beside the word itself, never instead of it, so a word still
+ * being typed ("vibrati") keeps matching as a prefix of the words as written.
+ */
+export function porterStem(word: string): string {
+  let s = porterMemo.get(word);
+  if (s === undefined) {
+    s = word.length > 3 && LETTERS_ONLY.test(word) ? stemmer(word) : word;
+    if (porterMemo.size > 100_000) porterMemo.clear(); // bounded: vocabularies are a few thousand words
+    porterMemo.set(word, s);
+  }
+  return s;
 }
 
 /** Normalised, stemmed words in order (stopwords kept: phrases such as "at speed" need them). */

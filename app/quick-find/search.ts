@@ -9,6 +9,12 @@ import { ENTRY_KINDS, type EntryKind, type ResultGroup, type ScoredEntry, type S
 export const DEFAULT_LIMIT = 6;
 /** Results weaker than this share of the best one are noise at that point of typing. */
 export const RELATIVE_FLOOR = 0.45;
+/**
+ * A match covering a third of the query or less (mean per-word match quality ≤ 0.33, where the
+ * word itself in the name is 1) is weak: on the benchmark's phrases such hits were nearly always
+ * the wrong symptom. It is returned flagged, after the real results, never recorded by default.
+ */
+export const WEAK_QUALITY = 0.33;
 
 export function search(index: QuickFindIndex | readonly QuickFindIndex[], query: string, opts: SearchOptions = {}): ResultGroup[] {
   const indexes: readonly QuickFindIndex[] = Array.isArray(index) ? index : [index as QuickFindIndex];
@@ -20,20 +26,41 @@ export function search(index: QuickFindIndex | readonly QuickFindIndex[], query:
   if (parsed.tokens.length === 0) return browse(indexes, kinds, recentIds, limit);
 
   const recent = new Set(recentIds);
-  const scored: ScoredEntry[] = indexes.flatMap((ix) => scoreIndex(ix, { query: parsed, kinds, recent, limit }));
+  let scored: ScoredEntry[] = indexes.flatMap((ix) => scoreIndex(ix, { query: parsed, kinds, recent, limit }));
+  for (const s of scored) s.weak = (s.quality ?? 1) <= WEAK_QUALITY;
   const best = scored.reduce((m, s) => Math.max(m, s.score), 0);
-  return group(
-    scored.filter((s) => s.score >= best * RELATIVE_FLOOR),
-    limit,
-  );
+  scored = scored.filter((s) => s.score >= best * RELATIVE_FLOOR);
+  if (parsed.codes.length && kinds.has("symptom")) scored = withCode(indexes, scored, parsed.codes[0], best);
+  return group(scored, limit);
+}
+
+/**
+ * A trouble code typed as a code lands on its own symptom, or else on the generic "trouble code
+ * stored" symptom with the code kept, ahead of anything the words matched.
+ */
+function withCode(indexes: readonly QuickFindIndex[], scored: ScoredEntry[], code: string, best: number): ScoredEntry[] {
+  let hit: { ix: QuickFindIndex; d: number } | null = null;
+  for (const ix of indexes) {
+    const d = ix.dtcEntry.get(code);
+    if (d !== undefined) {
+      hit = { ix, d };
+      break;
+    }
+  }
+  if (!hit) for (const ix of indexes) if (ix.anyDtcEntry >= 0 && !hit) hit = { ix, d: ix.anyDtcEntry };
+  if (!hit) return scored;
+  const entry = hit.ix.entries[hit.d];
+  const rest = scored.filter((s) => s.entry !== entry);
+  return [{ entry, score: Math.max(best, 1) + 1, quality: 1, weak: false, present: true, code }, ...rest];
 }
 
 function group(scored: ScoredEntry[], limit: number): ResultGroup[] {
   const groups: ResultGroup[] = [];
   for (const kind of ENTRY_KINDS) {
+    // Real matches first; weak ones after them, flagged, so a weak hit is never the default pick.
     const items = scored
       .filter((s) => s.entry.kind === kind)
-      .sort((a, b) => b.score - a.score || a.entry.title.localeCompare(b.entry.title))
+      .sort((a, b) => Number(a.weak === true) - Number(b.weak === true) || b.score - a.score || a.entry.title.localeCompare(b.entry.title))
       .slice(0, limit);
     if (items.length) groups.push({ kind, items });
   }

@@ -21,6 +21,7 @@ export function computeContributions(index: ModelIndex, items: readonly Evidence
   for (let i = 0; i < items.length; i++) {
     const item = items[i];
     lik.fill(item.defaultLik);
+    lik[L] = item.unlistedLik;
     for (let j = 0; j < item.leaves.length; j++) lik[item.leaves[j]] = item.liks[j];
     let marginal = sumTails(pi, lik, tailPL, tailP);
     if (!(marginal > 0)) {

@@ -12,7 +12,7 @@ export function diagnose(model: Model | CompiledModel, evidence: Evidence, optio
   const opts = resolveOptions(options);
   const compiled = toCompiled(model);
   const index = compiled.scoped(opts.unlistedPrior);
-  const items = resolveEvidence(index, evidence, opts.ownerReliability);
+  const items = resolveEvidence(index, evidence, opts.ownerReliability, opts.unlistedSymptomRate);
   const post = computePosterior(index, items);
   return { ranking: rankFrom(compiled, index, items, post), plan: planFrom(compiled, index, evidence, post, opts.maxSkill) };
 }

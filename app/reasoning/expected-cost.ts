@@ -1,12 +1,16 @@
-// Expected cost of running checks in a given order, stopping at the first check that fails:
-//   ECR = Σ_i C_i · P(every check before step i passed).
-// Under the single-fault model with checks independent given the cause,
-//   P(all of k_1..k_{i−1} pass) = Σ_h P(h | e) · Π_{j<i} (1 − q_j(h)),
-// with q_j(h) = P(check j fails | h). For perfect single-cause checks this is the textbook
-// 1 − Σ_{j<i} p_j (Heckerman, Breese & Rommelse 1995); the last step counts too.
+// Expected cost of running checks in a given order until one of them finds the fault:
+//   ECR = Σ_i C_i · P(no check before step i has found the fault).
+// A check finds the fault when it fails because of a fault it bears on; under the single-fault
+// model with checks independent given the cause,
+//   P(k_1..k_{i−1} found nothing) = Σ_h P(h | e) · Π_{j<i} (1 − d_j(h)),
+// with d_j(h) = P(check j fails | h) on the leaves check j bears on and 0 elsewhere. A false alarm
+// finds nothing: the technician follows it up, finds the part sound and the search goes on — the
+// same reading of a false alarm as the plan's ratio rule, P(find) / cost. For perfect single-cause
+// checks this is the textbook Σ C_i (1 − Σ_{j<i} p_j) (Heckerman, Breese & Rommelse 1995); the last
+// step counts too, and "not in the knowledge base" (which no check finds) runs every step.
 //
-// Linear time: every hypothesis a check does not bear on shrinks by the same factor (1 − false
-// alarm), so that factor is kept once as G and only the leaves the check bears on are updated.
+// Linear time: a check changes only the survival of the leaves it bears on, so the whole order
+// costs O(H + Σ bearings).
 import type { CheckLeaves } from "./check-leaves";
 import type { ModelIndex } from "./model-index";
 
@@ -21,9 +25,9 @@ export function failProbability(index: ModelIndex, cl: CheckLeaves, prob: Float6
 
 /**
  * P(the check fails because of the fault it bears on) = Σ_{borne leaves} P(h)·q(h). This is what
- * the plan calls the chance of finding the fault: a false alarm stops the search without finding
- * anything, so it must not make an unrelated cheap check look worth doing. For perfect
- * single-cause checks (no false alarms) it equals P(fail), so the ordering theorem is unchanged.
+ * the plan calls the chance of finding the fault: a false alarm finds nothing, so it must not make
+ * an unrelated cheap check look worth doing. For perfect single-cause checks (no false alarms) it
+ * equals P(fail), so the ordering theorem is unchanged.
  */
 export function detectProbability(cl: CheckLeaves, prob: Float64Array, k: number): number {
   let p = 0;
@@ -31,57 +35,47 @@ export function detectProbability(cl: CheckLeaves, prob: Float64Array, k: number
   return Math.min(1, Math.max(0, p));
 }
 
+/** Which hypotheses are still unfound partway through an order, and how likely that is in all. */
+export class Survival {
+  readonly t: Float64Array; // P(h and nothing so far has found it)
+  total = 1; // Σ t: P(the plan gets this far)
+  constructor(prob: Float64Array) {
+    this.t = prob.slice();
+    let s = 0;
+    for (let h = 0; h < this.t.length; h++) s += this.t[h];
+    this.total = s;
+  }
+  reach(): number {
+    return Math.min(1, Math.max(0, this.total));
+  }
+  /** P(the plan gets this far and check k does not find the fault). */
+  afterCheck(cl: CheckLeaves, k: number): number {
+    let found = 0;
+    for (let j = cl.start[k]; j < cl.start[k + 1]; j++) found += this.t[cl.leaf[j]] * cl.pFail[j];
+    return Math.min(1, Math.max(0, this.total - found));
+  }
+  /** Run check k: the leaves it bears on survive only if it does not find them. */
+  advance(cl: CheckLeaves, k: number): void {
+    for (let j = cl.start[k]; j < cl.start[k + 1]; j++) {
+      const h = cl.leaf[j];
+      const found = this.t[h] * cl.pFail[j];
+      this.t[h] -= found;
+      this.total -= found;
+    }
+  }
+}
+
 export type OrderCost = { total: number; reached: Float64Array }; // reached[i] = P(step i is run)
 
 export function expectedCost(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, order: ArrayLike<number>): OrderCost {
-  const t = prob.slice(); // survival of each hypothesis, relative to G
-  let T = 1; // Σ t
-  let G = 1;
+  const s = new Survival(prob);
   let total = 0;
-  // The hypotheses that can still be alive: all of them until a check with false-alarm rate 1
-  // (it fails unless one of its own causes is there) leaves only the leaves it bears on. Keeping
-  // that set small is what bounds the cost: O(H + Σ bearings) for the whole order, never O(K·H).
-  let live: Int32Array | null = null;
   const reached = new Float64Array(order.length);
-  for (let s = 0; s < order.length; s++) {
-    const k = order[s];
-    const reach = Math.min(1, Math.max(0, G * T));
-    reached[s] = reach;
-    total += index.cost[k] * reach;
-    const from = cl.start[k];
-    const to = cl.start[k + 1];
-    const g = 1 - index.falseAlarm[k];
-    if (g > 0) {
-      for (let j = from; j < to; j++) {
-        const h = cl.leaf[j];
-        const next = (t[h] * (1 - cl.pFail[j])) / g;
-        T += next - t[h];
-        t[h] = next;
-      }
-      G *= g;
-      if (G < 1e-150) {
-        // Fold G into t before it underflows (it shrinks by every false-alarm rate).
-        T = fold(t, G, live);
-        G = 1;
-      }
-    } else {
-      // False alarm 1: only the leaves this check can pass on survive it.
-      const kept = new Float64Array(to - from);
-      for (let j = from; j < to; j++) kept[j - from] = t[cl.leaf[j]] * G * (1 - cl.pFail[j]);
-      if (live === null) t.fill(0);
-      else for (let i = 0; i < live.length; i++) t[live[i]] = 0;
-      T = 0;
-      for (let j = from; j < to; j++) T += t[cl.leaf[j]] = kept[j - from];
-      live = cl.leaf.slice(from, to);
-      G = 1;
-    }
+  for (let i = 0; i < order.length; i++) {
+    const k = order[i];
+    reached[i] = s.reach();
+    total += index.cost[k] * reached[i];
+    s.advance(cl, k);
   }
   return { total, reached };
-}
-
-function fold(t: Float64Array, factor: number, live: Int32Array | null): number {
-  let sum = 0;
-  if (live === null) for (let h = 0; h < t.length; h++) sum += t[h] *= factor;
-  else for (let i = 0; i < live.length; i++) sum += t[live[i]] *= factor;
-  return sum;
 }

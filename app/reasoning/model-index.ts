@@ -2,6 +2,8 @@
 // bearings grouped by check (CSR arrays). Built in one pass over the model, so a whole rank +
 // plan stays linear in its size. Every range and cross-reference is checked here, so the maths
 // downstream never sees NaN. Priors depend on the unlisted share, so they are added per call.
+import { READING_BANDS, type ReadingBand } from "./bands";
+import { conditionMask } from "./conditions";
 import { checkCostValue, checkProbability, fail } from "./errors";
 import { LeafExpander } from "./expand";
 import { DEFAULT_CHECK_SKILL, skillRank } from "./options";
@@ -16,9 +18,11 @@ export type BaseIndex = {
   leafWeightSum: number;
   symptomIndex: Map<string, number>;
   leak: Float64Array;
+  unlistedP: Float64Array; // the symptom's own P(s | not in the knowledge base), NaN where it has none
   linkStart: Int32Array; // links of symptom s: linkNode/linkP[linkStart[s] .. linkStart[s+1])
   linkNode: Int32Array; // cause index (leaf or inner node)
   linkP: Float64Array;
+  linkWhen: Int32Array | null; // conditions under which each link's cause shows the symptom, as bits; null if no link has any
   checkIndex: Map<string, number>;
   checkIds: string[];
   checkNames: (string | undefined)[];
@@ -28,6 +32,7 @@ export type BaseIndex = {
   bearStart: Int32Array; // bearings of check k: bearNode/bearP[bearStart[k] .. bearStart[k+1])
   bearNode: Int32Array;
   bearP: Float64Array;
+  bearGraded: Float64Array | null; // 4 per bearing in READING_BANDS order, NaN where none; null if no bearing has any
   expander: LeafExpander;
 };
 
@@ -48,11 +53,13 @@ export function buildIndex(model: Model): BaseIndex {
 
   const symptomIndex = new Map<string, number>();
   const leak = new Float64Array(model.symptoms.length);
+  const unlistedP = new Float64Array(model.symptoms.length).fill(Number.NaN);
   for (let i = 0; i < model.symptoms.length; i++) {
     const s = model.symptoms[i];
     if (symptomIndex.has(s.id)) fail("DUPLICATE_ID", `Two symptoms have the id "${s.id}".`);
     symptomIndex.set(s.id, i);
     leak[i] = checkProbability(s.leak, () => `The leak of symptom "${s.id}"`);
+    if (s.unlisted !== undefined) unlistedP[i] = checkProbability(s.unlisted, () => `P(${s.id} | not in the knowledge base)`);
   }
 
   const links = model.links ?? [];
@@ -70,6 +77,7 @@ export function buildIndex(model: Model): BaseIndex {
     linkCause[i] = c;
   }
   const link = groupBy(linkSym, linkCause, model.symptoms.length, links);
+  const linkWhen = link.when.some((w) => w !== 0) ? link.when : null;
   rejectDuplicates(link.start, link.node, tree, (s, c) => `symptom "${model.symptoms[s].id}" and cause "${c}"`);
 
   const checks = model.checks ?? [];
@@ -86,6 +94,7 @@ export function buildIndex(model: Model): BaseIndex {
   }
   const bearNode = new Int32Array(bearStart[checks.length]);
   const bearP = new Float64Array(bearStart[checks.length]);
+  let bearGraded: Float64Array | null = null;
   for (let i = 0; i < checks.length; i++) {
     const k = checks[i];
     if (checkIndex.has(k.id)) fail("DUPLICATE_ID", `Two checks have the id "${k.id}".`);
@@ -100,6 +109,10 @@ export function buildIndex(model: Model): BaseIndex {
       bearNode[at] = c;
       if (typeof b.pFail !== "number" || !(b.pFail >= 0 && b.pFail <= 1)) checkProbability(b.pFail, () => `P(${k.id} fails | ${b.causeId})`);
       bearP[at] = b.pFail;
+      if (b.graded !== undefined) {
+        bearGraded ??= new Float64Array(4 * bearP.length).fill(Number.NaN);
+        gradedInto(bearGraded, at, b.graded, () => `${k.id} on ${b.causeId}`);
+      }
     }
   }
   const bear = { start: bearStart, node: bearNode, value: bearP };
@@ -113,9 +126,11 @@ export function buildIndex(model: Model): BaseIndex {
     leafWeightSum,
     symptomIndex,
     leak,
+    unlistedP,
     linkStart: link.start,
     linkNode: link.node,
     linkP: link.value,
+    linkWhen,
     checkIndex,
     checkIds: checks.map((k) => k.id),
     checkNames: checks.map((k) => k.name),
@@ -125,8 +140,19 @@ export function buildIndex(model: Model): BaseIndex {
     bearStart: bear.start,
     bearNode: bear.node,
     bearP: bear.value,
+    bearGraded,
     expander: new LeafExpander(tree),
   };
+}
+
+function gradedInto(out: Float64Array, at: number, graded: Record<ReadingBand, number>, what: () => string) {
+  let sum = 0;
+  READING_BANDS.forEach((band, i) => {
+    const p = checkProbability(graded?.[band], () => `P(${band} | ${what()})`);
+    out[4 * at + i] = p;
+    sum += p;
+  });
+  if (Math.abs(sum - 1) > 1e-6) fail("INVALID_PROBABILITY", `The graded figures of ${what()} add up to ${sum}; the four bands must add up to 1.`);
 }
 
 // Inner nodes' priors are validated but ignored: a node's share is always the sum of its leaves.
@@ -161,12 +187,22 @@ function groupBy(group: Int32Array, node: Int32Array, groups: number, links: Mod
   const at = start.slice(0, groups);
   const outNode = new Int32Array(group.length);
   const outValue = new Float64Array(group.length);
+  const outWhen = new Int32Array(group.length);
   for (let i = 0; i < group.length; i++) {
     const k = at[group[i]]++;
     outNode[k] = node[i];
     outValue[k] = links[i].p;
+    if (links[i].when?.length) outWhen[k] = whenMask(links[i]);
   }
-  return { start, node: outNode, value: outValue };
+  return { start, node: outNode, value: outValue, when: outWhen };
+}
+
+function whenMask(l: Model["links"][number]): number {
+  try {
+    return conditionMask(l.when, () => `The link of "${l.symptomId}" to "${l.causeId}"`);
+  } catch (e) {
+    return fail("INVALID_INPUT", (e as Error).message);
+  }
 }
 
 function rejectDuplicates(start: Int32Array, node: Int32Array, tree: Tree, what: (g: number, cause: string) => string) {

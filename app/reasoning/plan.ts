@@ -7,6 +7,7 @@ import { fail } from "./errors";
 import { resolveEvidence } from "./evidence";
 import { toCompiled, type CompiledModel } from "./compiled";
 import { detectProbability, expectedCost } from "./expected-cost";
+import { improveBySwaps } from "./plan-order";
 import { compareIds } from "./ids";
 import type { ModelIndex } from "./model-index";
 import { resolveOptions, type PlanOptions } from "./options";
@@ -16,6 +17,9 @@ import { orderByKeyDesc } from "./sort-keys";
 import { whatIfFrom, type WhatIf } from "./what-if";
 
 const RATIO_TIE_BITS = 20;
+/** Neighbour-swap passes over an order, over its first SWAP_WINDOW steps: a handful settle every order seen in practice. */
+const SWAP_PASSES = 8;
+const SWAP_WINDOW = 64;
 
 export type PlanStep = {
   checkId: string;
@@ -24,7 +28,7 @@ export type PlanStep = {
   cost: number;
   ratio: number; // pFind / cost
   skill: Skill;
-  pReached: number; // P(the plan gets this far: every earlier step passed)
+  pReached: number; // P(the plan gets this far: no earlier step found the fault)
 };
 
 export type AboveSkillStep = Omit<PlanStep, "pReached"> & {
@@ -35,7 +39,8 @@ export type Plan = {
   steps: PlanStep[];
   expectedCost: number; // ECR of `steps` in this order
   cheapestFirstExpectedCost: number; // ECR of the same checks, cheapest first (ties: id)
-  saving: number; // cheapestFirstExpectedCost − expectedCost
+  saving: number; // cheapestFirstExpectedCost − expectedCost, never below 0
+  order: "value" | "cheapest-first"; // the order shown started from best value (improved by swaps) or from cheapest-first
   aboveSkill: AboveSkillStep[]; // checks that need someone more skilled than maxSkill, in value order
   next: WhatIf | null; // what-if for steps[0]
 };
@@ -44,7 +49,7 @@ export function planChecks(model: Model | CompiledModel, evidence: Evidence, opt
   const opts = resolveOptions(options);
   const compiled = toCompiled(model);
   const index = compiled.scoped(opts.unlistedPrior);
-  const items = resolveEvidence(index, evidence, opts.ownerReliability);
+  const items = resolveEvidence(index, evidence, opts.ownerReliability, opts.unlistedSymptomRate);
   return planFrom(compiled, index, evidence, computePosterior(index, items), opts.maxSkill);
 }
 
@@ -53,7 +58,7 @@ export function orderCost(model: Model | CompiledModel, evidence: Evidence, chec
   const opts = resolveOptions(options);
   const compiled = toCompiled(model);
   const index = compiled.scoped(opts.unlistedPrior);
-  const post = computePosterior(index, resolveEvidence(index, evidence, opts.ownerReliability));
+  const post = computePosterior(index, resolveEvidence(index, evidence, opts.ownerReliability, opts.unlistedSymptomRate));
   const order = checkIds.map((id) => {
     const k = index.checkIndex.get(id);
     if (k === undefined) fail("UNKNOWN_ID", `The order names check "${id}", which is not in the model.`);
@@ -96,12 +101,23 @@ export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: E
       aboveSkill.push(step);
     }
   }
-  const within = withinAll.subarray(0, n);
-  const ecr = expectedCost(index, cl, post.prob, within);
   const cheapest = new Int32Array(n);
   let c = 0;
   for (const k of compiled.costOrder()) if (!done[k] && index.skill[k] <= maxSkill) cheapest[c++] = k;
   const cheapestFirstExpectedCost = expectedCost(index, cl, post.prob, cheapest).total;
+  // The value order, improved by neighbour swaps where the ratio rule's assumptions do not hold.
+  // Should it still cost more than cheapest-first, cheapest-first improved the same way is shown
+  // instead: every swap lowers the cost, so the plan is never worse than cheapest-first.
+  let within = withinAll.slice(0, n);
+  improveBySwaps(index, cl, post.prob, within, SWAP_PASSES, SWAP_WINDOW);
+  let ecr = expectedCost(index, cl, post.prob, within);
+  let started: Plan["order"] = "value";
+  if (ecr.total > cheapestFirstExpectedCost) {
+    const alt = cheapest.slice();
+    improveBySwaps(index, cl, post.prob, alt, SWAP_PASSES, SWAP_WINDOW);
+    const altEcr = expectedCost(index, cl, post.prob, alt);
+    if (altEcr.total < ecr.total) [within, ecr, started] = [alt, altEcr, "cheapest-first"];
+  }
   const steps: PlanStep[] = new Array(within.length);
   for (let s = 0; s < within.length; s++) {
     const k = within[s];
@@ -114,7 +130,8 @@ export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: E
     steps,
     expectedCost: ecr.total,
     cheapestFirstExpectedCost,
-    saving: cheapestFirstExpectedCost - ecr.total,
+    saving: Math.max(0, cheapestFirstExpectedCost - ecr.total),
+    order: started,
     aboveSkill,
     next: within.length > 0 ? whatIfFrom(index, post, within[0]) : null,
   };

@@ -15,19 +15,25 @@ export type Posterior = {
 
 export function computePosterior(index: ModelIndex, items: readonly EvidenceItem[]): Posterior {
   const H = index.hypotheses;
+  const U = index.leafCount; // "not in the knowledge base"
   const lp = index.logPrior.slice();
   for (const item of items) {
     const d = item.defaultLik;
     if (d > 0) {
       const ld = Math.log(d);
-      // A linked leaf gets its own figure instead of the default: add the difference.
+      // A linked leaf (and "not in the knowledge base") gets its own figure instead of the default: add the difference.
       for (let j = 0; j < item.leaves.length; j++) lp[item.leaves[j]] += Math.log(item.liks[j]) - ld;
+      if (item.unlistedLik !== d) lp[U] += Math.log(item.unlistedLik) - ld;
     } else {
-      // Default 0 (e.g. a symptom with leak 0): only the linked leaves can explain it. Rare, so dense.
+      // Default 0 (e.g. a symptom with leak 0): only the linked leaves (and maybe U) can explain it. Rare, so dense.
       const keep = new Uint8Array(H);
       for (let j = 0; j < item.leaves.length; j++) {
         keep[item.leaves[j]] = 1;
         lp[item.leaves[j]] += Math.log(item.liks[j]);
+      }
+      if (item.unlistedLik > 0) {
+        keep[U] = 1;
+        lp[U] += Math.log(item.unlistedLik);
       }
       for (let h = 0; h < H; h++) if (!keep[h]) lp[h] = -Infinity;
     }

@@ -66,7 +66,7 @@ export function rankCauses(model: Model | CompiledModel, evidence: Evidence, opt
   const opts = resolveOptions(options);
   const compiled = toCompiled(model);
   const index = compiled.scoped(opts.unlistedPrior);
-  const items = resolveEvidence(index, evidence, opts.ownerReliability);
+  const items = resolveEvidence(index, evidence, opts.ownerReliability, opts.unlistedSymptomRate);
   return rankFrom(compiled, index, items, computePosterior(index, items));
 }
 

@@ -3,6 +3,8 @@
 // so a Model built in code is as safe as one parsed here.
 import { z } from "zod";
 import { SKILLS } from "~/domain/people";
+import { READING_BANDS } from "./bands";
+import { CONDITIONS } from "./conditions";
 import { ReasoningError } from "./errors";
 
 /** The domain's skill levels, lowest first (app/domain/people.ts). */
@@ -12,6 +14,10 @@ export type Skill = z.infer<typeof SkillSchema>;
 
 const id = z.string().min(1);
 const probability = z.number().min(0).max(1);
+export const ConditionSchema = z.enum(CONDITIONS);
+export const ReadingBandSchema = z.enum(READING_BANDS);
+// P(reading in each band | cause), summing to 1: how far a measurement misses when this cause is there.
+const bandFigures = z.object({ well_within: probability, near: probability, beyond: probability, far_beyond: probability });
 
 export const CauseSchema = z.object({
   id,
@@ -24,9 +30,18 @@ export const SymptomSchema = z.object({
   id,
   leak: probability, // P(symptom | no listed cause)
   name: z.string().optional(),
+  // P(symptom | the fault is not in the knowledge base), where a curator knows better than the
+  // default max(leak, unlistedSymptomRate): a code the base does not list points outside it.
+  unlisted: probability.optional(),
 });
 
-export const LinkSchema = z.object({ symptomId: id, causeId: id, p: probability }); // P(symptom | cause)
+export const LinkSchema = z.object({
+  symptomId: id,
+  causeId: id,
+  p: probability, // P(symptom | cause)
+  // The conditions under which this cause shows the symptom (absent: any); see docs/reasoning.md.
+  when: z.array(ConditionSchema).optional(),
+});
 
 export const CheckSchema = z.object({
   id,
@@ -34,7 +49,8 @@ export const CheckSchema = z.object({
   falseAlarm: probability, // P(check fails | none of the causes it bears on)
   name: z.string().optional(),
   skill: SkillSchema.optional(), // absent: "technician"
-  bears: z.array(z.object({ causeId: id, pFail: probability })), // causeId may be an inner node
+  // causeId may be an inner node; graded (optional) gives P(band | cause) for a measured reading.
+  bears: z.array(z.object({ causeId: id, pFail: probability, graded: bandFigures.optional() })),
 });
 
 export const ModelSchema = z.object({
@@ -48,9 +64,14 @@ export const ObservationSchema = z.object({
   symptomId: id,
   present: z.boolean(),
   source: z.enum(["owner", "technician"]).optional(), // absent: "technician"
+  conditions: z.array(ConditionSchema).optional(), // what it was seen under: "judder when braking from speed"
 });
 
-export const FindingSchema = z.object({ checkId: id, result: z.enum(["pass", "fail"]) });
+export const FindingSchema = z.object({
+  checkId: id,
+  result: z.enum(["pass", "fail"]),
+  band: ReadingBandSchema.optional(), // a measured reading's band (app/measure gradeReading); must agree with result
+});
 
 export const EvidenceSchema = z.object({
   observations: z.array(ObservationSchema),

@@ -31,13 +31,13 @@ export function whatIf(model: Model | CompiledModel, evidence: Evidence, checkId
   if (evidence?.findings?.some((f) => f.checkId === checkId)) {
     fail("ALREADY_RECORDED", `Check "${checkId}" already has a result; what-if is for checks not yet done.`);
   }
-  const items = resolveEvidence(index, evidence, opts.ownerReliability);
+  const items = resolveEvidence(index, evidence, opts.ownerReliability, opts.unlistedSymptomRate);
   return whatIfFrom(index, computePosterior(index, items), k);
 }
 
 export function whatIfFrom(index: ModelIndex, post: Posterior, k: number): WhatIf {
   const failed = checkItem(index, k, true);
-  const passed: EvidenceItem = { ...failed, defaultLik: 1 - failed.defaultLik, liks: failed.liks.map((q) => 1 - q) };
+  const passed: EvidenceItem = { ...failed, defaultLik: 1 - failed.defaultLik, unlistedLik: 1 - failed.unlistedLik, liks: failed.liks.map((q) => 1 - q) };
   const pFail = marginal(post, failed);
   const pPass = marginal(post, passed); // summed on its own, not 1 − pFail, to stay exact near 0
   return {
@@ -50,7 +50,8 @@ export function whatIfFrom(index: ModelIndex, post: Posterior, k: number): WhatI
 
 // Σ_h P(h)·lik(h) = d + Σ_{linked leaves} P(h)·(lik(h) − d), since Σ_h P(h) = 1.
 function marginal(post: Posterior, item: EvidenceItem): number {
-  let p = item.defaultLik;
+  const U = post.prob.length - 1;
+  let p = item.defaultLik + post.prob[U] * (item.unlistedLik - item.defaultLik);
   for (let j = 0; j < item.leaves.length; j++) p += post.prob[item.leaves[j]] * (item.liks[j] - item.defaultLik);
   return Math.min(1, Math.max(0, p));
 }
@@ -80,7 +81,7 @@ function outcome(index: ModelIndex, post: Posterior, item: EvidenceItem, z: numb
   }
   if (best >= 0) consider(best, post.prob[best] * item.defaultLik);
   for (let j = 0; j < item.leaves.length; j++) consider(item.leaves[j], post.prob[item.leaves[j]] * item.liks[j]);
-  const unlisted = (post.prob[L] * item.defaultLik) / z;
+  const unlisted = (post.prob[L] * item.unlistedLik) / z;
   if (top < 0 || unlisted > topWeight / z) return { topCauseId: null, probability: unlisted, unlisted };
   return { topCauseId: idOf(top), probability: topWeight / z, unlisted };
 }

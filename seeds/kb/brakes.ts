@@ -1,6 +1,6 @@
 // Brakes, part 1: discs, pads and their fit in the carrier, calipers and slide pins, and the noises
 // of the brake area that are not wear. Part 2 (hydraulics, ABS, parking brake) is brakes-hydraulics.ts.
-import { bearsOn, componentNode, failureMode, producesSymptoms, SAY, systemNode } from "./build";
+import { bearsOn, componentNode, failureMode, producesSymptoms, SAY, systemNode, gradedOn } from "./build";
 import type { KnowledgeBaseSeed } from "./types";
 
 const fm = (parent: string, f: Parameters<typeof failureMode>[2]) => failureMode("brakes", parent, f);
@@ -162,6 +162,7 @@ export const brakes: KnowledgeBaseSeed = {
       tools: ["disc micrometer", "inspection lamp"],
       result: { kind: "measurement", quantity: "thickness above the disc's stamped minimum", unit: "mm",
         rule: "value >= 0 mm", // common practice: the limit is the minimum stamped on the disc itself; maker-specific — use the maker's figure where unreadable
+        gradeScale: "1 mm", // a limit of 0 is no scale: half a millimetre under the stamp is "beyond", more is "far beyond"
         failMeans: "The disc is below its minimum thickness: replace both discs on the axle with new pads." },
       falseAlarm: 0.02 },
     { key: "disc_surface_visual", name: "Inspect the disc faces and pads for hot spots, deposits, scoring and rust", skill: "apprentice", minutes: 15, consumablesCost: 0,
@@ -296,11 +297,25 @@ export const brakes: KnowledgeBaseSeed = {
   checkLinks: [
     ...bearsOn("brake_road_test", { brakes: 0.6 }),
     ...bearsOn("brake_noise_low_speed", { brake_pad_carrier_rattle: 0.6, stone_in_brake_shield: 0.75, dust_shield_touching: 0.7, caliper_bolt_loose: 0.6, slide_pins_worn: 0.3 }),
-    ...bearsOn("disc_runout_dial_gauge", { brake_disc_runout_dtv: 0.85, wheel_bearing_worn: 0.35, brake_pad_deposits: 0.15, hub_face_corroded: 0.7 }),
+    ...bearsOn("disc_runout_dial_gauge", { brake_pad_deposits: 0.15 }),
+    // A worn bearing adds a little run-out; a distorted disc or a rusty hub face a lot.
+    ...gradedOn("disc_runout_dial_gauge", {
+      brake_disc_runout_dtv: { well_within: 0.03, near: 0.12, beyond: 0.45, far_beyond: 0.4 },
+      wheel_bearing_worn: { well_within: 0.25, near: 0.4, beyond: 0.3, far_beyond: 0.05 },
+      hub_face_corroded: { well_within: 0.05, near: 0.25, beyond: 0.45, far_beyond: 0.25 },
+    }),
     ...bearsOn("disc_thickness_variation", { brake_disc_runout_dtv: 0.8, brake_pad_deposits: 0.45 }),
-    ...bearsOn("disc_min_thickness", { brake_disc_worn_thin: 0.95, brake_pads_metal: 0.3 }),
+    ...gradedOn("disc_min_thickness", {
+      brake_disc_worn_thin: { well_within: 0.01, near: 0.04, beyond: 0.55, far_beyond: 0.4 },
+      brake_pads_metal: { well_within: 0.3, near: 0.4, beyond: 0.2, far_beyond: 0.1 },
+    }),
     ...bearsOn("disc_surface_visual", { brake_pad_deposits: 0.7, brake_disc_runout_dtv: 0.35, brake_disc_corrosion: 0.9, brake_pads_metal: 0.95, brake_pad_noise: 0.35, brake_disc_worn_thin: 0.6 }),
-    ...bearsOn("pad_thickness", { brake_pads_worn: 0.9, brake_pads_metal: 0.98 }),
+    // Graded: pads near the limit mostly read just under the advisory line, pads on the backing
+    // plate far under it (a 0.8 mm reading points to the backing plate). Starter estimates.
+    ...gradedOn("pad_thickness", {
+      brake_pads_worn: { well_within: 0.02, near: 0.08, beyond: 0.75, far_beyond: 0.15 },
+      brake_pads_metal: { well_within: 0.005, near: 0.015, beyond: 0.08, far_beyond: 0.9 },
+    }),
     ...bearsOn("pad_taper_visual", { slide_pins_worn: 0.7, brake_caliper_sticking: 0.5, brake_pad_carrier_rattle: 0.35 }),
     ...bearsOn("caliper_carrier_rattle_check", { brake_pad_carrier_rattle: 0.85, slide_pins_worn: 0.5, caliper_bolt_loose: 0.6 }),
     ...bearsOn("caliper_bolt_torque", { caliper_bolt_loose: 0.95 }),

@@ -2,6 +2,7 @@
 // They only fill in the repetitive fields; every value a curator cares about stays in the
 // system files.
 
+import type { BandFigures } from "../../app/reasoning/bands";
 import type {
   Applicability,
   CauseSeed,
@@ -49,6 +50,15 @@ export function producesSymptoms(cause: string, bySymptom: Record<string, number
 /** Check links written check-first: P(check fails | cause); a cause may be a component or system node. */
 export function bearsOn(check: string, byCause: Record<string, number>): CheckLinkSeed[] {
   return Object.entries(byCause).map(([cause, pFail]) => ({ check, cause, pFail }));
+}
+
+/**
+ * Check links with graded figures for a measurement: P(well within / near / beyond / far beyond
+ * the limit | cause), four starter estimates adding up to 1. The link's P(fail) is the two
+ * failing bands together, so pass/fail findings keep their meaning.
+ */
+export function gradedOn(check: string, byCause: Record<string, BandFigures>): CheckLinkSeed[] {
+  return Object.entries(byCause).map(([cause, graded]) => ({ check, cause, pFail: Math.round((graded.beyond + graded.far_beyond) * 1e9) / 1e9, graded }));
 }
 
 /** Concatenates the per-system parts into one knowledge base. */

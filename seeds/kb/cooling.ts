@@ -1,7 +1,7 @@
 // Cooling, part 1: thermostat, radiator fan and its control, and the temperature gauge's sender
 // (the engine computer's own coolant sensor is in engine-sensors.ts). Part 2 (the sealed circuit
 // and the heater) is cooling-circuit.ts.
-import { bearsOn, COMBUSTION, componentNode, failureMode, producesSymptoms, SAY, systemNode } from "./build";
+import { bearsOn, COMBUSTION, componentNode, failureMode, producesSymptoms, SAY, systemNode, gradedOn } from "./build";
 import type { KnowledgeBaseSeed } from "./types";
 
 const fm = (parent: string, f: Parameters<typeof failureMode>[2]) => failureMode("cooling", parent, f);
@@ -70,6 +70,7 @@ export const cooling: KnowledgeBaseSeed = {
       tools: ["scan tool"],
       result: { kind: "measurement", quantity: "temperature", unit: "degC",
         rule: "value >= 80 degC", // from memory, common practice: thermostats commonly open at about 82–92 °C; maker-specific — use the maker's figure
+        gradeScale: "20 degC", // 60 °C after the drive is "far beyond": the thermostat is not closing
         failMeans: "The engine runs cold on the move: the thermostat is stuck open, unless the sensor itself reads low (check it)." },
       falseAlarm: 0.06 },
     { key: "fan_switch_on", name: "Warm the engine at idle and confirm the radiator fan switches on", skill: "technician", minutes: 20, consumablesCost: 0,
@@ -123,7 +124,8 @@ export const cooling: KnowledgeBaseSeed = {
   ],
 
   checkLinks: [
-    ...bearsOn("warm_up_temperature", { thermostat_stuck_open: 0.85, ect_sensor_fault: 0.35 }),
+    ...bearsOn("warm_up_temperature", { ect_sensor_fault: 0.35 }),
+    ...gradedOn("warm_up_temperature", { thermostat_stuck_open: { well_within: 0.03, near: 0.12, beyond: 0.35, far_beyond: 0.5 } }),
     ...bearsOn("fan_switch_on", { cooling_fan: 0.9 }),
     ...bearsOn("fan_circuit_test", { fan_not_running: 0.85, fan_control_failed: 0.85 }),
     ...bearsOn("radiator_ir_scan", { radiator_blocked: 0.75, thermostat_stuck_closed: 0.7 }),

@@ -1,6 +1,6 @@
 // Electrical, part 3: central locking and keys, wipers, horn and accessory fuses, heater blower and
 // the airbag circuits' warnings. The system node is in electrical-power.ts.
-import { bearsOn, componentNode, failureMode, producesSymptoms, SAY } from "./build";
+import { bearsOn, componentNode, failureMode, producesSymptoms, SAY, gradedOn } from "./build";
 import type { KnowledgeBaseSeed } from "./types";
 
 const fm = (parent: string, f: Parameters<typeof failureMode>[2]) => failureMode("electrical", parent, f);
@@ -118,6 +118,7 @@ export const electricalComfort: KnowledgeBaseSeed = {
       tools: ["digital multimeter", "small screwdriver"],
       result: { kind: "measurement", quantity: "voltage", unit: "V",
         rule: "value >= 2.8 V", // from memory, common practice: a 3 V lithium coin cell reading under about 2.8 V is near the end of its life
+        gradeScale: "0.3 V", // a cell under 2.65 V is "far beyond"
         failMeans: "The fob battery is low: replace it with the same type; if the fob still fails, the fob itself may need recoding or replacing." },
       falseAlarm: 0.04 },
     { key: "key_recognition_scan", name: "Read the immobiliser's key status and try the spare key", skill: "technician", minutes: 15, consumablesCost: 0,
@@ -233,7 +234,7 @@ export const electricalComfort: KnowledgeBaseSeed = {
 
   checkLinks: [
     ...bearsOn("lock_actuator_test", { door_lock_actuator_failed: 0.85, door_loom_broken: 0.3 }),
-    ...bearsOn("fob_battery_test", { key_fob_battery_flat: 0.85 }),
+    ...gradedOn("fob_battery_test", { key_fob_battery_flat: { well_within: 0.05, near: 0.1, beyond: 0.45, far_beyond: 0.4 } }),
     ...bearsOn("key_recognition_scan", { key_transponder_fault: 0.8, key_fob_battery_flat: 0.3 }),
     ...bearsOn("wiper_motor_test", { wiper_motor_failed: 0.85, wiper_linkage_worn: 0.3 }),
     ...bearsOn("wiper_linkage_inspect", { wiper_linkage_worn: 0.85 }),

@@ -1,7 +1,7 @@
 // Electrical, part 1: battery, terminals and earth straps, charging, starting and parasitic drain.
 // Part 2 (windows, lighting) is electrical-body.ts; part 3 (locking and keys, wipers, horn, fuses,
 // heater blower, airbags) is electrical-comfort.ts.
-import { bearsOn, COMBUSTION, componentNode, failureMode, producesSymptoms, SAY, systemNode } from "./build";
+import { bearsOn, COMBUSTION, componentNode, failureMode, producesSymptoms, SAY, systemNode, gradedOn } from "./build";
 import type { KnowledgeBaseSeed } from "./types";
 
 const fm = (parent: string, f: Parameters<typeof failureMode>[2]) => failureMode("electrical", parent, f);
@@ -95,6 +95,7 @@ export const electricalPower: KnowledgeBaseSeed = {
       tools: ["digital multimeter"],
       result: { kind: "measurement", quantity: "voltage", unit: "V",
         rule: "value >= 12.4 V", // common practice, no published source: a lead-acid battery at rest below about 12.4 V is under-charged
+        gradeScale: "0.4 V", // 12.2 V is "beyond", under 12.2 V "far beyond" (about half charged or less)
         failMeans: "The battery is low: charge it and load-test it; then find out why it was low (drain, charging, short trips or a worn battery)." },
       falseAlarm: 0.08 },
     { key: "battery_conductance_test", name: "Test the battery with a conductance tester against its rating", skill: "apprentice", minutes: 10, consumablesCost: 0,
@@ -119,6 +120,7 @@ export const electricalPower: KnowledgeBaseSeed = {
       tools: ["digital multimeter with min/max", "battery tester", "exhaust extraction"],
       result: { kind: "measurement", quantity: "voltage", unit: "V",
         rule: "value >= 9.6 V", // common practice, from memory: about 9.6 V minimum under cranking load at around 20 °C
+        gradeScale: "1 V", // under 9.1 V is "far beyond"
         failMeans: "The voltage collapses under load: a worn battery, or a starter drawing too much; check terminals before replacing anything." },
       falseAlarm: 0.06 },
     { key: "charging_voltage", name: "Measure charging voltage with the engine running", skill: "technician", minutes: 10, consumablesCost: 0,
@@ -233,11 +235,17 @@ export const electricalPower: KnowledgeBaseSeed = {
 
   checkLinks: [
     ...bearsOn("battery_rest_voltage", { battery_worn: 0.6, parasitic_drain: 0.7, alternator_not_charging: 0.6, battery_terminals_poor: 0.2 }),
-    ...bearsOn("battery_conductance_test", { battery_worn: 0.85 }),
-    ...bearsOn("cranking_voltage", { battery_worn: 0.85, battery_terminals_poor: 0.5, starter_motor_failing: 0.3, earth_strap_failed: 0.3 }),
-    ...bearsOn("charging_voltage", { alternator_not_charging: 0.85, battery_terminals_poor: 0.25, alternator_overcharging: 0.9, aux_belt_worn: 0.3 }),
+    ...gradedOn("battery_conductance_test", { battery_worn: { well_within: 0.05, near: 0.1, beyond: 0.5, far_beyond: 0.35 } }),
+    ...bearsOn("cranking_voltage", { battery_terminals_poor: 0.5, starter_motor_failing: 0.3, earth_strap_failed: 0.3 }),
+    ...gradedOn("cranking_voltage", { battery_worn: { well_within: 0.05, near: 0.1, beyond: 0.45, far_beyond: 0.4 } }),
+    ...bearsOn("charging_voltage", { battery_terminals_poor: 0.25, aux_belt_worn: 0.3 }),
+    // A dead alternator reads battery voltage, far below the window; a slipping belt just below it.
+    ...gradedOn("charging_voltage", {
+      alternator_not_charging: { well_within: 0.03, near: 0.12, beyond: 0.25, far_beyond: 0.6 },
+      alternator_overcharging: { well_within: 0.04, near: 0.06, beyond: 0.4, far_beyond: 0.5 },
+    }),
     ...bearsOn("alternator_load_ripple", { alternator_not_charging: 0.75 }),
-    ...bearsOn("parasitic_draw", { parasitic_drain: 0.9 }),
+    ...gradedOn("parasitic_draw", { parasitic_drain: { well_within: 0.02, near: 0.08, beyond: 0.3, far_beyond: 0.6 } }),
     ...bearsOn("battery_terminal_visual", { battery_terminals_poor: 0.85, earth_strap_failed: 0.5, alternator_overcharging: 0.3 }),
     ...bearsOn("earth_strap_voltage_drop", { earth_strap_failed: 0.85, battery_terminals_poor: 0.4 }),
     ...bearsOn("starter_feed_voltage_drop", { battery_terminals_poor: 0.7, starter_motor_failing: 0.35, earth_strap_failed: 0.7 }),

@@ -1,7 +1,7 @@
 // Engine fuelling and emissions, part 4: diesel glow plugs and their control, exhaust-gas
 // recirculation, and the turbocharger with its hoses and boost control. The types cannot say
 // "turbocharged" yet, so turbo faults apply to combustion engines and their descriptions say so.
-import { bearsOn, COMBUSTION, componentNode, DIESEL_ONLY, failureMode, producesSymptoms, SAY } from "./build";
+import { bearsOn, COMBUSTION, componentNode, DIESEL_ONLY, failureMode, producesSymptoms, SAY, gradedOn } from "./build";
 import type { KnowledgeBaseSeed } from "./types";
 
 const fm = (parent: string, f: Parameters<typeof failureMode>[2]) => failureMode("engine_fuel_emissions", parent, f);
@@ -165,7 +165,7 @@ export const engineDieselTurbo: KnowledgeBaseSeed = {
   ],
 
   checkLinks: [
-    ...bearsOn("glow_plug_resistance", { glow_plugs_failed: 0.9 }),
+    ...gradedOn("glow_plug_resistance", { glow_plugs_failed: { well_within: 0.04, near: 0.06, beyond: 0.2, far_beyond: 0.7 } }),
     ...bearsOn("glow_control_test", { glow_control_failed: 0.85, glow_plugs_failed: 0.2 }),
     ...bearsOn("egr_command_test", { egr_valve_sticking: 0.8 }),
     ...bearsOn("egr_cooler_check", { egr_cooler_leak: 0.8, head_gasket_failed: 0.3 }),

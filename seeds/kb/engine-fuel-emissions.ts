@@ -2,7 +2,7 @@
 // manifold-pressure sensing, throttle, filter). The other parts: engine-sensors.ts (oxygen,
 // coolant-temperature, crank and cam sensors), engine-fuel-delivery.ts (injectors, pump, filter,
 // evaporative system), engine-diesel-turbo.ts (glow plugs, EGR, turbocharger).
-import { bearsOn, COMBUSTION, componentNode, failureMode, producesSymptoms, SAY, SPARK_IGNITION, systemNode } from "./build";
+import { bearsOn, COMBUSTION, componentNode, failureMode, producesSymptoms, SAY, SPARK_IGNITION, systemNode, gradedOn } from "./build";
 import type { KnowledgeBaseSeed } from "./types";
 
 const fm = (parent: string, f: Parameters<typeof failureMode>[2]) => failureMode("engine_fuel_emissions", parent, f);
@@ -212,7 +212,8 @@ export const engineFuelEmissions: KnowledgeBaseSeed = {
 
   checkLinks: [
     ...bearsOn("engine_fault_memory", { engine_fuel_emissions: 0.5 }),
-    ...bearsOn("long_term_fuel_trim", { intake_air_leak: 0.85, maf_sensor_fault: 0.7, lambda_sensor_slow: 0.5, injector_leaking: 0.55, manifold_leak: 0.3, map_sensor_fault: 0.4, fuel_pump_weak: 0.5, fuel_filter_blocked: 0.3, injector_clogged: 0.4, breather_fault: 0.4 }),
+    ...gradedOn("long_term_fuel_trim", { intake_air_leak: { well_within: 0.05, near: 0.1, beyond: 0.4, far_beyond: 0.45 } }),
+    ...bearsOn("long_term_fuel_trim", { maf_sensor_fault: 0.7, lambda_sensor_slow: 0.5, injector_leaking: 0.55, manifold_leak: 0.3, map_sensor_fault: 0.4, fuel_pump_weak: 0.5, fuel_filter_blocked: 0.3, injector_clogged: 0.4, breather_fault: 0.4 }),
     ...bearsOn("misfire_counters_coil_swap", { ignition_coil_failed: 0.85, spark_plugs_worn: 0.4, injector_leaking: 0.2, ignition_lead_tracking: 0.5, injector_clogged: 0.3, injector_circuit_fault: 0.3 }),
     ...bearsOn("spark_plug_inspect", { spark_plugs_worn: 0.9, valve_stem_seals_worn: 0.3, piston_rings_worn: 0.35, injector_leaking: 0.3, ignition_coil_failed: 0.2, cam_cover_gasket_leak: 0.3 }),
     ...bearsOn("ignition_boot_inspect", { ignition_lead_tracking: 0.8, ignition_coil_failed: 0.3 }),

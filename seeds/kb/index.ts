@@ -5,6 +5,7 @@ import { bodyStructure } from "./body-structure";
 import { brakes } from "./brakes";
 import { brakesHydraulics } from "./brakes-hydraulics";
 import { mergeParts } from "./build";
+import { LINK_CONDITIONS } from "./link-conditions";
 import { cooling } from "./cooling";
 import { coolingCircuit } from "./cooling-circuit";
 import { driveline } from "./driveline";
@@ -56,6 +57,15 @@ export const starterKnowledgeBaseParts = {
   troubleCodesOther,
 } satisfies Record<string, KnowledgeBaseSeed>;
 
-export const starterKnowledgeBase: KnowledgeBaseSeed = mergeParts(...Object.values(starterKnowledgeBaseParts));
+const merged = mergeParts(...Object.values(starterKnowledgeBaseParts));
+
+/** Every part merged, with the links' conditions (link-conditions.ts) attached. */
+export const starterKnowledgeBase: KnowledgeBaseSeed = {
+  ...merged,
+  symptomLinks: merged.symptomLinks.map((l) => {
+    const when = LINK_CONDITIONS[`${l.symptom}|${l.cause}`];
+    return when ? { ...l, when } : l;
+  }),
+};
 
 export type { KnowledgeBaseSeed } from "./types";

@@ -11,7 +11,7 @@ const WEAR = { minKm: 60000, youngFactor: 0.3 };
 export const suspensionSteering: KnowledgeBaseSeed = {
   symptoms: [
     { ...sym, key: "clunk_front_bumps", name: "Clunk from the front over bumps", kind: "noise",
-      synonyms: ["clunk over bumps", "knock over bumps", "knocking from the front", "clonk over potholes", "thud over speed bumps", "rattle over rough roads", "clunk"],
+      synonyms: ["clunk over bumps", "knock over bumps", "knocking from the front", "clonk over potholes", "thud over speed bumps", "clunk over rough roads", "clunk"],
       conditions: ["over bumps", "low speed"], leak: 0.05 },
     { ...sym, key: "clunk_rear_bumps", name: "Knock from the back of the car over bumps", kind: "noise",
       synonyms: ["knock from the back", "clonk from the rear", "banging in the boot over bumps", "thump from the back on speed bumps"],

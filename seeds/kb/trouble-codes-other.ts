@@ -17,6 +17,13 @@ export const troubleCodesOther: KnowledgeBaseSeed = {
     troubleCode("P0562", "system voltage low", "electrical", ["low voltage code", "battery voltage low code"]), // from memory
     troubleCode("P0563", "system voltage high", "electrical", ["system voltage high code", "overcharging code"]), // from memory
     troubleCode("P0700", "transmission control system (MIL request)", "driveline", ["gearbox code", "transmission fault code"]), // from memory
+    // Any other valid code lands here, the code itself kept with the observation: one symptom for
+    // every code the base does not list by itself (chassis, body and network codes, bank-2 and
+    // higher-cylinder engine codes). A code nobody has written down also hints at a fault outside
+    // the base: its leak is higher than a listed code's, and a fault that is not in the base is
+    // taken to store such a code half the time (starter estimate).
+    { key: "trouble_code_stored", name: "Trouble code stored that is not listed by itself", system: "engine_fuel_emissions", kind: "trouble_code",
+      synonyms: ["other trouble code", "unlisted fault code", "scan tool shows another code", "code not on the list"], conditions: ["in the fault memory"], leak: 0.05, unlisted: 0.5 },
   ],
   causes: [],
   checks: [],
@@ -51,7 +58,25 @@ export const troubleCodesOther: KnowledgeBaseSeed = {
     ...producesSymptoms("aux_belt_worn", { dtc_p0562: 0.1 }),
     ...producesSymptoms("earth_strap_failed", { dtc_p0562: 0.1 }),
     ...producesSymptoms("alternator_overcharging", { dtc_p0563: 0.7 }),
-    ...producesSymptoms("auto_gearbox_fault", { dtc_p0700: 0.8 }),
+    ...producesSymptoms("auto_gearbox_fault", { dtc_p0700: 0.8, trouble_code_stored: 0.3 }),
+    // Faults whose own codes are not symptoms here: chassis codes (ABS, steering, parking brake,
+    // tyre sensors), body codes (airbags, keys) and the engine codes of other banks and cylinders.
+    // Starter estimates of P(a code not listed by itself is stored | fault).
+    ...producesSymptoms("abs_wheel_sensor", { trouble_code_stored: 0.5 }),
+    ...producesSymptoms("abs_reluctor_ring", { trouble_code_stored: 0.4 }),
+    ...producesSymptoms("abs_modulator_fault", { trouble_code_stored: 0.5 }),
+    ...producesSymptoms("eps_fault", { trouble_code_stored: 0.4 }),
+    ...producesSymptoms("steering_angle_sensor", { trouble_code_stored: 0.5 }),
+    ...producesSymptoms("epb_actuator_fault", { trouble_code_stored: 0.5 }),
+    ...producesSymptoms("tpms_sensor_fault", { trouble_code_stored: 0.4 }),
+    ...producesSymptoms("seat_airbag_connector", { trouble_code_stored: 0.6 }),
+    ...producesSymptoms("clock_spring_failed", { trouble_code_stored: 0.6 }),
+    ...producesSymptoms("key_transponder_fault", { trouble_code_stored: 0.3 }),
+    ...producesSymptoms("brake_light_switch_faulty", { trouble_code_stored: 0.2 }),
+    ...producesSymptoms("intake_air_leak", { trouble_code_stored: 0.15 }),
+    ...producesSymptoms("maf_sensor_fault", { trouble_code_stored: 0.2 }),
+    ...producesSymptoms("lambda_sensor_slow", { trouble_code_stored: 0.15 }),
+    ...producesSymptoms("ignition_coil_failed", { trouble_code_stored: 0.1 }),
   ],
   checkLinks: [],
 };

@@ -1,6 +1,6 @@
 // Wheels and tyres: pressures, tread and wear patterns, damage and age, the pressure-monitoring
 // sensors, balance and rims, wheel fixings, hubs and wheel bearings.
-import { bearsOn, componentNode, failureMode, producesSymptoms, SAY, systemNode } from "./build";
+import { bearsOn, componentNode, failureMode, producesSymptoms, SAY, systemNode, gradedOn } from "./build";
 import type { KnowledgeBaseSeed } from "./types";
 
 const fm = (parent: string, f: Parameters<typeof failureMode>[2]) => failureMode("wheels_tyres", parent, f);
@@ -307,13 +307,15 @@ export const wheelsTyres: KnowledgeBaseSeed = {
 
   checkLinks: [
     ...bearsOn("tyre_pressure_shortfall", { tyre_pressure_low: 0.95, tyre_puncture_object: 0.6, tyre_valve_bead_leak: 0.6 }),
-    ...bearsOn("tread_depth", { tyre_tread_worn: 0.95 }),
+    ...gradedOn("tread_depth", { tyre_tread_worn: { well_within: 0.01, near: 0.04, beyond: 0.55, far_beyond: 0.4 } }),
     ...bearsOn("tyre_visual", { tyre_sidewall_damage: 0.9, tyre_tread_worn: 0.6, alignment_out: 0.5, tyre_internal_fault: 0.3, damper_worn: 0.2, tyre_puncture_object: 0.6, tyre_aged_cracked: 0.6 }),
     ...bearsOn("tyre_age_check", { tyre_aged_cracked: 0.85 }),
     ...bearsOn("tyre_puncture_search", { tyre_puncture_object: 0.9, tyre_valve_bead_leak: 0.85, wheel_rim_bent: 0.3 }),
     ...bearsOn("tpms_sensor_read", { tpms_sensor_fault: 0.85, tyre_pressure_low: 0.3 }),
-    ...bearsOn("wheel_balance", { wheel_out_of_balance: 0.9, wheel_rim_bent: 0.5, tyre_internal_fault: 0.25 }),
-    ...bearsOn("rim_runout", { wheel_rim_bent: 0.85, tyre_internal_fault: 0.4 }),
+    ...bearsOn("wheel_balance", { wheel_rim_bent: 0.5, tyre_internal_fault: 0.25 }),
+    ...gradedOn("wheel_balance", { wheel_out_of_balance: { well_within: 0.02, near: 0.08, beyond: 0.3, far_beyond: 0.6 } }),
+    ...bearsOn("rim_runout", { tyre_internal_fault: 0.4 }),
+    ...gradedOn("rim_runout", { wheel_rim_bent: { well_within: 0.03, near: 0.12, beyond: 0.35, far_beyond: 0.5 } }),
     ...bearsOn("wheel_bearing_rock_spin", { wheel_bearing_worn: 0.85, ball_joint_worn: 0.35, track_rod_end_worn: 0.3 }),
     ...bearsOn("hub_bearing_end_float", { wheel_bearing_worn: 0.8 }),
     ...bearsOn("hub_face_inspect", { hub_face_corroded: 0.85, brake_disc_runout_dtv: 0.3 }),

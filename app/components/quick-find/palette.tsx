@@ -4,12 +4,16 @@
 // is ours (app/quick-find), so cmdk's own filter is off.
 import { Command } from "cmdk";
 import { type RefObject, useCallback, useEffect, useMemo, useState } from "react";
-import { type Entry, type EntryKind, GROUP_HEADING, search } from "~/quick-find";
+import { type Entry, type EntryKind, GROUP_HEADING, parseQuery, type ScoredEntry, search } from "~/quick-find";
 import { itemValue, ResultRow } from "./result-row";
 import { type EntrySource, useQuickFindIndex } from "./use-index";
 
 
-export type QuickFindPick = { present?: boolean };
+/**
+ * A symptom comes with present (as the query said it: "no grinding" is absent), and, when the
+ * query named them, the trouble code typed and the conditions ("when braking" → braking).
+ */
+export type QuickFindPick = { present?: boolean; code?: string; conditions?: string[] };
 
 export type QuickFindProps = {
   /** The entries, or a loader called the first time the palette opens. Keep the array stable
@@ -48,6 +52,7 @@ export default function QuickFindPalette(props: PaletteProps) {
     props.onReady();
   }, []);
   const [selection, setSelection] = useState<{ query: string; value: string } | null>(null);
+  const [arrowed, setArrowed] = useState<string | null>(null); // the query the user moved the highlight in
   const [added, setAdded] = useState<string | null>(null);
   const setOpen = useCallback(
     (next: boolean) => {
@@ -60,14 +65,22 @@ export default function QuickFindPalette(props: PaletteProps) {
   // Mounted only once wanted: the index is built from the first open on.
   const { index, loading, error } = useQuickFindIndex(entries, cacheKey, true);
   const groups = useMemo(() => (index ? search(index, query, { recentIds, kinds, limit }) : []), [index, query, recentIds, kinds, limit]);
-  const visible = useMemo(() => groups.flatMap((g) => g.items.map((i) => i.entry)), [groups]);
-  // The highlight follows the user's arrows within one query and returns to the top on a new one.
-  const picked = selection?.query === query ? visible.find((e) => itemValue(e) === selection.value) : undefined;
-  const current = picked ?? visible[0];
+  const items = useMemo(() => groups.flatMap((g) => g.items), [groups]);
+  const conditions = useMemo(() => (query.trim() ? parseQuery(query).conditions : []), [query]);
+  // The highlight follows the user's arrows within one query and returns to the first real match
+  // on a new one; a weak match is never highlighted by default, so Enter cannot record it unseen.
+  const moved = selection?.query === query && (arrowed === query || !items.find((i) => itemValue(i.entry) === selection.value)?.weak);
+  const picked = moved ? items.find((i) => itemValue(i.entry) === selection!.value) : undefined;
+  const current: ScoredEntry | undefined = picked ?? items.find((i) => !i.weak);
+  const onlyWeak = items.length > 0 && items.every((i) => i.weak);
 
   const choose = (entry: Entry, present: boolean | undefined) => {
     if (entry.kind === "symptom") {
-      onPick(entry, { present: present ?? true });
+      const item = items.find((i) => i.entry === entry);
+      const pick: QuickFindPick = { present: present ?? item?.present ?? true };
+      if (item?.code) pick.code = item.code;
+      if (conditions.length) pick.conditions = conditions;
+      onPick(entry, pick);
       // Stay open: a technician usually adds several symptoms in a row.
       setAdded(`Added “${entry.title}” as ${present === false ? "absent" : "present"}.`);
       setQuery("");
@@ -86,13 +99,18 @@ export default function QuickFindPalette(props: PaletteProps) {
         shouldFilter={false}
         vimBindings={false}
         loop
-        value={current ? itemValue(current) : ""}
+        value={current ? itemValue(current.entry) : ""}
         onValueChange={(value) => setSelection({ query, value })}
         onKeyDown={(e) => {
-          // Shift+Enter adds the highlighted symptom as absent; cmdk leaves prevented keys alone.
-          if (e.key !== "Enter" || !e.shiftKey || !current) return;
+          if (e.key === "ArrowDown" || e.key === "ArrowUp") setArrowed(query);
+          if (e.key !== "Enter") return;
+          // Only weak matches and none chosen with the arrows: Enter records nothing (cmdk leaves
+          // prevented keys alone), so a wrong symptom is never added unseen.
+          if (!current) return e.preventDefault();
+          // Shift+Enter adds the highlighted symptom as absent.
+          if (!e.shiftKey) return;
           e.preventDefault();
-          choose(current, current.kind === "symptom" ? false : undefined);
+          choose(current.entry, current.entry.kind === "symptom" ? false : undefined);
         }}
         overlayClassName="fixed inset-0 bg-graphite-950/40"
         contentClassName="fixed left-1/2 top-[8vh] w-[min(42rem,calc(100vw-1.5rem))] -translate-x-1/2 overflow-hidden rounded-card border border-rule bg-card text-base text-graphite-900 shadow-xl"
@@ -109,10 +127,11 @@ export default function QuickFindPalette(props: PaletteProps) {
           {loading ? <Command.Loading label="Loading Quick find">Loading…</Command.Loading> : null}
           {error ? <p className="px-3 py-2 text-stop">{error}</p> : null}
           {index && query.trim() ? <Command.Empty className="px-3 py-2 text-graphite-600">Nothing found. Try another word, a registration or a case number.</Command.Empty> : null}
+          {onlyWeak ? <p className="px-3 py-2 text-graphite-700">No good match: note it, or propose a new symptom.</p> : null}
           {groups.map((g) => (
             <Command.Group key={g.kind} heading={GROUP_HEADING[g.kind]} className={GROUP}>
-              {g.items.map(({ entry }) => (
-                <ResultRow key={itemValue(entry)} entry={entry} onChoose={choose} />
+              {g.items.map((item) => (
+                <ResultRow key={itemValue(item.entry)} entry={item.entry} weak={item.weak} absent={item.present === false} onChoose={choose} />
               ))}
             </Command.Group>
           ))}

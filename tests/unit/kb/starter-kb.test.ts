@@ -46,7 +46,8 @@ function checksFor(leafKey: string): string[] {
 const linksOf = (symptom: string) => kb.symptomLinks.filter((l) => l.symptom === symptom);
 const text = (c: CheckSeed) => [c.name, ...c.instructions, c.result.failMeans].join(" ");
 const measurementChecks = kb.checks.filter((c) => c.result.kind === "measurement");
-const troubleCodeSymptoms = kb.symptoms.filter((s) => s.kind === "trouble_code");
+/** Trouble-code symptoms named by their code; the one generic "trouble code stored" symptom has none. */
+const troubleCodeSymptoms = kb.symptoms.filter((s) => s.kind === "trouble_code" && s.key !== "trouble_code_stored");
 /** What the technician reads and does: the name and the steps (not the fail text, which may name other parts). */
 const doing = (c: CheckSeed) => [c.name, ...c.instructions].join(" ");
 const kbSources = () =>
@@ -278,8 +279,17 @@ describe("symptoms and checks", () => {
     }
   });
 
+  it("has one generic trouble-code symptom, without a code, for any code not listed by itself", () => {
+    const generic = kb.symptoms.filter((s) => s.kind === "trouble_code" && s.code === undefined);
+    expect(generic.map((s) => s.key)).toEqual(["trouble_code_stored"]);
+    // chassis and body faults, whose own codes are not symptoms here, point to it
+    const linked = linksOf("trouble_code_stored").map((l) => l.cause);
+    for (const k of ["abs_wheel_sensor", "seat_airbag_connector", "eps_fault"]) expect(linked).toContain(k);
+  });
+
   it("gives a code to trouble-code symptoms only, upper case, named and typed the way technicians type it", () => {
     for (const s of kb.symptoms) {
+      if (s.key === "trouble_code_stored") continue;
       if (s.kind !== "trouble_code") {
         expect(s.code, s.key).toBeUndefined();
         continue;

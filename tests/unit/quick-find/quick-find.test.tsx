@@ -18,7 +18,7 @@ const options = () => screen.getAllByRole("option");
 const selected = () => options().find((o) => o.getAttribute("aria-selected") === "true");
 
 function setup(extra: Partial<React.ComponentProps<typeof QuickFind>> = {}) {
-  const onPick = vi.fn<(entry: Entry, pick: { present?: boolean }) => void>();
+  const onPick = vi.fn<(entry: Entry, pick: { present?: boolean; code?: string; conditions?: string[] }) => void>();
   render(<QuickFind entries={allEntries} onPick={onPick} {...extra} />);
   return onPick;
 }
@@ -64,7 +64,8 @@ describe("Quick find palette", () => {
     fireEvent.keyDown(input(), { key: "Enter" });
     expect(onPick).toHaveBeenCalledTimes(1);
     expect(onPick.mock.calls[0][0].id).toBe("vibration_braking");
-    expect(onPick.mock.calls[0][1]).toEqual({ present: true });
+    // the condition the words name comes with it, for the ranking
+    expect(onPick.mock.calls[0][1]).toEqual({ present: true, conditions: ["braking"] });
     // stays open for the next symptom, with the box cleared and the addition announced
     expect(input()).toHaveProperty("value", "");
     expect(screen.getByRole("status").textContent).toMatch(/as present/);
@@ -89,7 +90,41 @@ describe("Quick find palette", () => {
     type("squeal brake");
     fireEvent.click(within(options()[0]).getByText("Absent"));
     expect(onPick).toHaveBeenCalledTimes(1);
-    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ id: "squeal_braking" }), { present: false }]);
+    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ id: "squeal_braking" }), { present: false, conditions: ["braking"] }]);
+  });
+
+  it("offers a negated complaint as absent, and Enter records it so", () => {
+    const onPick = setup();
+    openWithCtrlK();
+    type("no grinding");
+    expect(options()[0].textContent).toContain("Grinding when braking");
+    expect(options()[0].textContent).toContain("Enter adds it as absent");
+    fireEvent.keyDown(input(), { key: "Enter" });
+    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ id: "grinding_braking" }), { present: false }]);
+    expect(screen.getByRole("status").textContent).toMatch(/as absent/);
+  });
+
+  it("keeps a trouble code the base does not list, on the generic trouble-code symptom", () => {
+    const onPick = setup();
+    openWithCtrlK();
+    type("P0325"); // a valid generic code (SAE J2012 format) with no symptom of its own here
+    expect(options()[0].textContent).toContain("Trouble code stored");
+    fireEvent.keyDown(input(), { key: "Enter" });
+    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ id: "trouble_code_stored" }), { present: true, code: "P0325" }]);
+  });
+
+  it("says “no good match” for words nothing fits, and Enter records nothing", () => {
+    const onPick = setup({ kinds: ["symptom"] });
+    openWithCtrlK();
+    type("I clipped a kerb last month");
+    expect(screen.getByText(/No good match: note it, or propose a new symptom/)).toBeTruthy();
+    expect(options().every((o) => /Weak match/.test(o.textContent ?? ""))).toBe(true);
+    fireEvent.keyDown(input(), { key: "Enter" });
+    expect(onPick).not.toHaveBeenCalled();
+    // chosen on purpose with the arrows, a weak match can still be added
+    fireEvent.keyDown(input(), { key: "ArrowDown" });
+    fireEvent.keyDown(input(), { key: "Enter" });
+    expect(onPick).toHaveBeenCalledTimes(1);
   });
 
   it("jumps to a vehicle with Enter and closes", async () => {

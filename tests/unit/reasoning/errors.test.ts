@@ -125,12 +125,16 @@ describe("evidence and option errors", () => {
   });
 
   it("IMPOSSIBLE_EVIDENCE when nothing, listed or not, can explain it", () => {
-    // leak 0 and no cause linked with p > 0: a present symptom nobody can produce
+    // leak 0, no cause linked with p > 0 and "not in the knowledge base" told it never shows it
+    // (rate 0): a present symptom nobody can produce
     const m = change((x) => {
       x.symptoms[0].leak = 0;
       x.links[0].p = 0;
     });
-    expect(rank(m, { observations: [{ symptomId: "s", present: true }], findings: [] })).toBe("IMPOSSIBLE_EVIDENCE");
+    const seen = { observations: [{ symptomId: "s", present: true }], findings: [] };
+    expect(rank(m, seen, { unlistedSymptomRate: 0 })).toBe("IMPOSSIBLE_EVIDENCE");
+    // with the default rate the unknown fault explains it
+    expect(rank(m, seen)).toBe("no error");
   });
 
   it("ALREADY_RECORDED for what-if on a done check", () => {
@@ -141,6 +145,7 @@ describe("evidence and option errors", () => {
     expect(rank(good(), none, { unlistedPrior: 1 })).toBe("INVALID_OPTION");
     expect(rank(good(), none, { unlistedPrior: -0.1 })).toBe("INVALID_OPTION");
     expect(rank(good(), none, { ownerReliability: 1.5 })).toBe("INVALID_OPTION");
+    expect(rank(good(), none, { unlistedSymptomRate: 1.2 })).toBe("INVALID_OPTION");
     expect(codeOf(() => planChecks(good(), none, { maxSkill: "wizard" as "senior" }))).toBe("INVALID_OPTION");
   });
 

@@ -1,6 +1,9 @@
 // Plans with imperfect checks (false alarms, P(fail | cause) < 1) and an unlisted share. The
-// plan stops at the first failing check, so step i is reached when all earlier checks passed:
-//   P(reach i) = Σ_h P(h) · Π_{j<i} (1 − q_j(h)),   ECR = Σ_i C_i · P(reach i).
+// plan stops at the first check that finds the fault (fails because of a cause it bears on); a
+// false alarm finds nothing and the search goes on, so step i is reached unless an earlier check
+// found the fault:
+//   P(reach i) = Σ_h P(h) · Π_{j<i} (1 − d_j(h)),  d_j(h) = q_j(h) if check j bears on h, else 0,
+//   ECR = Σ_i C_i · P(reach i).
 import { describe, expect, it } from "vitest";
 import { orderCost, planChecks, type Model } from "~/reasoning";
 import { mulberry32 } from "./reference/prng";
@@ -41,13 +44,13 @@ describe("imperfect checks", () => {
     expect(plan.steps[2].pFind).toBe(0);
   });
 
-  it("ECR: step 2 is reached only when k1 passed", () => {
-    // P(k1 passes) = .6 × .1 + .3 × .8 + .1 × .8 = .06 + .24 + .08 = .38 → ECR = 10 + .38 × 30 = 21.4
-    // other order: P(k2 passes) = .6 × .95 + .3 × .2 + .1 × .95 = .57 + .06 + .095 = .725 → 30 + .725 × 10 = 37.25
+  it("ECR: step 2 is reached unless k1 found the fault; its false alarms find nothing", () => {
+    // P(k1 finds it) = P(A) × .9 = .54 → step 2 reached with 1 − .54 = .46 → ECR = 10 + .46 × 30 = 23.8
+    // other order: P(k2 finds it) = P(B) × .8 = .24 → 30 + .76 × 10 = 37.6
     const plan = planChecks(model, none, { unlistedPrior: 0.1 });
-    expect(plan.expectedCost).toBeCloseTo(21.4, 12);
-    expect(plan.steps[1].pReached).toBeCloseTo(0.38, 14);
-    expect(orderCost(model, none, ["k2", "k1"], { unlistedPrior: 0.1 })).toBeCloseTo(37.25, 12);
+    expect(plan.expectedCost).toBeCloseTo(23.8, 12);
+    expect(plan.steps[1].pReached).toBeCloseTo(0.46, 14);
+    expect(orderCost(model, none, ["k2", "k1"], { unlistedPrior: 0.1 })).toBeCloseTo(37.6, 12);
   });
 
   it("ECR equals the formula summed over hypotheses, on random imperfect instances", () => {
@@ -69,7 +72,7 @@ describe("imperfect checks", () => {
       const hyps = [...causes.map((c) => ({ id: c.id, p: ((1 - u) * c.prior) / total })), { id: "U", p: u }];
       const q = (checkId: string, h: string) => {
         const k = checks.find((x) => x.id === checkId)!;
-        return k.bears.find((b) => b.causeId === h)?.pFail ?? k.falseAlarm;
+        return k.bears.find((b) => b.causeId === h)?.pFail ?? 0; // a false alarm finds nothing
       };
       let expected = 0;
       for (const h of hyps) {
@@ -83,7 +86,7 @@ describe("imperfect checks", () => {
     }
   });
 
-  it("a check that always fails (false alarm 1) ends the plan for every cause it does not bear on", () => {
+  it("a check that always fails (false alarm 1) still finds only the cause it bears on", () => {
     // k0 fails surely unless the fault is A (then it fails with .5). P(A) = .5 of listed, U = 0.
     const m: Model = {
       causes: [
@@ -97,10 +100,12 @@ describe("imperfect checks", () => {
         { id: "k1", cost: 100, falseAlarm: 0, bears: [{ causeId: "B", pFail: 1 }] },
       ],
     };
-    // k0 first (detection .5 × .5 = .25 per 1, against k1's .5 per 100); P(k0 passes) = .5 × .5 = .25 → ECR = 1 + .25 × 100 = 26
+    // k0 first (detection .5 × .5 = .25 per 1, against k1's .5 per 100); P(k0 finds it) = .25
+    // → ECR = 1 + .75 × 100 = 76; the other order costs 100 + (1 − .5) × 1 = 100.5
     const plan = planChecks(m, { observations: [], findings: [] }, { unlistedPrior: 0 });
     expect(plan.steps.map((s) => s.checkId)).toEqual(["k0", "k1"]);
-    expect(plan.expectedCost).toBeCloseTo(26, 12);
+    expect(plan.expectedCost).toBeCloseTo(76, 12);
+    expect(orderCost(m, { observations: [], findings: [] }, ["k1", "k0"], { unlistedPrior: 0 })).toBeCloseTo(100.5, 12);
   });
 
   it("when the fault is outside the knowledge base, no check can find it", () => {

@@ -6,7 +6,7 @@ import type { Evidence, Model } from "~/reasoning";
 
 const SKILLS = ["apprentice", "technician", "senior"];
 
-export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.7, maxSkill = "senior") {
+export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.7, maxSkill = "senior", rho = 0.04) {
   const leaves = model.causes.filter((c) => !model.causes.some((d) => d.parentId === c.id));
   const chainOf = (id: string): string[] => {
     const chain = [id];
@@ -28,7 +28,8 @@ export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.
     const symptom = model.symptoms.find((s) => s.id === o.symptomId)!;
     const mine = model.links.filter((l) => l.symptomId === o.symptomId);
     const figure = (h: number) => {
-      if (h === H - 1) return symptom.leak;
+      // "not in the knowledge base" shows a symptom with its own figure, else at least rho
+      if (h === H - 1) return symptom.unlisted ?? Math.max(symptom.leak, rho);
       for (const a of chains[h]) {
         const link = mine.find((l) => l.causeId === a);
         if (link) return link.p;
@@ -79,14 +80,17 @@ export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.
     .sort((a, b) => b.probability - a.probability || (a.id < b.id ? -1 : 1));
 
   // Plan: every check not yet done, by P(fails because of a fault it bears on)/cost; ECR with
-  // survival per hypothesis, where false alarms do stop the search.
+  // survival per hypothesis, where only a check that bears on a hypothesis can find it (a false
+  // alarm finds nothing and the search goes on). The value order is then improved by neighbour
+  // swaps, each judged on the whole order's ECR; if it still costs more than cheapest-first,
+  // cheapest-first improved the same way is the plan.
   const remaining = model.checks
     .filter((k) => !evidence.findings.some((f) => f.checkId === k.id))
     .map((k) => {
       const q = checkLik(k.id);
       const borne = prior.map((_, h) => h !== H - 1 && chains[h].some((a) => k.bears.some((b) => b.causeId === a)));
       const pFind = post.reduce((s, p, h) => s + (borne[h] ? p * q[h] : 0), 0);
-      return { check: k, q, pFind, ratio: pFind / k.cost };
+      return { check: k, q, borne, pFind, ratio: pFind / k.cost };
     })
     .sort((a, b) => b.ratio - a.ratio || a.check.cost - b.check.cost || (a.check.id < b.check.id ? -1 : 1));
   const within = remaining.filter((s) => SKILLS.indexOf(s.check.skill ?? "technician") <= SKILLS.indexOf(maxSkill));
@@ -95,11 +99,40 @@ export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.
     let cost = 0;
     for (const s of order) {
       cost += s.check.cost * survive.reduce((a, b) => a + b, 0);
-      survive = survive.map((v, h) => v * (1 - s.q[h]));
+      survive = survive.map((v, h) => (s.borne[h] ? v * (1 - s.q[h]) : v));
     }
     return cost;
   };
+  // One pass walks the first 64 steps with the survival of every hypothesis written out; swapping
+  // steps i and i+1 changes only their two terms: C_a·R + C_b·R_a against C_b·R + C_a·R_b.
+  const improve = (start: typeof within) => {
+    const order = [...start];
+    for (let pass = 0; pass < 8; pass++) {
+      let swapped = false;
+      let survive = [...post];
+      for (let i = 0; i + 1 < Math.min(order.length, 64); i++) {
+        const [a, b] = [order[i], order[i + 1]];
+        const r = survive.reduce((x, y) => x + y, 0);
+        const after = (s: (typeof order)[number]) => survive.reduce((x, v, h) => x + (s.borne[h] ? v * (1 - s.q[h]) : v), 0);
+        const keep = a.check.cost * r + b.check.cost * after(a);
+        const swap = b.check.cost * r + a.check.cost * after(b);
+        if (swap < keep - 1e-12 * (a.check.cost + b.check.cost)) {
+          [order[i], order[i + 1]] = [b, a];
+          swapped = true;
+        }
+        const ran = order[i];
+        survive = survive.map((v, h) => (ran.borne[h] ? v * (1 - ran.q[h]) : v));
+      }
+      if (!swapped) break;
+    }
+    return order;
+  };
   const cheapest = [...within].sort((a, b) => a.check.cost - b.check.cost || (a.check.id < b.check.id ? -1 : 1));
-  const steps = within.map((s) => ({ checkId: s.check.id, pFind: s.pFind, ratio: s.ratio }));
-  return { causes, unlisted: post[H - 1], steps, expectedCost: ecr(within), cheapestFirstExpectedCost: ecr(cheapest) };
+  let shown = improve(within);
+  if (ecr(shown) > ecr(cheapest)) {
+    const alt = improve(cheapest);
+    if (ecr(alt) < ecr(shown)) shown = alt;
+  }
+  const steps = shown.map((s) => ({ checkId: s.check.id, pFind: s.pFind, ratio: s.ratio }));
+  return { causes, unlisted: post[H - 1], steps, expectedCost: ecr(shown), cheapestFirstExpectedCost: ecr(cheapest) };
 }
