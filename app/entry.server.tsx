@@ -1,7 +1,12 @@
 import { randomBytes } from "node:crypto";
 import { Writable } from "node:stream";
 import { renderToPipeableStream } from "react-dom/server";
-import { type EntryContext, type HandleDataRequestFunction, type HandleErrorFunction, ServerRouter } from "react-router";
+import {
+  type EntryContext,
+  type HandleDataRequestFunction,
+  type HandleErrorFunction,
+  ServerRouter,
+} from "react-router";
 import { NonceProvider } from "./components/nonce";
 import { env, isSecure } from "~/config/env.server";
 import { securityHeaders } from "~/http/security-headers.server";
@@ -26,7 +31,12 @@ export const handleError: HandleErrorFunction = (error, { request }) => {
   if (request.signal.aborted) return;
   const foreign = request.method !== "GET" && request.headers.get("origin") !== new URL(env().APP_URL).origin;
   // Documents report the check's own message; data requests a plain "Bad Request".
-  if (foreign && error instanceof Error && /origin does not match `origin` header|^Bad Request$/.test(error.message)) return;
+  if (
+    foreign &&
+    error instanceof Error &&
+    /origin does not match `origin` header|^Bad Request$/.test(error.message)
+  )
+    return;
   console.error(error);
 };
 
@@ -35,7 +45,12 @@ export const handleDataRequest: HandleDataRequestFunction = (response) => {
   return response;
 };
 
-export default function handleRequest(request: Request, status: number, headers: Headers, routerContext: EntryContext) {
+export default function handleRequest(
+  request: Request,
+  status: number,
+  headers: Headers,
+  routerContext: EntryContext,
+) {
   const nonce = randomBytes(16).toString("base64");
   const e = env();
   securityHeaders(headers, {
@@ -53,7 +68,10 @@ export default function handleRequest(request: Request, status: number, headers:
   // in an A/B run on a 2-core machine.
   return new Promise<Response>((resolve, reject) => {
     const chunks: Buffer[] = [];
-    let timeoutId: ReturnType<typeof setTimeout> | undefined = setTimeout(() => abort(), streamTimeout + 1000);
+    let timeoutId: ReturnType<typeof setTimeout> | undefined = setTimeout(
+      () => abort(),
+      streamTimeout + 1000,
+    );
     const sink = new Writable({
       write(chunk: Buffer, _encoding, callback) {
         chunks.push(chunk);

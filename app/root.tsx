@@ -25,7 +25,8 @@ export const middleware: Route.MiddlewareFunction[] = [
       await guardRequest(request, appOrigin());
     } catch (refused) {
       // The API answers the refusal as it is; a page throws it, so its error page shows the message.
-      if (refused instanceof Response && new URL(request.url).pathname.startsWith("/api/")) return withResponseHeaders(refused);
+      if (refused instanceof Response && new URL(request.url).pathname.startsWith("/api/"))
+        return withResponseHeaders(refused);
       throw refused;
     }
     return withResponseHeaders((await next()) as Response);
@@ -39,7 +40,13 @@ export const middleware: Route.MiddlewareFunction[] = [
 // The Latin faces are fetched with the document rather than when the first text needs them, so
 // they are usually there for the first layout (fonts.css says why the face never swaps later).
 export const links: Route.LinksFunction = () =>
-  [plex400, plex500, plex600, plex700].map((href) => ({ rel: "preload", href, as: "font", type: "font/woff2", crossOrigin: "anonymous" as const }));
+  [plex400, plex500, plex600, plex700].map((href) => ({
+    rel: "preload",
+    href,
+    as: "font",
+    type: "font/woff2",
+    crossOrigin: "anonymous" as const,
+  }));
 
 // Every page has a title, an error page too; routes give their own.
 export function meta() {
@@ -70,7 +77,9 @@ export function Layout({ children }: { children: React.ReactNode }) {
 
 export default function App() {
   // One client per browser tab (and per server render), never shared between requests.
-  const [queryClient] = useState(() => new QueryClient({ defaultOptions: { queries: { retry: 1, refetchOnWindowFocus: true } } }));
+  const [queryClient] = useState(
+    () => new QueryClient({ defaultOptions: { queries: { retry: 1, refetchOnWindowFocus: true } } }),
+  );
   // Marks the page as live (its keys answered): browser tests wait for it before typing.
   useEffect(() => {
     document.documentElement.dataset.hydrated = "true";

@@ -33,7 +33,12 @@ function supervise() {
   let alive = 0;
   const deaths = [];
   for (let i = 0; i < workers; i++) cluster.fork();
-  cluster.on("online", () => ++alive === workers && console.log(`[ramplight] serving on http://${host}:${port} with ${workers} worker processes`));
+  cluster.on(
+    "online",
+    () =>
+      ++alive === workers &&
+      console.log(`[ramplight] serving on http://${host}:${port} with ${workers} worker processes`),
+  );
   cluster.on("exit", (worker, code, signal) => {
     if (stopping) return;
     const now = Date.now();
@@ -44,7 +49,9 @@ function supervise() {
       process.exit(1);
     }
     const wait = Math.min(30_000, 250 * 2 ** (deaths.length - 1));
-    console.error(`[ramplight] worker ${worker.process.pid} exited (${signal ?? code}); another starts in ${wait} ms`);
+    console.error(
+      `[ramplight] worker ${worker.process.pid} exited (${signal ?? code}); another starts in ${wait} ms`,
+    );
     setTimeout(() => !stopping && cluster.fork(), wait);
   });
   for (const signal of ["SIGTERM", "SIGINT"]) {
@@ -77,7 +84,10 @@ async function serve() {
   const brotli = precompressAssets(path.join(client, "assets"));
   // The path without its query: sign-in callbacks carry one-time codes there.
   morgan.token("path", (req) => (req.url ?? "/").split("?")[0]);
-  const log = process.env.RL_ACCESS_LOG === "0" ? (_req, _res, next) => next() : morgan(":method :path :status :res[content-length] - :response-time ms");
+  const log =
+    process.env.RL_ACCESS_LOG === "0"
+      ? (_req, _res, next) => next()
+      : morgan(":method :path :status :res[content-length] - :response-time ms");
   // Each request's context carries the socket's address (for the sign-in rate limit, app/context.ts).
   const app = createRequestListener({
     build,
@@ -101,7 +111,8 @@ async function serve() {
         if (/^[/\\]{2}/.test(url)) return doubleSlash(req, res, url);
         if (url.startsWith("/assets/")) {
           const br = brotli.get(url.split("?")[0]);
-          if (br && /\bbr\b/.test(String(req.headers["accept-encoding"] ?? ""))) return sendPrecompressed(res, br);
+          if (br && /\bbr\b/.test(String(req.headers["accept-encoding"] ?? "")))
+            return sendPrecompressed(res, br);
           return assets(req, res, (error) => notFound(res, error));
         }
         if (looksLikeFile(url)) return files(req, res, () => app(req, res));
@@ -131,7 +142,12 @@ async function serve() {
 // Hashed scripts and styles never change, so each is compressed once, at start, with Brotli's
 // best setting (about a fifth smaller than on-the-fly compression); other clients get gzip per request.
 function precompressAssets(dir) {
-  const TYPES = { ".js": "text/javascript; charset=utf-8", ".css": "text/css; charset=utf-8", ".svg": "image/svg+xml", ".json": "application/json" };
+  const TYPES = {
+    ".js": "text/javascript; charset=utf-8",
+    ".css": "text/css; charset=utf-8",
+    ".svg": "image/svg+xml",
+    ".json": "application/json",
+  };
   const out = new Map();
   let files = [];
   try {
@@ -142,7 +158,9 @@ function precompressAssets(dir) {
   for (const name of files) {
     const type = TYPES[path.extname(name)];
     if (!type) continue;
-    const body = zlib.brotliCompressSync(readFileSync(path.join(dir, name)), { params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 11 } });
+    const body = zlib.brotliCompressSync(readFileSync(path.join(dir, name)), {
+      params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 11 },
+    });
     out.set(`/assets/${name}`, { body, type });
   }
   return out;

@@ -36,12 +36,17 @@ let passed = 0;
 let failed = 0;
 let skipped = 0;
 for (const [level, c] of [...levels].sort()) {
-  console.log(`  ${level.padEnd(12)} ${c.passed} passed, ${c.failed} failed${c.skipped ? `, ${c.skipped} skipped` : ""}`);
+  console.log(
+    `  ${level.padEnd(12)} ${c.passed} passed, ${c.failed} failed${c.skipped ? `, ${c.skipped} skipped` : ""}`,
+  );
   passed += c.passed;
   failed += c.failed;
   skipped += c.skipped;
 }
-for (const [name, flag] of [["typecheck", typecheckFailed], ["schema-drift", driftFailed]] as const) {
+for (const [name, flag] of [
+  ["typecheck", typecheckFailed],
+  ["schema-drift", driftFailed],
+] as const) {
   console.log(`  ${name.padEnd(12)} ${flag === "1" ? "failed" : "passed"}`);
   if (flag === "1") failed++;
   else passed++;

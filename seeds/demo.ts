@@ -1,6 +1,17 @@
 import { sql } from "drizzle-orm";
 import type { Db } from "../app/db/client.server";
-import { cases, findings, identities, members, mileageReadings, observations, owners, users, vehicles, workshops } from "../app/db/schema";
+import {
+  cases,
+  findings,
+  identities,
+  members,
+  mileageReadings,
+  observations,
+  owners,
+  users,
+  vehicles,
+  workshops,
+} from "../app/db/schema";
 import { countryDefaults } from "../app/domain/countries";
 import { DEMO_CASES } from "./demo/cases";
 import { DEMO_OWNERS, DEMO_VEHICLES } from "./demo/fleet";
@@ -22,7 +33,16 @@ export async function seedDemo(db: Db, now = new Date()) {
       const c = countryDefaults(w.country)!;
       await tx
         .insert(workshops)
-        .values({ id: seedId(`workshop:${w.slug}`), slug: w.slug, name: w.name, country: c.code, currency: c.currency, taxRate: c.taxRate, units: c.units, labourRatePerHour: w.labourRatePerHour })
+        .values({
+          id: seedId(`workshop:${w.slug}`),
+          slug: w.slug,
+          name: w.name,
+          country: c.code,
+          currency: c.currency,
+          taxRate: c.taxRate,
+          units: c.units,
+          labourRatePerHour: w.labourRatePerHour,
+        })
         .onConflictDoNothing();
       await seedKnowledgeBase(tx, { id: seedId(`workshop:${w.slug}`), slug: w.slug }, starterKnowledgeBase);
     }
@@ -30,27 +50,62 @@ export async function seedDemo(db: Db, now = new Date()) {
     for (const p of DEMO_PEOPLE) {
       const userId = seedId(`user:${p.login}`);
       await tx.insert(users).values({ id: userId, name: p.name, email: p.email }).onConflictDoNothing();
-      await tx.insert(identities).values({ id: seedId(`identity:${p.login}`), userId, provider: "github", providerUserId: String(p.githubId), login: p.login }).onConflictDoNothing();
+      await tx
+        .insert(identities)
+        .values({
+          id: seedId(`identity:${p.login}`),
+          userId,
+          provider: "github",
+          providerUserId: String(p.githubId),
+          login: p.login,
+        })
+        .onConflictDoNothing();
       if (p.workshop && p.role) {
         await tx
           .insert(members)
-          .values({ id: seedId(`member:${p.login}`), workshopId: seedId(`workshop:${p.workshop}`), userId, role: p.role, skill: p.skill ?? "technician" })
+          .values({
+            id: seedId(`member:${p.login}`),
+            workshopId: seedId(`workshop:${p.workshop}`),
+            userId,
+            role: p.role,
+            skill: p.skill ?? "technician",
+          })
           .onConflictDoNothing();
       }
     }
 
     for (const o of DEMO_OWNERS) {
-      await tx.insert(owners).values({ id: seedId(`owner:${o.key}`), workshopId: seedId(`workshop:${o.workshop}`), name: o.name, email: o.email, phone: o.phone }).onConflictDoNothing();
+      await tx
+        .insert(owners)
+        .values({
+          id: seedId(`owner:${o.key}`),
+          workshopId: seedId(`workshop:${o.workshop}`),
+          name: o.name,
+          email: o.email,
+          phone: o.phone,
+        })
+        .onConflictDoNothing();
     }
     const ownerWorkshop = new Map(DEMO_OWNERS.map((o) => [o.key, o.workshop]));
     for (const v of DEMO_VEHICLES) {
       const workshopId = seedId(`workshop:${ownerWorkshop.get(v.owner)}`);
       const vehicleId = seedId(`vehicle:${v.key}`);
       const { key, owner, mileageKm, ...fields } = v;
-      await tx.insert(vehicles).values({ ...fields, id: vehicleId, workshopId, ownerId: seedId(`owner:${owner}`) }).onConflictDoNothing();
+      await tx
+        .insert(vehicles)
+        .values({ ...fields, id: vehicleId, workshopId, ownerId: seedId(`owner:${owner}`) })
+        .onConflictDoNothing();
       await tx
         .insert(mileageReadings)
-        .values(mileageKm.map((km, i) => ({ id: seedId(`mileage:${key}:${i}`), workshopId, vehicleId, km, readAt: new Date(now.getTime() - (mileageKm.length - 1 - i) * 180 * DAY) })))
+        .values(
+          mileageKm.map((km, i) => ({
+            id: seedId(`mileage:${key}:${i}`),
+            workshopId,
+            vehicleId,
+            km,
+            readAt: new Date(now.getTime() - (mileageKm.length - 1 - i) * 180 * DAY),
+          })),
+        )
         .onConflictDoNothing();
     }
 
@@ -84,7 +139,18 @@ export async function seedDemo(db: Db, now = new Date()) {
       if (c.observations.length) {
         await tx
           .insert(observations)
-          .values(c.observations.map((o) => ({ id: seedId(`obs:${c.key}:${o.symptom}`), workshopId, caseId, symptomId: kbId(c.workshop, "symptom", o.symptom), present: o.present, source: o.source, recordedById: member(c.assignedTo), recordedAt: at })))
+          .values(
+            c.observations.map((o) => ({
+              id: seedId(`obs:${c.key}:${o.symptom}`),
+              workshopId,
+              caseId,
+              symptomId: kbId(c.workshop, "symptom", o.symptom),
+              present: o.present,
+              source: o.source,
+              recordedById: member(c.assignedTo),
+              recordedAt: at,
+            })),
+          )
           .onConflictDoNothing();
       }
       if (c.findings.length) {
@@ -93,7 +159,18 @@ export async function seedDemo(db: Db, now = new Date()) {
           .values(
             c.findings.map((f) => {
               const m = f.reading?.match(/^([\d.]+)\s*(.+)$/);
-              return { id: seedId(`finding:${c.key}:${f.check}`), workshopId, caseId, checkId: kbId(c.workshop, "check", f.check), result: f.result, reading: f.reading ?? null, value: m ? Number(m[1]) : null, unit: m ? m[2] : null, recordedById: member(c.assignedTo), recordedAt: at };
+              return {
+                id: seedId(`finding:${c.key}:${f.check}`),
+                workshopId,
+                caseId,
+                checkId: kbId(c.workshop, "check", f.check),
+                result: f.result,
+                reading: f.reading ?? null,
+                value: m ? Number(m[1]) : null,
+                unit: m ? m[2] : null,
+                recordedById: member(c.assignedTo),
+                recordedAt: at,
+              };
             }),
           )
           .onConflictDoNothing();

@@ -12,11 +12,19 @@ export const kbId = (workshopSlug: string, kind: "symptom" | "cause" | "check", 
  * Copies a knowledge base into one demo workshop with ids derived from its keys, so re-seeding
  * finds the same rows and a senior's curation survives.
  */
-export async function seedKnowledgeBase(tx: Tx, workshop: { id: string; slug: string }, kb: KnowledgeBaseSeed) {
+export async function seedKnowledgeBase(
+  tx: Tx,
+  workshop: { id: string; slug: string },
+  kb: KnowledgeBaseSeed,
+) {
   await copyKnowledgeBase(tx, workshop.id, kb, (kind, key) => kbId(workshop.slug, kind, key));
 }
 
 /** The starter base as the template every workshop created in the app starts from. */
 export async function seedStarterTemplate(db: Pick<Db, "insert">) {
-  await saveTemplate(db, STARTER_TEMPLATE, toDocument("Ramplight starter knowledge base", starterKnowledgeBase));
+  await saveTemplate(
+    db,
+    STARTER_TEMPLATE,
+    toDocument("Ramplight starter knowledge base", starterKnowledgeBase),
+  );
 }

@@ -3,15 +3,38 @@ import { href } from "react-router";
 // ("Priya Hale recorded a fault: …") and, where the entry concerns a record, a link to it. Shared by
 // the case history and the workshop's audit log, browser-safe.
 
-export type AuditSubject = { caseId?: string | null; caseNumber?: number | null; personName?: string | null; invitee?: string | null };
-export type AuditLine = { action: string; before: unknown; after: unknown; entity?: string; entityId?: string | null; subject?: AuditSubject };
+export type AuditSubject = {
+  caseId?: string | null;
+  caseNumber?: number | null;
+  personName?: string | null;
+  invitee?: string | null;
+};
+export type AuditLine = {
+  action: string;
+  before: unknown;
+  after: unknown;
+  entity?: string;
+  entityId?: string | null;
+  subject?: AuditSubject;
+};
 export type Described = { text: string; href: string | null; linkText: string | null };
 
 type Fields = Record<string, unknown>;
 const obj = (v: unknown): Fields => (v && typeof v === "object" ? (v as Fields) : {});
 const quoted = (v: unknown) => (typeof v === "string" && v.trim() ? `: “${v.trim()}”` : "");
-const STATE: Record<string, string> = { open: "being diagnosed", awaiting_signoff: "waiting for a senior", concluded: "cause confirmed", closed: "closed" };
-const ROLE: Record<string, string> = { apprentice: "apprentice", technician: "technician", senior: "senior technician", advisor: "service advisor", admin: "workshop admin" };
+const STATE: Record<string, string> = {
+  open: "being diagnosed",
+  awaiting_signoff: "waiting for a senior",
+  concluded: "cause confirmed",
+  closed: "closed",
+};
+const ROLE: Record<string, string> = {
+  apprentice: "apprentice",
+  technician: "technician",
+  senior: "senior technician",
+  advisor: "service advisor",
+  admin: "workshop admin",
+};
 const role = (r: unknown) => ROLE[String(r)] ?? String(r ?? "");
 
 const SETTING_WORDS: Record<string, (v: unknown) => string> = {
@@ -24,7 +47,9 @@ const SETTING_WORDS: Record<string, (v: unknown) => string> = {
 
 /** What changed in the workshop's settings, field by field, in words. */
 function settingsChange(before: Fields, after: Fields): string {
-  const changed = Object.keys(SETTING_WORDS).filter((k) => k in after && String(before[k]) !== String(after[k]));
+  const changed = Object.keys(SETTING_WORDS).filter(
+    (k) => k in after && String(before[k]) !== String(after[k]),
+  );
   if (changed.length === 0) return "saved the workshop settings without changes";
   return `changed the workshop's ${changed.map((k) => SETTING_WORDS[k](after[k])).join(", ")}`;
 }
@@ -32,12 +57,15 @@ function settingsChange(before: Fields, after: Fields): string {
 // Each action's sentence; entries of actions not listed read as their code, never as raw JSON.
 const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = {
   "case.open": (a) => `opened the case${quoted(a.complaint)}`,
-  "case.observation": (a) => `noted ${a.present ? "present" : "absent"}: ${a.symptom}${a.source === "owner" ? " (owner's report)" : ""}`,
+  "case.observation": (a) =>
+    `noted ${a.present ? "present" : "absent"}: ${a.symptom}${a.source === "owner" ? " (owner's report)" : ""}`,
   "case.observation_remove": () => "removed an observation",
-  "case.finding": (a) => `recorded ${a.result === "fail" ? "a fault" : "a pass"}: ${a.check}${a.reading ? ` (${a.reading})` : ""}`,
+  "case.finding": (a) =>
+    `recorded ${a.result === "fail" ? "a fault" : "a pass"}: ${a.check}${a.reading ? ` (${a.reading})` : ""}`,
   "case.finding_remove": (_a, b) => `removed a finding${b.reading ? ` (${b.reading})` : ""}`,
   "case.ask_senior": (a) => `asked a senior${quoted(a.note)}`,
-  "case.conclude": (a) => `concluded: ${a.cause}${a.state === "awaiting_signoff" ? ", for a senior's sign-off" : ""}`,
+  "case.conclude": (a) =>
+    `concluded: ${a.cause}${a.state === "awaiting_signoff" ? ", for a senior's sign-off" : ""}`,
   "case.signoff": (a) => `signed the conclusion off${quoted(a.note)}`,
   "case.send_back": (a) => `sent it back to diagnose${quoted(a.note)}`,
   "case.complaint": (a) => `edited the complaint${quoted(a.complaint)}`,
@@ -45,10 +73,12 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
   "case.close": () => "closed the case",
   "settings.update": (a, b) => settingsChange(b, a),
   "workshop.create": (a) => `created the workshop ${a.name ?? ""}`.trim(),
-  "member.invite": (a, _b, s) => `invited ${s.invitee ?? a.email ?? a.githubLogin ?? "someone"} as ${role(a.role)}`,
+  "member.invite": (a, _b, s) =>
+    `invited ${s.invitee ?? a.email ?? a.githubLogin ?? "someone"} as ${role(a.role)}`,
   "member.invite_revoke": (_a, _b, s) => `withdrew the invitation${s.invitee ? ` of ${s.invitee}` : ""}`,
   "member.join": (a) => `joined the workshop as ${role(a.role)}`,
-  "member.role": (a, b, s) => `changed ${s.personName ?? "a member"}'s role from ${role(b.role)} to ${role(a.role)}`,
+  "member.role": (a, b, s) =>
+    `changed ${s.personName ?? "a member"}'s role from ${role(b.role)} to ${role(a.role)}`,
   "member.suspend": (_a, _b, s) => `suspended ${s.personName ?? "a member"}`,
   "member.reactivate": (_a, _b, s) => `reactivated ${s.personName ?? "a member"}`,
   "auth.sign_in": () => "signed in",
@@ -60,8 +90,14 @@ export function describeAudit(entry: AuditLine): Described {
   const subject = entry.subject ?? {};
   const say = SAID[entry.action];
   const text = say ? say(obj(entry.after), obj(entry.before), subject) : entry.action.replace(/[._]/g, " ");
-  if (subject.caseId && subject.caseNumber != null) return { text, href: href("/cases/:caseId", { caseId: subject.caseId }), linkText: `case #${subject.caseNumber}` };
-  if (entry.action.startsWith("member.")) return { text, href: href("/settings/members"), linkText: "members" };
+  if (subject.caseId && subject.caseNumber != null)
+    return {
+      text,
+      href: href("/cases/:caseId", { caseId: subject.caseId }),
+      linkText: `case #${subject.caseNumber}`,
+    };
+  if (entry.action.startsWith("member."))
+    return { text, href: href("/settings/members"), linkText: "members" };
   if (entry.action === "settings.update") return { text, href: href("/settings"), linkText: "settings" };
   return { text, href: null, linkText: null };
 }

@@ -28,12 +28,24 @@ export async function readAuditLog(db: Db, workshopId: string, limit = 200) {
     })
     .from(auditLog)
     .leftJoin(users, eq(users.id, auditLog.actorUserId))
-    .leftJoin(cases, sql`${auditLog.entity} = 'case' and ${cases.id}::text = ${auditLog.entityId} and ${cases.workshopId} = ${auditLog.workshopId}`)
-    .leftJoin(subjectMember, sql`${auditLog.entity} = 'member' and ${subjectMember.id}::text = ${auditLog.entityId} and ${subjectMember.workshopId} = ${auditLog.workshopId}`)
+    .leftJoin(
+      cases,
+      sql`${auditLog.entity} = 'case' and ${cases.id}::text = ${auditLog.entityId} and ${cases.workshopId} = ${auditLog.workshopId}`,
+    )
+    .leftJoin(
+      subjectMember,
+      sql`${auditLog.entity} = 'member' and ${subjectMember.id}::text = ${auditLog.entityId} and ${subjectMember.workshopId} = ${auditLog.workshopId}`,
+    )
     .leftJoin(subjectUser, eq(subjectUser.id, subjectMember.userId))
-    .leftJoin(invitations, sql`${auditLog.entity} = 'invitation' and ${invitations.id}::text = ${auditLog.entityId} and ${invitations.workshopId} = ${auditLog.workshopId}`)
+    .leftJoin(
+      invitations,
+      sql`${auditLog.entity} = 'invitation' and ${invitations.id}::text = ${auditLog.entityId} and ${invitations.workshopId} = ${auditLog.workshopId}`,
+    )
     .where(eq(auditLog.workshopId, workshopId))
     .orderBy(desc(auditLog.at), desc(auditLog.id))
     .limit(limit);
-  return rows.map(({ caseId, caseNumber, personName, invitee, ...r }) => ({ ...r, subject: { caseId, caseNumber, personName, invitee } }));
+  return rows.map(({ caseId, caseNumber, personName, invitee, ...r }) => ({
+    ...r,
+    subject: { caseId, caseNumber, personName, invitee },
+  }));
 }

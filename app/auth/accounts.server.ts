@@ -18,14 +18,25 @@ export async function signInFromProfile(db: Db, profile: ProviderProfile, now = 
       .where(and(eq(identities.provider, "github"), eq(identities.providerUserId, profile.providerUserId)));
     let userId = known?.userId;
     if (!userId) {
-      const [created] = await tx.insert(users).values({ name: profile.name, email: profile.email }).returning({ id: users.id });
+      const [created] = await tx
+        .insert(users)
+        .values({ name: profile.name, email: profile.email })
+        .returning({ id: users.id });
       userId = created.id;
-      await tx.insert(identities).values({ userId, provider: "github", providerUserId: profile.providerUserId, login: profile.login });
+      await tx
+        .insert(identities)
+        .values({ userId, provider: "github", providerUserId: profile.providerUserId, login: profile.login });
     } else {
-      await tx.update(identities).set({ login: profile.login }).where(and(eq(identities.provider, "github"), eq(identities.providerUserId, profile.providerUserId)));
+      await tx
+        .update(identities)
+        .set({ login: profile.login })
+        .where(and(eq(identities.provider, "github"), eq(identities.providerUserId, profile.providerUserId)));
     }
 
-    const [membership] = await tx.select({ id: members.id, workshopId: members.workshopId }).from(members).where(eq(members.userId, userId));
+    const [membership] = await tx
+      .select({ id: members.id, workshopId: members.workshopId })
+      .from(members)
+      .where(eq(members.userId, userId));
     if (!membership) {
       const [invite] = await tx
         .select()
@@ -43,9 +54,23 @@ export async function signInFromProfile(db: Db, profile: ProviderProfile, now = 
         .orderBy(invitations.createdAt)
         .limit(1);
       if (invite) {
-        await tx.insert(members).values({ workshopId: invite.workshopId, userId, role: invite.role, skill: skillForRole(invite.role) });
+        await tx
+          .insert(members)
+          .values({
+            workshopId: invite.workshopId,
+            userId,
+            role: invite.role,
+            skill: skillForRole(invite.role),
+          });
         await tx.update(invitations).set({ acceptedAt: now }).where(eq(invitations.id, invite.id));
-        await audit(tx, { workshopId: invite.workshopId, actorUserId: userId, action: "member.join", entity: "member", entityId: userId, after: { role: invite.role } });
+        await audit(tx, {
+          workshopId: invite.workshopId,
+          actorUserId: userId,
+          action: "member.join",
+          entity: "member",
+          entityId: userId,
+          after: { role: invite.role },
+        });
       }
     }
     return userId;
@@ -85,7 +110,12 @@ function sessionAccountQuery(db: Db) {
     .innerJoin(users, eq(users.id, sessions.userId))
     .leftJoin(members, eq(members.userId, users.id))
     .leftJoin(workshops, eq(workshops.id, members.workshopId))
-    .where(and(eq(sessions.tokenHash, sql.placeholder("tokenHash")), gt(sessions.expiresAt, sql.placeholder("now"))))
+    .where(
+      and(
+        eq(sessions.tokenHash, sql.placeholder("tokenHash")),
+        gt(sessions.expiresAt, sql.placeholder("now")),
+      ),
+    )
     .limit(1)
     .prepare("session_account");
 }

@@ -18,13 +18,17 @@ const EmailsSchema = z.array(z.object({ email: z.string(), primary: z.boolean(),
  * instead of the hard-coded public ones, so the demo and the tests sign in against a local fake.
  */
 class ConfigurableGitHubStrategy<U> extends GitHubStrategy<U> {
-  constructor(options: GitHubStrategy.ConstructorOptions & { oauthBaseUrl: string }, verify: (o: GitHubStrategy.VerifyOptions) => Promise<U>) {
+  constructor(
+    options: GitHubStrategy.ConstructorOptions & { oauthBaseUrl: string },
+    verify: (o: GitHubStrategy.VerifyOptions) => Promise<U>,
+  ) {
     super(options, verify);
     const authorize = new URL("/login/oauth/authorize", options.oauthBaseUrl).toString();
     const token = new URL("/login/oauth/access_token", options.oauthBaseUrl).toString();
     const client = new OAuth2Client(options.clientId, options.clientSecret, options.redirectURI.toString());
     this.client = Object.assign(Object.create(Object.getPrototypeOf(this.client)), {
-      createAuthorizationURL: (state: string, scopes: string[]) => client.createAuthorizationURL(authorize, state, scopes),
+      createAuthorizationURL: (state: string, scopes: string[]) =>
+        client.createAuthorizationURL(authorize, state, scopes),
       validateAuthorizationCode: (code: string) => client.validateAuthorizationCode(token, code, null),
       refreshAccessToken: (refresh: string) => client.refreshAccessToken(token, refresh, []),
     });
@@ -39,7 +43,8 @@ async function fetchProfile(apiUrl: string, tokens: OAuth2Tokens): Promise<Provi
   let email = user.email ?? null;
   if (!email) {
     const emailsRes = await fetch(new URL("/user/emails", apiUrl), { headers });
-    if (emailsRes.ok) email = EmailsSchema.parse(await emailsRes.json()).find((e) => e.primary && e.verified)?.email ?? null;
+    if (emailsRes.ok)
+      email = EmailsSchema.parse(await emailsRes.json()).find((e) => e.primary && e.verified)?.email ?? null;
   }
   return { providerUserId: String(user.id), login: user.login, name: user.name || user.login, email };
 }
@@ -52,7 +57,12 @@ export function createGitHubStrategy(e: Env) {
       redirectURI: new URL("/auth/github/callback", e.APP_URL).toString(),
       scopes: ["read:user", "user:email"],
       oauthBaseUrl: e.GITHUB_OAUTH_URL,
-      cookie: { name: "rl_oauth", sameSite: "Lax", path: "/auth", ...(e.APP_URL.startsWith("https://") ? { secure: true as const } : {}) },
+      cookie: {
+        name: "rl_oauth",
+        sameSite: "Lax",
+        path: "/auth",
+        ...(e.APP_URL.startsWith("https://") ? { secure: true as const } : {}),
+      },
     },
     ({ tokens }) => fetchProfile(e.GITHUB_API_URL, tokens),
   );

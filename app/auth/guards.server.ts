@@ -6,7 +6,13 @@ import { can, type Permission } from "~/domain/permissions";
 import { readSessionTokens } from "./session.server";
 import type { Role, Skill } from "~/domain/people";
 
-export type CurrentMember = Account & { memberId: string; workshopId: string; role: Role; skill: Skill; workshopName: string };
+export type CurrentMember = Account & {
+  memberId: string;
+  workshopId: string;
+  role: Role;
+  skill: Skill;
+  workshopName: string;
+};
 
 // Set by the signed-in layout's middleware, read by every loader and action below it.
 export const memberContext = createContext<CurrentMember>();
@@ -16,7 +22,10 @@ export async function getAccount(request: Request, db: Db): Promise<Account | nu
 }
 
 /** The account and the token that found it: the first of the request's session cookies that is live. */
-export async function getSession(request: Request, db: Db): Promise<{ account: Account; token: string } | null> {
+export async function getSession(
+  request: Request,
+  db: Db,
+): Promise<{ account: Account; token: string } | null> {
   for (const token of readSessionTokens(request, isSecure(env()))) {
     const account = await accountForSession(db, token);
     if (account) return { account, token };
@@ -37,7 +46,8 @@ export async function requireAccount(request: Request, db: Db): Promise<Account>
 
 export function asMember(account: Account): CurrentMember {
   if (!account.memberId || !account.workshopId || !account.role) throw redirect(href("/welcome"));
-  if (account.status === "suspended") throw new Response("Your membership of this workshop is suspended.", { status: 403 });
+  if (account.status === "suspended")
+    throw new Response("Your membership of this workshop is suspended.", { status: 403 });
   return account as CurrentMember;
 }
 
@@ -46,6 +56,7 @@ export async function requireMember(request: Request, db: Db): Promise<CurrentMe
 }
 
 export function requirePermission(member: CurrentMember, permission: Permission): CurrentMember {
-  if (!can(member.role, permission)) throw new Response(`Your role (${member.role}) cannot do this.`, { status: 403 });
+  if (!can(member.role, permission))
+    throw new Response(`Your role (${member.role}) cannot do this.`, { status: 403 });
   return member;
 }

@@ -35,7 +35,10 @@ export async function limitSignIn(db: Db, bucket: string, limit: number, windowS
 export function clientIp(request: Request, socketAddress: string | null): string {
   const proxies = Number(process.env.TRUST_PROXY ?? 0) || 0;
   if (proxies > 0) {
-    const hops = (request.headers.get("x-forwarded-for") ?? "").split(",").map((h) => h.trim()).filter(Boolean);
+    const hops = (request.headers.get("x-forwarded-for") ?? "")
+      .split(",")
+      .map((h) => h.trim())
+      .filter(Boolean);
     const client = hops[hops.length - proxies];
     return client ? addressBucket(client) : socketAddress ? addressBucket(socketAddress) : "unknown";
   }
@@ -53,9 +56,13 @@ export function addressBucket(address: string): string {
   if (mapped) return mapped[1];
   if (!isIPv6(plain)) return plain;
   const [head, tail] = plain.split("::");
-  const groups = (part: string | undefined) => (part ? part.split(":").flatMap((g) => (g.includes(".") ? ["0", "0"] : [g])) : []);
+  const groups = (part: string | undefined) =>
+    part ? part.split(":").flatMap((g) => (g.includes(".") ? ["0", "0"] : [g])) : [];
   const h = groups(head);
   const t = plain.includes("::") ? groups(tail) : [];
   const full = [...h, ...Array(8 - h.length - t.length).fill("0"), ...t];
-  return `${full.slice(0, 4).map((g) => parseInt(g, 16).toString(16)).join(":")}::/64`;
+  return `${full
+    .slice(0, 4)
+    .map((g) => parseInt(g, 16).toString(16))
+    .join(":")}::/64`;
 }

@@ -36,7 +36,11 @@ export function readSessionToken(request: Request, secure: boolean): string | nu
   return readSessionTokens(request, secure)[0] ?? null;
 }
 
-export function sessionCookie(token: string | null, secure: boolean, maxAgeS = SESSION_TTL_MS / 1000): string {
+export function sessionCookie(
+  token: string | null,
+  secure: boolean,
+  maxAgeS = SESSION_TTL_MS / 1000,
+): string {
   const attrs = [`${sessionCookieName(secure)}=${token ?? ""}`, "Path=/", "HttpOnly", "SameSite=Lax"];
   if (secure) attrs.push("Secure");
   attrs.push(token ? `Max-Age=${Math.floor(maxAgeS)}` : "Max-Age=0");

@@ -26,7 +26,9 @@ export async function finishSignIn(db: Db, request: Request, socketAddress: stri
   const params = new URL(request.url).searchParams;
   if (params.get("error")) throw new SignInRefused(describe(new Error(params.get("error")!)));
   if (!params.get("code") || !params.get("state")) {
-    throw new SignInRefused("This sign-in return address is incomplete (no one-time code or state). Start the sign-in again from this page.");
+    throw new SignInRefused(
+      "This sign-in return address is incomplete (no one-time code or state). Start the sign-in again from this page.",
+    );
   }
   let profile;
   try {
@@ -35,25 +37,42 @@ export async function finishSignIn(db: Db, request: Request, socketAddress: stri
     if (error instanceof Response) throw error;
     throw new SignInRefused(describe(error));
   }
-  await limitSignIn(db, `account:github:${profile.providerUserId}`, e.SIGN_IN_LIMIT_PER_ACCOUNT, e.SIGN_IN_WINDOW_S);
+  await limitSignIn(
+    db,
+    `account:github:${profile.providerUserId}`,
+    e.SIGN_IN_LIMIT_PER_ACCOUNT,
+    e.SIGN_IN_WINDOW_S,
+  );
   const userId = await signInFromProfile(db, profile);
   const account = await loadAccount(db, userId);
   // Whatever session the browser had is dropped: the id always changes at sign-in.
   for (const old of readSessionTokens(request, isSecure(e))) await revokeSession(db, old);
   const token = await createSession(db, userId, request.headers.get("user-agent"));
-  await audit(db, { workshopId: account?.workshopId ?? null, actorUserId: userId, action: "auth.sign_in", entity: "user", entityId: userId, after: { login: profile.login } });
+  await audit(db, {
+    workshopId: account?.workshopId ?? null,
+    actorUserId: userId,
+    action: "auth.sign_in",
+    entity: "user",
+    entityId: userId,
+    after: { login: profile.login },
+  });
   const home = account?.role ? ROLE_HOME[account.role] : "/welcome";
   const headers = new Headers();
   headers.append("Set-Cookie", sessionCookie(token, isSecure(e)));
   // The one-time OAuth state cookie has done its job.
-  headers.append("Set-Cookie", `rl_oauth=; Path=/auth; Max-Age=0; HttpOnly; SameSite=Lax${isSecure(e) ? "; Secure" : ""}`);
+  headers.append(
+    "Set-Cookie",
+    `rl_oauth=; Path=/auth; Max-Age=0; HttpOnly; SameSite=Lax${isSecure(e) ? "; Secure" : ""}`,
+  );
   return redirect(home, { headers });
 }
 
 function describe(error: unknown): string {
   const text = error instanceof Error ? `${error.name}: ${error.message}` : String(error);
   if (/access_denied/i.test(text)) return "The sign-in was cancelled at the provider.";
-  if (/state/i.test(text)) return "The sign-in could not be matched to this browser (the security check on its state failed). Start the sign-in again from this page.";
-  if (/code/i.test(text) || /invalid_grant|Unexpected/i.test(text)) return "The provider did not accept this sign-in (the one-time code was missing, used already or expired). Start again.";
+  if (/state/i.test(text))
+    return "The sign-in could not be matched to this browser (the security check on its state failed). Start the sign-in again from this page.";
+  if (/code/i.test(text) || /invalid_grant|Unexpected/i.test(text))
+    return "The provider did not accept this sign-in (the one-time code was missing, used already or expired). Start again.";
   return "The sign-in did not complete. Start again.";
 }

@@ -17,7 +17,9 @@ export const FindingBody = z
     reading: z.string().trim().min(1).max(60).optional(),
     note: z.string().trim().max(500).optional(),
   })
-  .refine((b) => b.result || b.reading, { message: "Give a result (pass or fail) or a reading with its unit" });
+  .refine((b) => b.result || b.reading, {
+    message: "Give a result (pass or fail) or a reading with its unit",
+  });
 
 export type ObservationInput = z.infer<typeof ObservationBody>;
 export type FindingInput = z.infer<typeof FindingBody>;

@@ -2,7 +2,20 @@ import { and, eq, type SQL, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
-import { auditLog, cases, causes, checks, findings, members, observations, owners, symptoms, users, vehicles, workshops } from "~/db/schema";
+import {
+  auditLog,
+  cases,
+  causes,
+  checks,
+  findings,
+  members,
+  observations,
+  owners,
+  symptoms,
+  users,
+  vehicles,
+  workshops,
+} from "~/db/schema";
 import type { Json } from "~/http/json-payload";
 import { refuse, requireId } from "~/http/errors.server";
 import { latestNote } from "./notes.server";
@@ -16,9 +29,34 @@ const closedVehicle = alias(vehicles, "closed_vehicle");
 /** How many history rows a case screen shows; the full trail is in the audit log. */
 export const CASE_HISTORY_ROWS = 30;
 
-type ObservationRow = { id: string; symptomId: string; name: string; present: boolean; source: (typeof observations.$inferSelect)["source"]; note: string | null; recordedAt: Date; by: string | null };
-type FindingRow = { id: string; checkId: string; name: string; result: (typeof findings.$inferSelect)["result"]; reading: string | null; note: string | null; recordedAt: Date; by: string | null };
-type HistoryRow = { id: number; at: Date; action: string; before: unknown; after: unknown; actor: string | null };
+type ObservationRow = {
+  id: string;
+  symptomId: string;
+  name: string;
+  present: boolean;
+  source: (typeof observations.$inferSelect)["source"];
+  note: string | null;
+  recordedAt: Date;
+  by: string | null;
+};
+type FindingRow = {
+  id: string;
+  checkId: string;
+  name: string;
+  result: (typeof findings.$inferSelect)["result"];
+  reading: string | null;
+  note: string | null;
+  recordedAt: Date;
+  by: string | null;
+};
+type HistoryRow = {
+  id: number;
+  at: Date;
+  action: string;
+  before: unknown;
+  after: unknown;
+  actor: string | null;
+};
 
 // The rows under a case come back as JSON arrays inside the case's own row: one round trip to
 // PostgreSQL however many observations and findings there are (each query costs more in the
@@ -97,9 +135,25 @@ function caseQuery(db: Db) {
       signedOffById: cases.signedOffById,
       assignedMemberId: cases.assignedMemberId,
       assignedName: assignedUser.name,
-      vehicle: { id: vehicles.id, registration: vehicles.registration, vin: vehicles.vin, make: vehicles.make, model: vehicles.model, year: vehicles.year, engine: vehicles.engine, fuelType: vehicles.fuelType, drivetrain: vehicles.drivetrain },
+      vehicle: {
+        id: vehicles.id,
+        registration: vehicles.registration,
+        vin: vehicles.vin,
+        make: vehicles.make,
+        model: vehicles.model,
+        year: vehicles.year,
+        engine: vehicles.engine,
+        fuelType: vehicles.fuelType,
+        drivetrain: vehicles.drivetrain,
+      },
       owner: { id: owners.id, name: owners.name, phone: owners.phone, email: owners.email },
-      workshop: { id: workshops.id, kbVersion: workshops.kbVersion, labourRatePerHour: workshops.labourRatePerHour, currency: workshops.currency, units: workshops.units },
+      workshop: {
+        id: workshops.id,
+        kbVersion: workshops.kbVersion,
+        labourRatePerHour: workshops.labourRatePerHour,
+        currency: workshops.currency,
+        units: workshops.units,
+      },
       observations: observationsJson,
       findings: findingsJson,
       question: latestNote(["case.ask_senior"]),
@@ -129,7 +183,11 @@ const at = <T extends { recordedAt: string }>(r: T) => ({ ...r, recordedAt: new 
  * workshop's outcome counts, in one query. A case of another workshop is "not found", never
  * "forbidden", so ids reveal nothing.
  */
-export async function loadCase(db: Db, member: Pick<CurrentMember, "workshopId">, caseId: string): Promise<CaseBundle> {
+export async function loadCase(
+  db: Db,
+  member: Pick<CurrentMember, "workshopId">,
+  caseId: string,
+): Promise<CaseBundle> {
   const { history: _h, ...bundle } = await read(db, member, caseId, { history: false, outcomes: true });
   return bundle;
 }
@@ -145,12 +203,25 @@ export async function loadCaseHistory(db: Db, member: Pick<CurrentMember, "works
 }
 
 /** The case and its evidence, for a change to it: no history, no outcome counts. */
-export async function loadCaseForChange(db: Db, member: Pick<CurrentMember, "workshopId">, caseId: string): Promise<CaseFields> {
-  const { history: _h, outcomes: _o, ...fields } = await read(db, member, caseId, { history: false, outcomes: false });
+export async function loadCaseForChange(
+  db: Db,
+  member: Pick<CurrentMember, "workshopId">,
+  caseId: string,
+): Promise<CaseFields> {
+  const {
+    history: _h,
+    outcomes: _o,
+    ...fields
+  } = await read(db, member, caseId, { history: false, outcomes: false });
   return fields;
 }
 
-async function read(db: Db, member: Pick<CurrentMember, "workshopId">, caseId: string, want: { history: boolean; outcomes: boolean }) {
+async function read(
+  db: Db,
+  member: Pick<CurrentMember, "workshopId">,
+  caseId: string,
+  want: { history: boolean; outcomes: boolean },
+) {
   requireId(caseId, "No such case in this workshop.");
   let query = prepared.get(db);
   if (!query) prepared.set(db, (query = caseQuery(db)));
@@ -174,7 +245,11 @@ export function caseFields({ outcomes: _o, ...fields }: CaseBundle): CaseFields 
 
 export function evidenceOf(c: Pick<CaseBundle, "observations" | "findings">) {
   return {
-    observations: c.observations.map((o) => ({ symptomId: o.symptomId, present: o.present, source: o.source })),
+    observations: c.observations.map((o) => ({
+      symptomId: o.symptomId,
+      present: o.present,
+      source: o.source,
+    })),
     findings: c.findings.map((f) => ({ checkId: f.checkId, result: f.result })),
   };
 }

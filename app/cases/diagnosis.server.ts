@@ -14,22 +14,36 @@ import { loadKnowledge } from "~/kb/knowledge.server";
 const compiled = kbCache<{ model: Model; compiled: CompiledModel }>("compiled-model", 200);
 
 /** The likely causes, check plan and next-step what-if for a case, as the member may act on it. */
-export async function diagnoseCase(db: Db, member: Pick<CurrentMember, "role" | "skill" | "workshopId">, bundle: CaseBundle) {
+export async function diagnoseCase(
+  db: Db,
+  member: Pick<CurrentMember, "role" | "skill" | "workshopId">,
+  bundle: CaseBundle,
+) {
   const kb = await loadKnowledge(db, bundle.workshop.id, bundle.workshop.kbVersion);
   // Read with the case (loadCase), so the page costs no extra query for them.
   const outcomes = bundle.outcomes;
   const facts = vehicleFacts({ ...bundle.vehicle, mileageKm: bundle.mileageKm });
-  const entry = await compiled.get(bundle.workshop.id, kb.kbVersion, JSON.stringify([facts, bundle.workshop.labourRatePerHour, outcomes]), () => {
-    const model = buildModel(kb, facts, bundle.workshop.labourRatePerHour, outcomes);
-    return { model, compiled: compileModel(model) };
-  });
+  const entry = await compiled.get(
+    bundle.workshop.id,
+    kb.kbVersion,
+    JSON.stringify([facts, bundle.workshop.labourRatePerHour, outcomes]),
+    () => {
+      const model = buildModel(kb, facts, bundle.workshop.labourRatePerHour, outcomes);
+      return { model, compiled: compileModel(model) };
+    },
+  );
   const { model } = entry;
   const evidence = evidenceOf(bundle);
   // An apprentice's plan holds only what they may do; everyone else sees every check.
   const maxSkill: Skill = member.role === "apprentice" ? "apprentice" : "senior";
   const { ranking, plan } = diagnose(entry.compiled, evidence, { maxSkill });
   // The tree's node shares are for the API's diagnosis; the case screens do not draw them.
-  return { ...presentDiagnosis(kb, ranking, plan, bundle, bundle.workshop.units), nodes: ranking.nodes, model, evidence };
+  return {
+    ...presentDiagnosis(kb, ranking, plan, bundle, bundle.workshop.units),
+    nodes: ranking.nodes,
+    model,
+    evidence,
+  };
 }
 
 /**
@@ -37,8 +51,19 @@ export async function diagnoseCase(db: Db, member: Pick<CurrentMember, "role" | 
  * their total (a checklist can record dozens; GET …/findings lists them all), and its diagnosis,
  * which is ranked on every finding.
  */
-export async function caseView(db: Db, member: Pick<CurrentMember, "role" | "skill" | "workshopId">, bundle: CaseBundle) {
+export async function caseView(
+  db: Db,
+  member: Pick<CurrentMember, "role" | "skill" | "workshopId">,
+  bundle: CaseBundle,
+) {
   const { model: _m, evidence: _e, nodes: _n, ...diagnosis } = await diagnoseCase(db, member, bundle);
   const fields = caseFields(bundle);
-  return { case: { ...fields, findings: fields.findings.slice(-SHOWN_FINDINGS), findingCount: fields.findings.length }, diagnosis };
+  return {
+    case: {
+      ...fields,
+      findings: fields.findings.slice(-SHOWN_FINDINGS),
+      findingCount: fields.findings.length,
+    },
+    diagnosis,
+  };
 }

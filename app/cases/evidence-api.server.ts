@@ -5,13 +5,29 @@ import { refuse } from "~/http/errors.server";
 import { FindingBody, ObservationBody } from "./api-schemas";
 import { loadCase } from "./case.server";
 import { caseView } from "./diagnosis.server";
-import { assertCanWork, recordFinding, recordObservation, removeFinding, removeObservation, withEvidence } from "./evidence.server";
+import {
+  assertCanWork,
+  recordFinding,
+  recordObservation,
+  removeFinding,
+  removeObservation,
+  withEvidence,
+} from "./evidence.server";
 
-type Args = { request: Request; params: { caseId: string; itemId?: string }; context: Readonly<RouterContextProvider> };
+type Args = {
+  request: Request;
+  params: { caseId: string; itemId?: string };
+  context: Readonly<RouterContextProvider>;
+};
 
 // Observations and findings are handled alike: POST adds one, DELETE on its id removes it.
 const KINDS = {
-  observations: { body: ObservationBody, add: recordObservation, remove: removeObservation, noun: "an observation" },
+  observations: {
+    body: ObservationBody,
+    add: recordObservation,
+    remove: removeObservation,
+    noun: "an observation",
+  },
   findings: { body: FindingBody, add: recordFinding, remove: removeFinding, noun: "a finding" },
 } as const;
 
@@ -44,4 +60,5 @@ export function evidenceAction({ request, params, context }: Args, kind: keyof t
   });
 }
 
-export const readWithCase = () => Response.json({ error: "Read evidence with GET /api/cases/:caseId." }, { status: 405 });
+export const readWithCase = () =>
+  Response.json({ error: "Read evidence with GET /api/cases/:caseId." }, { status: 405 });

@@ -13,4 +13,3 @@ export const latestNote = (actions: string[]) => sql<NoteRow | null>`(
   order by ${auditLog.at} desc, ${auditLog.id} desc
   limit 1
 )`;
-

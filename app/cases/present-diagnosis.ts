@@ -29,7 +29,13 @@ const DETAILED_STEPS = PLAN_OPEN;
 
 /** One line of a cause's "why": the evidence, what was recorded, and its log likelihood ratio. */
 export type WhyLine = { label: string; recorded: string; weight: number };
-export type ShownCause = { id: string; name: string; probability: number; priority: string | null; why: WhyLine[] };
+export type ShownCause = {
+  id: string;
+  name: string;
+  probability: number;
+  priority: string | null;
+  why: WhyLine[];
+};
 
 /** What the case recorded, as the why quotes it: present or absent, passed, failed, or the reading. */
 export type Recorded = {
@@ -39,8 +45,20 @@ export type Recorded = {
 
 function recordedWords(recorded: Recorded) {
   const said = new Map<string, string>();
-  for (const o of recorded.observations) said.set(`symptom:${o.symptomId}`, `${o.present ? "present" : "absent"}${o.source === "owner" ? " (owner says)" : ""}`);
-  for (const f of recorded.findings) said.set(`check:${f.checkId}`, f.reading ? `read ${f.reading}, ${f.result === "fail" ? "outside the limit" : "within the limit"}` : f.result === "fail" ? "failed" : "passed");
+  for (const o of recorded.observations)
+    said.set(
+      `symptom:${o.symptomId}`,
+      `${o.present ? "present" : "absent"}${o.source === "owner" ? " (owner says)" : ""}`,
+    );
+  for (const f of recorded.findings)
+    said.set(
+      `check:${f.checkId}`,
+      f.reading
+        ? `read ${f.reading}, ${f.result === "fail" ? "outside the limit" : "within the limit"}`
+        : f.result === "fail"
+          ? "failed"
+          : "passed",
+    );
   return said;
 }
 
@@ -54,13 +72,19 @@ function byId(kb: Knowledge) {
   };
 }
 
-export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan, recorded: Recorded, units: UnitSystem) {
+export function presentDiagnosis(
+  kb: Knowledge,
+  ranking: Ranking,
+  plan: Plan,
+  recorded: Recorded,
+  units: UnitSystem,
+) {
   let maps = lookups.get(kb);
   if (!maps) lookups.set(kb, (maps = byId(kb)));
   const { cause, symptom, check } = maps;
   const label = (key: string) => {
     const [kind, id] = [key.slice(0, key.indexOf(":")), key.slice(key.indexOf(":") + 1)];
-    return kind === "symptom" ? symptom.get(id)?.name ?? id : check.get(id)?.name ?? id;
+    return kind === "symptom" ? (symptom.get(id)?.name ?? id) : (check.get(id)?.name ?? id);
   };
   const said = recordedWords(recorded);
   // The "why" is read for the causes a person looks at: the top ones, their strongest few pieces of
@@ -79,21 +103,41 @@ export function presentDiagnosis(kb: Knowledge, ranking: Ranking, plan: Plan, re
             .slice(0, WHY_ITEMS)
         : [],
   }));
-  const name = (id: string | null) => (id ? cause.get(id)?.name ?? id : "Not in the knowledge base");
-  const outcome = (o: WhatIf["ifFail"]) => (o ? { topCause: name(o.topCauseId), probability: o.probability } : null);
+  const name = (id: string | null) => (id ? (cause.get(id)?.name ?? id) : "Not in the knowledge base");
+  const outcome = (o: WhatIf["ifFail"]) =>
+    o ? { topCause: name(o.topCauseId), probability: o.probability } : null;
   // Full instructions only for the steps the screen opens; the rest carry what the folded list shows.
-  const step = <T extends { checkId: string; pFind: number; cost: number; skill: string }>(s: T, i: number) => {
+  const step = <T extends { checkId: string; pFind: number; cost: number; skill: string }>(
+    s: T,
+    i: number,
+  ) => {
     const k = check.get(s.checkId);
     // Cautions, tools and access always travel: any step may end up on the screen. A measured
     // check's limit is put in words here, in the workshop's units, so the browser needs no unit library.
     // Only what the screen shows: the plan's ratio and reach stay with the reasoning core.
-    const shown = { checkId: s.checkId, pFind: s.pFind, cost: s.cost, skill: s.skill, ...("before" in s ? { before: s.before as number } : {}), name: k?.name ?? s.checkId, minutes: k?.minutes ?? 0, tools: k?.tools ?? [], access: k?.access ?? [], cautions: k?.cautions ?? [], resultKind: k?.resultKind ?? "pass_fail", unit: k?.unit ?? null, limit: k?.rule ? limitWords(k.rule, units) : null };
+    const shown = {
+      checkId: s.checkId,
+      pFind: s.pFind,
+      cost: s.cost,
+      skill: s.skill,
+      ...("before" in s ? { before: s.before as number } : {}),
+      name: k?.name ?? s.checkId,
+      minutes: k?.minutes ?? 0,
+      tools: k?.tools ?? [],
+      access: k?.access ?? [],
+      cautions: k?.cautions ?? [],
+      resultKind: k?.resultKind ?? "pass_fail",
+      unit: k?.unit ?? null,
+      limit: k?.rule ? limitWords(k.rule, units) : null,
+    };
     // Past the first few, the steps travel without their instructions (the screen fetches them
     // when such a check is opened): `detailed` says which.
-    if (i >= DETAILED_STEPS) return { ...shown, detailed: false, instructions: [] as string[], failMeans: "" };
+    if (i >= DETAILED_STEPS)
+      return { ...shown, detailed: false, instructions: [] as string[], failMeans: "" };
     return { ...shown, detailed: true, instructions: k?.instructions ?? [], failMeans: k?.failMeans ?? "" };
   };
-  const whatIfFor = (w: WhatIf | null) => (w ? { checkId: w.checkId, pFail: w.pFail, ifFail: outcome(w.ifFail), ifPass: outcome(w.ifPass) } : null);
+  const whatIfFor = (w: WhatIf | null) =>
+    w ? { checkId: w.checkId, pFail: w.pFail, ifFail: outcome(w.ifFail), ifPass: outcome(w.ifPass) } : null;
   const rest = ranking.causes.slice(SENT_CAUSES);
   return {
     causes,

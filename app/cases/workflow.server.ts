@@ -13,26 +13,59 @@ import type { CaseFields } from "./case.server";
  * A shared text field is written only if nobody changed the case since the writer loaded it; the
  * loser is told what the case says now, instead of overwriting it.
  */
-async function versionedUpdate(db: Pick<Db, "update" | "select">, c: CaseFields, expected: number, set: Partial<typeof cases.$inferInsert>) {
+async function versionedUpdate(
+  db: Pick<Db, "update" | "select">,
+  c: CaseFields,
+  expected: number,
+  set: Partial<typeof cases.$inferInsert>,
+) {
   const updated = await db
     .update(cases)
     .set({ ...set, version: sql`${cases.version} + 1` })
     .where(and(eq(cases.id, c.id), eq(cases.version, expected)))
     .returning({ version: cases.version });
   if (updated.length === 0) {
-    const [now] = await db.select({ complaint: cases.complaint, state: cases.state, conclusionNotes: cases.conclusionNotes, version: cases.version }).from(cases).where(eq(cases.id, c.id));
-    const says = now ? ` It is now ${now.state === "open" ? "open" : now.state.replace("_", " ")}; the complaint reads “${now.complaint}”${now.conclusionNotes ? ` and the conclusion “${now.conclusionNotes}”` : ""}.` : "";
-    refuse(409, `Someone else changed this case while you were editing.${says} Apply your change again if it still stands.`, { current: now });
+    const [now] = await db
+      .select({
+        complaint: cases.complaint,
+        state: cases.state,
+        conclusionNotes: cases.conclusionNotes,
+        version: cases.version,
+      })
+      .from(cases)
+      .where(eq(cases.id, c.id));
+    const says = now
+      ? ` It is now ${now.state === "open" ? "open" : now.state.replace("_", " ")}; the complaint reads “${now.complaint}”${now.conclusionNotes ? ` and the conclusion “${now.conclusionNotes}”` : ""}.`
+      : "";
+    refuse(
+      409,
+      `Someone else changed this case while you were editing.${says} Apply your change again if it still stands.`,
+      { current: now },
+    );
   }
   return updated[0].version;
 }
 
-export async function updateComplaint(db: Db, member: CurrentMember, c: CaseFields, complaint: string, expected: number) {
+export async function updateComplaint(
+  db: Db,
+  member: CurrentMember,
+  c: CaseFields,
+  complaint: string,
+  expected: number,
+) {
   if (!can(member.role, "case:open")) refuse(403, "Your role cannot edit the complaint.");
   if (c.state === "closed") refuse(409, "This case is closed.");
   return db.transaction(async (tx) => {
     const v = await versionedUpdate(tx, c, expected, { complaint });
-    await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.complaint", entity: "case", entityId: c.id, before: { complaint: c.complaint }, after: { complaint } });
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "case.complaint",
+      entity: "case",
+      entityId: c.id,
+      before: { complaint: c.complaint },
+      after: { complaint },
+    });
     return v;
   });
 }
@@ -42,33 +75,84 @@ export async function askSenior(db: Db, member: CurrentMember, c: CaseFields, no
   if (c.state === "closed") refuse(409, "This case is closed.");
   await db.transaction(async (tx) => {
     await tx.update(cases).set({ needsSenior: true }).where(eq(cases.id, c.id));
-    await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.ask_senior", entity: "case", entityId: c.id, after: { note } });
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "case.ask_senior",
+      entity: "case",
+      entityId: c.id,
+      after: { note },
+    });
   });
 }
 
 /** A technician's conclusion stands; an apprentice's waits for a senior's sign-off. */
-export async function conclude(db: Db, member: CurrentMember, c: CaseFields, input: { causeId: string; notes: string; version: number }) {
+export async function conclude(
+  db: Db,
+  member: CurrentMember,
+  c: CaseFields,
+  input: { causeId: string; notes: string; version: number },
+) {
   if (!mayConclude(member, c)) refuse(403, "Your role cannot conclude this case.");
   if (c.state !== "open") refuse(409, "This case is concluded already.");
-  const [cause] = await db.select({ id: causes.id, name: causes.name, level: causes.level }).from(causes).where(and(eq(causes.id, input.causeId), eq(causes.workshopId, member.workshopId)));
-  if (!cause || cause.level !== "failure_mode") refuse(400, "Conclude with one failure mode from the likely causes.");
+  const [cause] = await db
+    .select({ id: causes.id, name: causes.name, level: causes.level })
+    .from(causes)
+    .where(and(eq(causes.id, input.causeId), eq(causes.workshopId, member.workshopId)));
+  if (!cause || cause.level !== "failure_mode")
+    refuse(400, "Conclude with one failure mode from the likely causes.");
   const state = member.role === "apprentice" ? "awaiting_signoff" : "concluded";
   await db.transaction(async (tx) => {
-    await versionedUpdate(tx, c, input.version, { state, conclusionCauseId: cause.id, conclusionNotes: input.notes, concludedById: member.memberId, concludedAt: new Date(), needsSenior: state === "awaiting_signoff" });
-    await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.conclude", entity: "case", entityId: c.id, before: { state: c.state }, after: { state, cause: cause.name, notes: input.notes } });
+    await versionedUpdate(tx, c, input.version, {
+      state,
+      conclusionCauseId: cause.id,
+      conclusionNotes: input.notes,
+      concludedById: member.memberId,
+      concludedAt: new Date(),
+      needsSenior: state === "awaiting_signoff",
+    });
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "case.conclude",
+      entity: "case",
+      entityId: c.id,
+      before: { state: c.state },
+      after: { state, cause: cause.name, notes: input.notes },
+    });
   });
   return state;
 }
 
-export async function signOff(db: Db, member: CurrentMember, c: CaseFields, input: { accept: boolean; note: string; version: number }) {
+export async function signOff(
+  db: Db,
+  member: CurrentMember,
+  c: CaseFields,
+  input: { accept: boolean; note: string; version: number },
+) {
   if (!can(member.role, "case:signoff")) refuse(403, "Only a senior technician signs off.");
   if (c.state !== "awaiting_signoff") refuse(409, "This case is not waiting for a sign-off.");
   const set = input.accept
     ? { state: "concluded" as const, signedOffById: member.memberId, needsSenior: false }
-    : { state: "open" as const, conclusionCauseId: null, conclusionNotes: null, concludedById: null, concludedAt: null, needsSenior: false };
+    : {
+        state: "open" as const,
+        conclusionCauseId: null,
+        conclusionNotes: null,
+        concludedById: null,
+        concludedAt: null,
+        needsSenior: false,
+      };
   await db.transaction(async (tx) => {
     await versionedUpdate(tx, c, input.version, set);
-    await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: input.accept ? "case.signoff" : "case.send_back", entity: "case", entityId: c.id, before: { state: c.state, cause: c.conclusionCause }, after: { state: set.state, note: input.note } });
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: input.accept ? "case.signoff" : "case.send_back",
+      entity: "case",
+      entityId: c.id,
+      before: { state: c.state, cause: c.conclusionCause },
+      after: { state: set.state, note: input.note },
+    });
   });
 }
 
@@ -76,28 +160,74 @@ export async function signOff(db: Db, member: CurrentMember, c: CaseFields, inpu
  * A senior reopens a concluded or closed case, with a reason: the conclusion is set aside (the
  * audit row keeps it) and the evidence can change again.
  */
-export async function reopen(db: Db, member: CurrentMember, c: CaseFields, input: { reason: string; version: number }) {
+export async function reopen(
+  db: Db,
+  member: CurrentMember,
+  c: CaseFields,
+  input: { reason: string; version: number },
+) {
   if (!can(member.role, "case:reopen")) refuse(403, "Only a senior technician reopens a case.");
   if (c.state === "open") refuse(409, "This case is open already.");
   await db.transaction(async (tx) => {
-    await versionedUpdate(tx, c, input.version, { state: "open", conclusionCauseId: null, conclusionNotes: null, concludedById: null, concludedAt: null, signedOffById: null, closedAt: null, needsSenior: false });
-    await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.reopen", entity: "case", entityId: c.id, before: { state: c.state, cause: c.conclusionCause, notes: c.conclusionNotes }, after: { state: "open", reason: input.reason } });
+    await versionedUpdate(tx, c, input.version, {
+      state: "open",
+      conclusionCauseId: null,
+      conclusionNotes: null,
+      concludedById: null,
+      concludedAt: null,
+      signedOffById: null,
+      closedAt: null,
+      needsSenior: false,
+    });
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "case.reopen",
+      entity: "case",
+      entityId: c.id,
+      before: { state: c.state, cause: c.conclusionCause, notes: c.conclusionNotes },
+      after: { state: "open", reason: input.reason },
+    });
   });
 }
 
 /** A concluded case is closed when the work is done: its confirmed cause then feeds the outcome statistics. */
 export async function close(db: Db, member: CurrentMember, c: CaseFields, input: { version: number }) {
   if (!can(member.role, "case:close")) refuse(403, "Your role cannot close cases.");
-  if (c.state !== "concluded") refuse(409, c.state === "closed" ? "This case is closed already." : "Only a concluded case can be closed: conclude it (or sign it off) first.");
+  if (c.state !== "concluded")
+    refuse(
+      409,
+      c.state === "closed"
+        ? "This case is closed already."
+        : "Only a concluded case can be closed: conclude it (or sign it off) first.",
+    );
   await db.transaction(async (tx) => {
     await versionedUpdate(tx, c, input.version, { state: "closed", closedAt: new Date() });
-    await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.close", entity: "case", entityId: c.id, before: { state: c.state }, after: { state: "closed", cause: c.conclusionCause } });
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "case.close",
+      entity: "case",
+      entityId: c.id,
+      before: { state: c.state },
+      after: { state: "closed", cause: c.conclusionCause },
+    });
   });
 }
 
 export type OpenCaseInput = {
   vehicleId?: string;
-  newVehicle?: { ownerName: string; ownerPhone?: string; registration: string; vin?: string; make: string; model: string; year: number; fuelType: FuelType; drivetrain: Drivetrain };
+  newVehicle?: {
+    ownerName: string;
+    ownerPhone?: string;
+    registration: string;
+    vin?: string;
+    make: string;
+    model: string;
+    year: number;
+    fuelType: FuelType;
+    drivetrain: Drivetrain;
+  };
   mileageKm: number;
   complaint: string;
 };
@@ -108,28 +238,71 @@ export async function openCase(db: Db, member: CurrentMember, input: OpenCaseInp
   return db.transaction(async (tx) => {
     let vehicleId = input.vehicleId;
     if (vehicleId) {
-      const [v] = await tx.select({ id: vehicles.id }).from(vehicles).where(and(eq(vehicles.id, vehicleId), eq(vehicles.workshopId, member.workshopId)));
+      const [v] = await tx
+        .select({ id: vehicles.id })
+        .from(vehicles)
+        .where(and(eq(vehicles.id, vehicleId), eq(vehicles.workshopId, member.workshopId)));
       if (!v) refuse(400, "That vehicle is not in this workshop.");
     } else if (input.newVehicle) {
       const nv = input.newVehicle;
-      const [dupe] = await tx.select({ id: vehicles.id }).from(vehicles).where(and(eq(vehicles.workshopId, member.workshopId), eq(vehicles.registration, nv.registration)));
-      if (dupe) refuse(409, `A vehicle with registration ${nv.registration} is on file already; pick it from the list.`);
-      const [o] = await tx.insert(owners).values({ workshopId: member.workshopId, name: nv.ownerName, phone: nv.ownerPhone ?? null }).returning({ id: owners.id });
+      const [dupe] = await tx
+        .select({ id: vehicles.id })
+        .from(vehicles)
+        .where(and(eq(vehicles.workshopId, member.workshopId), eq(vehicles.registration, nv.registration)));
+      if (dupe)
+        refuse(
+          409,
+          `A vehicle with registration ${nv.registration} is on file already; pick it from the list.`,
+        );
+      const [o] = await tx
+        .insert(owners)
+        .values({ workshopId: member.workshopId, name: nv.ownerName, phone: nv.ownerPhone ?? null })
+        .returning({ id: owners.id });
       const [v] = await tx
         .insert(vehicles)
-        .values({ workshopId: member.workshopId, ownerId: o.id, registration: nv.registration, vin: nv.vin ?? null, make: nv.make, model: nv.model, year: nv.year, fuelType: nv.fuelType, drivetrain: nv.drivetrain })
+        .values({
+          workshopId: member.workshopId,
+          ownerId: o.id,
+          registration: nv.registration,
+          vin: nv.vin ?? null,
+          make: nv.make,
+          model: nv.model,
+          year: nv.year,
+          fuelType: nv.fuelType,
+          drivetrain: nv.drivetrain,
+        })
         .returning({ id: vehicles.id });
       vehicleId = v.id;
     } else refuse(400, "Pick a vehicle or enter a new one.");
     // The next running number of this workshop; the row lock keeps two openings from taking the same one.
     await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${member.workshopId}))`);
-    const [{ next }] = await tx.select({ next: sql<number>`coalesce(max(${cases.number}), 1000) + 1` }).from(cases).where(eq(cases.workshopId, member.workshopId));
+    const [{ next }] = await tx
+      .select({ next: sql<number>`coalesce(max(${cases.number}), 1000) + 1` })
+      .from(cases)
+      .where(eq(cases.workshopId, member.workshopId));
     const [created] = await tx
       .insert(cases)
-      .values({ workshopId: member.workshopId, number: next, vehicleId: vehicleId!, complaint: input.complaint, mileageKm: input.mileageKm, openedById: member.memberId, assignedMemberId: member.role === "advisor" ? null : member.memberId })
+      .values({
+        workshopId: member.workshopId,
+        number: next,
+        vehicleId: vehicleId!,
+        complaint: input.complaint,
+        mileageKm: input.mileageKm,
+        openedById: member.memberId,
+        assignedMemberId: member.role === "advisor" ? null : member.memberId,
+      })
       .returning({ id: cases.id, number: cases.number });
-    await tx.insert(mileageReadings).values({ workshopId: member.workshopId, vehicleId: vehicleId!, km: input.mileageKm });
-    await audit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "case.open", entity: "case", entityId: created.id, after: { number: created.number, complaint: input.complaint } });
+    await tx
+      .insert(mileageReadings)
+      .values({ workshopId: member.workshopId, vehicleId: vehicleId!, km: input.mileageKm });
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "case.open",
+      entity: "case",
+      entityId: created.id,
+      after: { number: created.number, complaint: input.complaint },
+    });
     return created;
   });
 }

@@ -25,7 +25,15 @@ const initials = (name: string) =>
  * The signed-in frame. On a phone it is two short rows (mark, Quick find and the person; then the
  * areas, scrolling sideways), so the work starts within the first 110 px of the screen.
  */
-export function AppShell({ member, permissions, children }: { member: { name: string; role: string; workshopName: string }; permissions: readonly Permission[]; children: React.ReactNode }) {
+export function AppShell({
+  member,
+  permissions,
+  children,
+}: {
+  member: { name: string; role: string; workshopName: string };
+  permissions: readonly Permission[];
+  children: React.ReactNode;
+}) {
   const areas = AREAS.filter((a) => a.needs === null || permissions.includes(a.needs));
   // The person's menu closes when the page changes or a click lands outside it.
   const menu = useRef<HTMLDetailsElement>(null);
@@ -33,7 +41,8 @@ export function AppShell({ member, permissions, children }: { member: { name: st
   useEffect(() => menu.current?.removeAttribute("open"), [pathname]);
   useEffect(() => {
     const away = (e: PointerEvent) => {
-      if (menu.current?.open && !menu.current.contains(e.target as Node)) menu.current.removeAttribute("open");
+      if (menu.current?.open && !menu.current.contains(e.target as Node))
+        menu.current.removeAttribute("open");
     };
     document.addEventListener("pointerdown", away);
     return () => document.removeEventListener("pointerdown", away);
@@ -44,7 +53,9 @@ export function AppShell({ member, permissions, children }: { member: { name: st
         <NavLink
           key={a.to}
           to={a.to}
-          className={({ isActive }) => `inline-flex min-h-tap items-center rounded-lg px-3 font-medium whitespace-nowrap ${isActive ? "bg-uv-100 text-uv-700" : "text-graphite-700 hover:bg-paper"}`}
+          className={({ isActive }) =>
+            `inline-flex min-h-tap items-center rounded-lg px-3 font-medium whitespace-nowrap ${isActive ? "bg-uv-100 text-uv-700" : "text-graphite-700 hover:bg-paper"}`
+          }
         >
           {a.label}
         </NavLink>
@@ -65,15 +76,27 @@ export function AppShell({ member, permissions, children }: { member: { name: st
             {permissions.includes("case:read") ? <GlobalQuickFind /> : null}
             <details ref={menu} className="relative">
               <summary className="flex min-h-tap cursor-pointer list-none items-center gap-2 rounded-lg border border-rule px-2 font-medium hover:bg-paper">
-                <span aria-hidden="true" className="grid h-8 w-8 place-items-center rounded-full bg-uv-100 text-sm font-semibold text-uv-700">{initials(member.name)}</span>
+                <span
+                  aria-hidden="true"
+                  className="grid h-8 w-8 place-items-center rounded-full bg-uv-100 text-sm font-semibold text-uv-700"
+                >
+                  {initials(member.name)}
+                </span>
                 {/* The name is the menu's name for everyone; on a narrow screen only the initials show. */}
                 <span className="sr-only lg:not-sr-only">{member.name}</span>
               </summary>
               <div className="absolute right-0 z-30 mt-1 w-64 rounded-card border border-rule bg-card p-3 shadow-xl">
                 <p className="leading-tight font-semibold">{member.name}</p>
-                <p className="text-sm text-graphite-600">{member.role} · {member.workshopName}</p>
+                <p className="text-sm text-graphite-600">
+                  {member.role} · {member.workshopName}
+                </p>
                 <Form method="post" action={href("/sign-out")} className="mt-2">
-                  <button type="submit" className="min-h-tap w-full rounded-lg border border-rule px-3 font-medium hover:bg-paper">Sign out</button>
+                  <button
+                    type="submit"
+                    className="min-h-tap w-full rounded-lg border border-rule px-3 font-medium hover:bg-paper"
+                  >
+                    Sign out
+                  </button>
                 </Form>
               </div>
             </details>

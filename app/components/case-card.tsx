@@ -2,7 +2,23 @@ import { href, Link } from "react-router";
 import type { CaseListItem } from "~/cases/list.server";
 import { formatDate, STATE_LABEL } from "~/domain/format";
 
-export function CaseCard({ c }: { c: Pick<CaseListItem, "id" | "number" | "state" | "complaint" | "registration" | "vehicle" | "assignedName" | "openedAt" | "needsSenior" | "conclusion"> & { question?: CaseListItem["question"] } }) {
+export function CaseCard({
+  c,
+}: {
+  c: Pick<
+    CaseListItem,
+    | "id"
+    | "number"
+    | "state"
+    | "complaint"
+    | "registration"
+    | "vehicle"
+    | "assignedName"
+    | "openedAt"
+    | "needsSenior"
+    | "conclusion"
+  > & { question?: CaseListItem["question"] };
+}) {
   return (
     <article className="rounded-card border border-rule bg-card p-4" aria-labelledby={`case-${c.id}`}>
       <div className="flex items-baseline justify-between gap-3">
@@ -15,7 +31,11 @@ export function CaseCard({ c }: { c: Pick<CaseListItem, "id" | "number" | "state
       </div>
       <p className="text-sm text-graphite-600">{c.vehicle}</p>
       <p className="mt-2">“{c.complaint}”</p>
-      {c.conclusion ? <p className="mt-2 text-sm">Cause: <strong>{c.conclusion}</strong></p> : null}
+      {c.conclusion ? (
+        <p className="mt-2 text-sm">
+          Cause: <strong>{c.conclusion}</strong>
+        </p>
+      ) : null}
       {c.question ? (
         <p className="mt-2 rounded-lg border-l-4 border-uv-500 bg-uv-50 p-2 text-sm">
           <strong>{c.question.by ?? "The apprentice"} asks:</strong> “{c.question.note}”

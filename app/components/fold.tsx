@@ -6,7 +6,19 @@ import { useEffect, useRef, useState, type ReactNode } from "react";
  * page view would cost more than everything the technician actually reads. Native <details>, so
  * it opens with Enter or Space and announces its state without extra ARIA.
  */
-export function Fold({ summary, open = false, className = "", summaryClassName = "cursor-pointer", children }: { summary: ReactNode; open?: boolean; className?: string; summaryClassName?: string; children: ReactNode }) {
+export function Fold({
+  summary,
+  open = false,
+  className = "",
+  summaryClassName = "cursor-pointer",
+  children,
+}: {
+  summary: ReactNode;
+  open?: boolean;
+  className?: string;
+  summaryClassName?: string;
+  children: ReactNode;
+}) {
   const ref = useRef<HTMLDetailsElement>(null);
   const [opened, setOpened] = useState(open);
   // Opened before the page's script had loaded: React never saw that toggle.
@@ -17,7 +29,12 @@ export function Fold({ summary, open = false, className = "", summaryClassName =
   if (open && !opened) setOpened(true);
   const shown = opened || open;
   return (
-    <details ref={ref} open={open} className={className} onToggle={(e) => e.currentTarget.open && setOpened(true)}>
+    <details
+      ref={ref}
+      open={open}
+      className={className}
+      onToggle={(e) => e.currentTarget.open && setOpened(true)}
+    >
       <summary className={summaryClassName}>{summary}</summary>
       {shown ? children : null}
     </details>

@@ -27,7 +27,15 @@ export function entryHref(entry: Entry): string {
  */
 export function GlobalQuickFind() {
   const navigate = useNavigate();
-  const ownPalette = useMatches().some((m) => (m.handle as { quickFind?: string } | undefined)?.quickFind === "own");
+  const ownPalette = useMatches().some(
+    (m) => (m.handle as { quickFind?: string } | undefined)?.quickFind === "own",
+  );
   if (ownPalette) return null;
-  return <QuickFind entries={loadAllEntries} onPick={(entry) => navigate(entryHref(entry))} placeholder="Find a case, plate, VIN, symptom, cause or check" />;
+  return (
+    <QuickFind
+      entries={loadAllEntries}
+      onPick={(entry) => navigate(entryHref(entry))}
+      placeholder="Find a case, plate, VIN, symptom, cause or check"
+    />
+  );
 }

@@ -15,7 +15,13 @@ const SHAPES: Record<Priority, () => React.ReactNode> = {
   ),
   soon: () => (
     <>
-      <path d="M12 2.5 L22.5 21 H1.5 Z" fill="var(--color-soon)" stroke="#16181b" strokeWidth="1.5" strokeLinejoin="round" />
+      <path
+        d="M12 2.5 L22.5 21 H1.5 Z"
+        fill="var(--color-soon)"
+        stroke="#16181b"
+        strokeWidth="1.5"
+        strokeLinejoin="round"
+      />
       <rect x="11" y="9" width="2" height="6.5" fill="#16181b" />
       <rect x="11" y="17" width="2" height="2" fill="#16181b" />
     </>
@@ -60,7 +66,13 @@ export function WarningTriangle({ className = "h-6 w-6" }: { className?: string 
   return <Shape priority="soon" className={className} />;
 }
 
-export function PriorityMark({ priority, showDescription = false }: { priority: Priority; showDescription?: boolean }) {
+export function PriorityMark({
+  priority,
+  showDescription = false,
+}: {
+  priority: Priority;
+  showDescription?: boolean;
+}) {
   const copy = PRIORITY_COPY[priority];
   return (
     <span className="inline-flex items-start gap-2" data-priority={priority}>

@@ -5,11 +5,15 @@ import { z } from "zod";
 // sign-in to the real provider by accident.
 const EnvSchema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
-  DATABASE_URL: z.url({ message: "DATABASE_URL must be a postgres:// URL (scripts/pg.sh url prints the local one)" }),
+  DATABASE_URL: z.url({
+    message: "DATABASE_URL must be a postgres:// URL (scripts/pg.sh url prints the local one)",
+  }),
   APP_URL: z.url({ message: "APP_URL must be the public URL of this server, e.g. http://127.0.0.1:3000" }),
   GITHUB_CLIENT_ID: z.string().min(1, "GITHUB_CLIENT_ID is required"),
   GITHUB_CLIENT_SECRET: z.string().min(8, "GITHUB_CLIENT_SECRET is required (at least 8 characters)"),
-  GITHUB_OAUTH_URL: z.url({ message: "GITHUB_OAUTH_URL (base of /login/oauth/authorize and /access_token) is required" }),
+  GITHUB_OAUTH_URL: z.url({
+    message: "GITHUB_OAUTH_URL (base of /login/oauth/authorize and /access_token) is required",
+  }),
   GITHUB_API_URL: z.url({ message: "GITHUB_API_URL (base of /user) is required" }),
   SIGN_IN_LIMIT_PER_IP: z.coerce.number().int().positive().default(20),
   SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().positive().default(10),

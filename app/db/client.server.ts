@@ -7,7 +7,10 @@ export type Db = NodePgDatabase<typeof schema>;
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 /** One pool per process; a backend killed under us logs and reconnects instead of crashing. */
-export function createDb(url: string, options: { max?: number; onQuery?: (sql: string) => void } = {}): { db: Db; pool: pg.Pool } {
+export function createDb(
+  url: string,
+  options: { max?: number; onQuery?: (sql: string) => void } = {},
+): { db: Db; pool: pg.Pool } {
   const pool = new pg.Pool({
     connectionString: url,
     max: options.max ?? 10,

@@ -14,10 +14,13 @@ export const isOwnCase = (actor: CaseActor, c: Pick<CaseForAccess, "assignedMemb
   can(actor.role, "case:work-assigned") && c.assignedMemberId === actor.memberId;
 
 /** May record and remove evidence on this case, whatever its state. */
-export const mayWorkOn = (actor: CaseActor, c: Pick<CaseForAccess, "assignedMemberId">) => can(actor.role, "case:work") || isOwnCase(actor, c);
+export const mayWorkOn = (actor: CaseActor, c: Pick<CaseForAccess, "assignedMemberId">) =>
+  can(actor.role, "case:work") || isOwnCase(actor, c);
 
 /** May conclude it: an apprentice's conclusion on their own case then waits for a senior. */
-export const mayConclude = (actor: CaseActor, c: Pick<CaseForAccess, "assignedMemberId">) => can(actor.role, "case:conclude") || isOwnCase(actor, c);
+export const mayConclude = (actor: CaseActor, c: Pick<CaseForAccess, "assignedMemberId">) =>
+  can(actor.role, "case:conclude") || isOwnCase(actor, c);
 
 /** May do a check that needs `skill` on this case: an apprentice only within their own level. */
-export const mayDoCheck = (actor: CaseActor, skill: Skill) => actor.role !== "apprentice" || hasSkill(actor.skill ?? "apprentice", skill);
+export const mayDoCheck = (actor: CaseActor, skill: Skill) =>
+  actor.role !== "apprentice" || hasSkill(actor.skill ?? "apprentice", skill);

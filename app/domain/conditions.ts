@@ -25,9 +25,12 @@ export const SPEED_BANDS_KMH: Record<"low_speed" | "mid_speed" | "high_speed", r
 /** The speed band a road speed falls in. */
 export function speedBand(kmh: number): "low_speed" | "mid_speed" | "high_speed" {
   if (!(kmh >= 0)) throw new RangeError(`A road speed is 0 km/h or more, not ${kmh}.`);
-  return kmh < SPEED_BANDS_KMH.low_speed[1] ? "low_speed" : kmh < SPEED_BANDS_KMH.mid_speed[1] ? "mid_speed" : "high_speed";
+  return kmh < SPEED_BANDS_KMH.low_speed[1]
+    ? "low_speed"
+    : kmh < SPEED_BANDS_KMH.mid_speed[1]
+      ? "mid_speed"
+      : "high_speed";
 }
-
 
 export const CONDITION_LABEL: Record<Condition, string> = {
   cold: "engine cold",

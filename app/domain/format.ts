@@ -16,7 +16,17 @@ export function formatMoney(amount: number, currency: string, locale = "en-GB") 
 
 export function formatDate(value: string | Date, locale = "en-GB") {
   let f = dates.get(locale);
-  if (!f) dates.set(locale, (f = new Intl.DateTimeFormat(locale, { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", timeZone: "UTC" })));
+  if (!f)
+    dates.set(
+      locale,
+      (f = new Intl.DateTimeFormat(locale, {
+        day: "numeric",
+        month: "short",
+        hour: "2-digit",
+        minute: "2-digit",
+        timeZone: "UTC",
+      })),
+    );
   return f.format(new Date(value));
 }
 

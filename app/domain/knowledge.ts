@@ -74,7 +74,14 @@ export const CAUSE_LEVELS = ["system", "component", "failure_mode"] as const;
 export type CauseLevel = (typeof CAUSE_LEVELS)[number];
 
 /** What a check needs to be done: its access, shown with its tools. */
-export const CHECK_ACCESS = ["ramp", "road_test", "scan_tool", "wheels_off", "bonnet_open", "cold_engine"] as const;
+export const CHECK_ACCESS = [
+  "ramp",
+  "road_test",
+  "scan_tool",
+  "wheels_off",
+  "bonnet_open",
+  "cold_engine",
+] as const;
 export type CheckAccess = (typeof CHECK_ACCESS)[number];
 
 export const CHECK_ACCESS_LABEL: Record<CheckAccess, string> = {
@@ -106,14 +113,21 @@ export type Caution = (typeof CAUTIONS)[number];
 // Shown with every check that carries the caution, in a form that cannot be missed. They point to
 // the maker's procedure and local rules: Ramplight suggests; a qualified person decides.
 export const CAUTION_TEXT: Record<Caution, string> = {
-  lifting: "Lifting: use the maker's lift points, axle stands or a locked ramp; never work under a car held only by a jack.",
-  hot_parts: "Hot parts: exhaust, engine and brakes stay hot long after a drive. Let them cool or wear gloves.",
+  lifting:
+    "Lifting: use the maker's lift points, axle stands or a locked ramp; never work under a car held only by a jack.",
+  hot_parts:
+    "Hot parts: exhaust, engine and brakes stay hot long after a drive. Let them cool or wear gloves.",
   fuel: "Fuel: no flames or sparks; relieve system pressure by the maker's procedure; have an extinguisher to hand.",
-  brake_hydraulics: "Brake hydraulics: follow the maker's bleeding procedure; fluid damages paint and eyes. Test the pedal before the car moves.",
-  airbag: "Airbags: disconnect the battery and wait the maker's stated time before working near airbag parts.",
-  high_voltage: "High voltage: only trained and authorised people work on orange-cabled systems, with the maker's isolation procedure.",
-  rotating_parts: "Rotating parts: keep hands, hair and clothing clear of belts, fans and wheels that can turn.",
-  pressurised_cooling: "Cooling system under pressure: never open a hot filler cap; let the engine cool first.",
+  brake_hydraulics:
+    "Brake hydraulics: follow the maker's bleeding procedure; fluid damages paint and eyes. Test the pedal before the car moves.",
+  airbag:
+    "Airbags: disconnect the battery and wait the maker's stated time before working near airbag parts.",
+  high_voltage:
+    "High voltage: only trained and authorised people work on orange-cabled systems, with the maker's isolation procedure.",
+  rotating_parts:
+    "Rotating parts: keep hands, hair and clothing clear of belts, fans and wheels that can turn.",
+  pressurised_cooling:
+    "Cooling system under pressure: never open a hot filler cap; let the engine cool first.",
   exhaust_fumes: "Exhaust fumes: run engines only with extraction or outdoors.",
   battery_acid: "Battery: acid and explosive gas; eye protection, no sparks, disconnect the negative first.",
 };

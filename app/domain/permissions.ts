@@ -26,14 +26,38 @@ export const PERMISSIONS = [
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 
-const TECHNICIAN: Permission[] = ["case:read", "case:open", "case:work", "case:conclude", "case:ask-senior", "kb:read", "kb:propose"];
+const TECHNICIAN: Permission[] = [
+  "case:read",
+  "case:open",
+  "case:work",
+  "case:conclude",
+  "case:ask-senior",
+  "kb:read",
+  "kb:propose",
+];
 
 export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
   apprentice: ["case:read", "case:work-assigned", "case:ask-senior", "kb:read"],
   technician: TECHNICIAN,
   senior: [...TECHNICIAN, "case:signoff", "case:reopen", "case:close", "kb:edit", "kb:approve", "audit:read"],
-  advisor: ["case:read", "case:open", "case:close", "kb:read", "owner:manage", "estimate:manage", "payment:take"],
-  admin: ["case:read", "kb:read", "member:manage", "settings:manage", "audit:read", "data:export", "owner:manage"],
+  advisor: [
+    "case:read",
+    "case:open",
+    "case:close",
+    "kb:read",
+    "owner:manage",
+    "estimate:manage",
+    "payment:take",
+  ],
+  admin: [
+    "case:read",
+    "kb:read",
+    "member:manage",
+    "settings:manage",
+    "audit:read",
+    "data:export",
+    "owner:manage",
+  ],
 };
 
 export function can(role: Role, permission: Permission): boolean {

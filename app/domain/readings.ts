@@ -7,4 +7,3 @@ export type ReadingBand = (typeof READING_BANDS)[number];
 export type BandFigures = Record<ReadingBand, number>;
 
 export const PASSING_BANDS: ReadonlySet<ReadingBand> = new Set(["well_within", "near"]);
-

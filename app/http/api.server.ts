@@ -12,7 +12,12 @@ import { ReasoningError } from "~/reasoning";
  * (401 JSON, not a redirect), the permission, and every refusal as `{ error }` with a 4xx.
  * Unexpected failures answer 500 with a plain message and never a stack trace.
  */
-export async function api(request: Request, db: Db, permission: Permission | null, handler: (member: CurrentMember) => Promise<unknown>) {
+export async function api(
+  request: Request,
+  db: Db,
+  permission: Permission | null,
+  handler: (member: CurrentMember) => Promise<unknown>,
+) {
   try {
     const account = await getAccount(request, db);
     if (!account) refuse(401, "Sign in first.");
@@ -20,9 +25,15 @@ export async function api(request: Request, db: Db, permission: Permission | nul
     try {
       member = asMember(account);
     } catch {
-      refuse(403, account.memberId ? "Your membership of this workshop is suspended." : "You are not a member of a workshop yet.");
+      refuse(
+        403,
+        account.memberId
+          ? "Your membership of this workshop is suspended."
+          : "You are not a member of a workshop yet.",
+      );
     }
-    if (permission && !can(member.role, permission)) refuse(403, `Your role (${member.role}) cannot do this.`);
+    if (permission && !can(member.role, permission))
+      refuse(403, `Your role (${member.role}) cannot do this.`);
     const body = await handler(member);
     return body instanceof Response ? body : Response.json(body);
   } catch (error) {
@@ -30,8 +41,12 @@ export async function api(request: Request, db: Db, permission: Permission | nul
       if (error.headers.get("content-type")?.includes("application/json")) return error;
       return httpError(error.status, (await error.text()) || "Refused.");
     }
-    if (error instanceof ZodError) return httpError(400, error.issues[0]?.message ?? "The request body is not valid.", { issues: error.issues.map((i) => ({ path: i.path.join("."), message: i.message })) });
-    if (error instanceof ReasoningError || error instanceof MeasureError) return httpError(400, error.message, { code: error.code });
+    if (error instanceof ZodError)
+      return httpError(400, error.issues[0]?.message ?? "The request body is not valid.", {
+        issues: error.issues.map((i) => ({ path: i.path.join("."), message: i.message })),
+      });
+    if (error instanceof ReasoningError || error instanceof MeasureError)
+      return httpError(400, error.message, { code: error.code });
     console.error("api error:", error);
     return httpError(500, "Something broke on our side. Nothing was changed.");
   }

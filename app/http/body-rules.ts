@@ -24,4 +24,5 @@ export function bodyRuleFor(pathname: string): BodyRule {
   return FORM_RULE;
 }
 
-export const describeBytes = (n: number) => (n >= 1024 * KiB ? `${(n / (1024 * KiB)).toFixed(1)} MB` : `${Math.ceil(n / KiB)} KB`);
+export const describeBytes = (n: number) =>
+  n >= 1024 * KiB ? `${(n / (1024 * KiB)).toFixed(1)} MB` : `${Math.ceil(n / KiB)} KB`;

@@ -4,7 +4,8 @@ import { refusalMessage } from "./errors.server";
 import type { FormAnswer, FormErrors } from "./forms";
 
 /** A refused form: the messages by field, 400 unless told, nothing changed. */
-export const invalid = (errors: FormErrors, status = 400) => data<FormAnswer>({ errors, notice: null }, { status });
+export const invalid = (errors: FormErrors, status = 400) =>
+  data<FormAnswer>({ errors, notice: null }, { status });
 
 /** Done: the notice to show. */
 export const done = (notice: string): FormAnswer => ({ errors: {}, notice });
@@ -12,13 +13,21 @@ export const done = (notice: string): FormAnswer => ({ errors: {}, notice });
 /** zod's issues as field messages; issues of the whole form go under `form`. */
 export function zodErrors(error: ZodError): FormErrors {
   const flat = z.flattenError(error);
-  return { ...(flat.fieldErrors as FormErrors), ...(flat.formErrors.length ? { form: flat.formErrors } : {}) };
+  return {
+    ...(flat.fieldErrors as FormErrors),
+    ...(flat.formErrors.length ? { form: flat.formErrors } : {}),
+  };
 }
 
 /** Parses a form with a schema: the values, or the refusal to return. */
-export async function readForm<S extends z.ZodType>(request: Request, schema: S): Promise<{ ok: true; value: z.infer<S> } | { ok: false; answer: ReturnType<typeof invalid> }> {
+export async function readForm<S extends z.ZodType>(
+  request: Request,
+  schema: S,
+): Promise<{ ok: true; value: z.infer<S> } | { ok: false; answer: ReturnType<typeof invalid> }> {
   const parsed = schema.safeParse(Object.fromEntries(await request.formData()));
-  return parsed.success ? { ok: true, value: parsed.data } : { ok: false, answer: invalid(zodErrors(parsed.error)) };
+  return parsed.success
+    ? { ok: true, value: parsed.data }
+    : { ok: false, answer: invalid(zodErrors(parsed.error)) };
 }
 
 /**

@@ -6,7 +6,13 @@
 export type JsonPayload<T> = string & { readonly __payload: T };
 
 /** What a value becomes after a JSON round trip: dates are strings. */
-export type Json<T> = T extends Date ? string : T extends (infer U)[] ? Json<U>[] : T extends object ? { [K in keyof T]: Json<T[K]> } : T;
+export type Json<T> = T extends Date
+  ? string
+  : T extends (infer U)[]
+    ? Json<U>[]
+    : T extends object
+      ? { [K in keyof T]: Json<T[K]> }
+      : T;
 
 export const toPayload = <T>(value: T) => JSON.stringify(value) as JsonPayload<T>;
 

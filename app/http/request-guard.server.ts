@@ -22,7 +22,8 @@ const refuse = (status: number, message: string): never => {
   throw refusal(status, message);
 };
 
-const NUL_MESSAGE = "Part of what was sent holds a NUL character (\\0), which Ramplight does not store. Remove it and send again.";
+const NUL_MESSAGE =
+  "Part of what was sent holds a NUL character (\\0), which Ramplight does not store. Remove it and send again.";
 
 export async function guardRequest(request: Request, appOrigin: string): Promise<void> {
   const url = new URL(request.url);
@@ -38,11 +39,17 @@ export async function guardRequest(request: Request, appOrigin: string): Promise
   if (declared === null) {
     // Browsers always send the length of a form or fetch body; a body without one (chunked) could
     // be any size, so it is refused rather than read to find out.
-    if (request.headers.has("transfer-encoding")) refuse(411, "Send the length of the body (Content-Length) with this request.");
+    if (request.headers.has("transfer-encoding"))
+      refuse(411, "Send the length of the body (Content-Length) with this request.");
   } else {
     length = Number(declared);
-    if (!Number.isSafeInteger(length) || length < 0) refuse(400, "The Content-Length of this request is not a number of bytes.");
-    if (length > rule.maxBytes) refuse(413, `That request is ${describeBytes(length)}; this address takes at most ${describeBytes(rule.maxBytes)}. Nothing was saved.`);
+    if (!Number.isSafeInteger(length) || length < 0)
+      refuse(400, "The Content-Length of this request is not a number of bytes.");
+    if (length > rule.maxBytes)
+      refuse(
+        413,
+        `That request is ${describeBytes(length)}; this address takes at most ${describeBytes(rule.maxBytes)}. Nothing was saved.`,
+      );
   }
 
   const type = (request.headers.get("content-type") ?? "").split(";")[0].trim().toLowerCase();
@@ -50,7 +57,8 @@ export async function guardRequest(request: Request, appOrigin: string): Promise
     // Already within the limit, so reading it is bounded. A DELETE sends no body at all.
     const text = declared !== null && length === 0 ? "" : await request.clone().text();
     if (text === "") return;
-    if (type !== "application/json") refuse(415, "This address takes JSON: send the body with Content-Type: application/json.");
+    if (type !== "application/json")
+      refuse(415, "This address takes JSON: send the body with Content-Type: application/json.");
     let parsed: unknown;
     try {
       parsed = JSON.parse(text);
@@ -61,7 +69,11 @@ export async function guardRequest(request: Request, appOrigin: string): Promise
     return;
   }
   // Pages: every action reads a form, even an empty one (sign-out sends no fields).
-  if (!FORM_TYPES.includes(type)) refuse(415, "This page takes a form: send it from the page's own form (Content-Type: application/x-www-form-urlencoded or multipart/form-data).");
+  if (!FORM_TYPES.includes(type))
+    refuse(
+      415,
+      "This page takes a form: send it from the page's own form (Content-Type: application/x-www-form-urlencoded or multipart/form-data).",
+    );
   let form: FormData;
   try {
     form = await request.clone().formData();
@@ -124,7 +136,8 @@ export function withResponseHeaders(response: Response): Response {
   try {
     const h = response.headers;
     if (!h.has("X-Content-Type-Options")) h.set("X-Content-Type-Options", "nosniff");
-    if (!h.has("Content-Security-Policy")) h.set("Content-Security-Policy", "default-src 'none'; frame-ancestors 'none'; base-uri 'none'");
+    if (!h.has("Content-Security-Policy"))
+      h.set("Content-Security-Policy", "default-src 'none'; frame-ancestors 'none'; base-uri 'none'");
     if (!h.has("Cache-Control")) h.set("Cache-Control", "no-store");
     if (!h.has("X-Frame-Options")) h.set("X-Frame-Options", "DENY");
     return response;

@@ -1,6 +1,9 @@
 // Response headers of every page (OWASP ASVS 5.0 V3.4): a nonce-based CSP, no framing,
 // no MIME sniffing, a strict referrer policy, and HSTS when served over HTTPS.
-export function securityHeaders(headers: Headers, opts: { nonce: string; dev: boolean; secure: boolean; formTargets: string[] }) {
+export function securityHeaders(
+  headers: Headers,
+  opts: { nonce: string; dev: boolean; secure: boolean; formTargets: string[] },
+) {
   const connect = opts.dev ? "'self' ws: wss:" : "'self'";
   const script = opts.dev ? `'self' 'nonce-${opts.nonce}' 'unsafe-eval'` : `'self' 'nonce-${opts.nonce}'`;
   const csp = [

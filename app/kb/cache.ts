@@ -21,7 +21,8 @@ export function kbCache<T>(name: string, maxEntries = 200): KbCache<T> {
       if ((latest.get(workshopId) ?? -Infinity) < kbVersion) {
         latest.set(workshopId, kbVersion);
         const stale = `${name}|${workshopId}|`;
-        for (const k of entries.keys()) if (k.startsWith(stale) && !k.startsWith(`${stale}${kbVersion}|`)) entries.delete(k);
+        for (const k of entries.keys())
+          if (k.startsWith(stale) && !k.startsWith(`${stale}${kbVersion}|`)) entries.delete(k);
       }
       // The promise is cached, so requests arriving together build once; a failed build is forgotten.
       const value = Promise.resolve().then(build);

@@ -15,7 +15,12 @@ const randomIds: IdFor = () => randomUUID();
  * Copies a knowledge base into one workshop's own tables, in the caller's transaction. Rows that
  * exist already are left as they are, so a senior's curation survives a re-seed.
  */
-export async function copyKnowledgeBase(tx: Tx, workshopId: string, kb: KnowledgeItems, idFor: IdFor = randomIds) {
+export async function copyKnowledgeBase(
+  tx: Tx,
+  workshopId: string,
+  kb: KnowledgeItems,
+  idFor: IdFor = randomIds,
+) {
   // One id per key, however often the key is named by links.
   const ids = new Map<string, string>();
   const id = (kind: KbItemKind, key: string) => {
@@ -71,13 +76,27 @@ export async function copyKnowledgeBase(tx: Tx, workshopId: string, kb: Knowledg
   if (kb.symptomLinks.length) {
     await tx
       .insert(symptomLinks)
-      .values(kb.symptomLinks.map((l) => ({ workshopId, symptomId: id("symptom", l.symptom), causeId: id("cause", l.cause), p: l.p })))
+      .values(
+        kb.symptomLinks.map((l) => ({
+          workshopId,
+          symptomId: id("symptom", l.symptom),
+          causeId: id("cause", l.cause),
+          p: l.p,
+        })),
+      )
       .onConflictDoNothing();
   }
   if (kb.checkLinks.length) {
     await tx
       .insert(checkLinks)
-      .values(kb.checkLinks.map((l) => ({ workshopId, checkId: id("check", l.check), causeId: id("cause", l.cause), pFail: l.pFail })))
+      .values(
+        kb.checkLinks.map((l) => ({
+          workshopId,
+          checkId: id("check", l.check),
+          causeId: id("cause", l.cause),
+          pFail: l.pFail,
+        })),
+      )
       .onConflictDoNothing();
   }
 }
@@ -86,11 +105,21 @@ export async function copyKnowledgeBase(tx: Tx, workshopId: string, kb: Knowledg
 export const STARTER_TEMPLATE = "starter";
 
 export async function saveTemplate(db: Pick<Db, "insert">, key: string, document: KnowledgeDocument) {
-  await db.insert(kbTemplates).values({ key, document }).onConflictDoUpdate({ target: kbTemplates.key, set: { document, updatedAt: new Date() } });
+  await db
+    .insert(kbTemplates)
+    .values({ key, document })
+    .onConflictDoUpdate({ target: kbTemplates.key, set: { document, updatedAt: new Date() } });
 }
 
 export async function loadTemplate(db: Pick<Db, "select">, key: string): Promise<KnowledgeDocument> {
-  const [row] = await db.select({ document: kbTemplates.document }).from(kbTemplates).where(eq(kbTemplates.key, key));
-  if (!row) refuse(503, "The starter knowledge base is not installed on this server yet (npm run db:seed writes it). Nothing was created.");
+  const [row] = await db
+    .select({ document: kbTemplates.document })
+    .from(kbTemplates)
+    .where(eq(kbTemplates.key, key));
+  if (!row)
+    refuse(
+      503,
+      "The starter knowledge base is not installed on this server yet (npm run db:seed writes it). Nothing was created.",
+    );
   return row.document;
 }

@@ -3,7 +3,20 @@
 // refer to each other by key, never by database id, so a document moves between workshops.
 // Browser-safe: the shapes and their zod schema, no database.
 import { z } from "zod";
-import { type Applicability, CAUSE_LEVELS, CAUTIONS, CHECK_ACCESS, type Caution, type CheckAccess, PRIORITIES, type Priority, SYMPTOM_KINDS, type SymptomKind, SYSTEMS, type System } from "~/domain/knowledge";
+import {
+  type Applicability,
+  CAUSE_LEVELS,
+  CAUTIONS,
+  CHECK_ACCESS,
+  type Caution,
+  type CheckAccess,
+  PRIORITIES,
+  type Priority,
+  SYMPTOM_KINDS,
+  type SymptomKind,
+  SYSTEMS,
+  type System,
+} from "~/domain/knowledge";
 import { CONDITIONS, type Condition } from "~/domain/conditions";
 import { SKILLS, type Skill } from "~/domain/people";
 import type { BandFigures } from "~/domain/readings";
@@ -49,7 +62,14 @@ export type CheckResult =
   // gradeScale (optional): the distance from the limit that counts as one whole "miss" when the
   // reading is graded (well within / near / beyond / far beyond), where the limit itself is no
   // good scale (a limit of 0 mm, a voltage); see docs/reasoning.md.
-  | { kind: "measurement"; quantity: string; unit: string; rule: string; failMeans: string; gradeScale?: string };
+  | {
+      kind: "measurement";
+      quantity: string;
+      unit: string;
+      rule: string;
+      failMeans: string;
+      gradeScale?: string;
+    };
 
 export type CheckItem = {
   key: string;
@@ -80,13 +100,24 @@ export type KnowledgeItems = {
   checkLinks: CheckLinkItem[];
 };
 
-export type KnowledgeDocument = KnowledgeItems & { format: typeof KB_FORMAT; formatVersion: typeof KB_FORMAT_VERSION; name: string };
+export type KnowledgeDocument = KnowledgeItems & {
+  format: typeof KB_FORMAT;
+  formatVersion: typeof KB_FORMAT_VERSION;
+  name: string;
+};
 
-export const toDocument = (name: string, items: KnowledgeItems): KnowledgeDocument => ({ format: KB_FORMAT, formatVersion: KB_FORMAT_VERSION, name, ...items });
+export const toDocument = (name: string, items: KnowledgeItems): KnowledgeDocument => ({
+  format: KB_FORMAT,
+  formatVersion: KB_FORMAT_VERSION,
+  name,
+  ...items,
+});
 
 // ---- the schema, for documents that come from outside ----
 
-const key = z.string().regex(/^[a-z0-9][a-z0-9_-]{0,79}$/, "a key is 1–80 lower-case letters, digits, _ or -");
+const key = z
+  .string()
+  .regex(/^[a-z0-9][a-z0-9_-]{0,79}$/, "a key is 1–80 lower-case letters, digits, _ or -");
 const text = (max: number) => z.string().trim().min(1).max(max);
 const probability = z.number().min(0, "a probability is at least 0").max(1, "a probability is at most 1");
 
@@ -107,7 +138,13 @@ export const SymptomItemSchema = z
     synonyms: z.array(text(120)).max(80),
     system: z.enum(SYSTEMS),
     kind: z.enum(SYMPTOM_KINDS),
-    code: z.string().regex(/^[PCBU][0-9A-F]{4}$/, "a trouble code is a letter P, C, B or U and four characters, such as P0420").optional(),
+    code: z
+      .string()
+      .regex(
+        /^[PCBU][0-9A-F]{4}$/,
+        "a trouble code is a letter P, C, B or U and four characters, such as P0420",
+      )
+      .optional(),
     conditions: z.array(text(80)).max(20),
     leak: probability,
     unlisted: probability.optional(),
@@ -145,7 +182,16 @@ export const CheckItemSchema = z
     cautions: z.array(z.enum(CAUTIONS)),
     result: z.discriminatedUnion("kind", [
       z.object({ kind: z.literal("pass_fail"), failMeans: z.string().max(1000) }).strict(),
-      z.object({ kind: z.literal("measurement"), quantity: text(120), unit: z.string().max(20), rule: text(200), failMeans: z.string().max(1000), gradeScale: text(40).optional() }).strict(),
+      z
+        .object({
+          kind: z.literal("measurement"),
+          quantity: text(120),
+          unit: z.string().max(20),
+          rule: text(200),
+          failMeans: z.string().max(1000),
+          gradeScale: text(40).optional(),
+        })
+        .strict(),
     ]),
     falseAlarm: probability,
   })
@@ -153,20 +199,57 @@ export const CheckItemSchema = z
 
 export const KnowledgeDocumentSchema = z
   .object({
-    format: z.literal(KB_FORMAT, { message: `this is not a Ramplight knowledge base (format must be "${KB_FORMAT}")` }),
-    formatVersion: z.literal(KB_FORMAT_VERSION, { message: `this reader takes format version ${KB_FORMAT_VERSION}` }),
+    format: z.literal(KB_FORMAT, {
+      message: `this is not a Ramplight knowledge base (format must be "${KB_FORMAT}")`,
+    }),
+    formatVersion: z.literal(KB_FORMAT_VERSION, {
+      message: `this reader takes format version ${KB_FORMAT_VERSION}`,
+    }),
     name: text(120),
     symptoms: z.array(SymptomItemSchema).max(5_000),
     causes: z.array(CauseItemSchema).max(5_000),
     checks: z.array(CheckItemSchema).max(5_000),
-    symptomLinks: z.array(z.object({ symptom: key, cause: key, p: probability, when: z.array(z.enum(CONDITIONS)).max(10).optional() }).strict()).max(50_000),
+    symptomLinks: z
+      .array(
+        z
+          .object({
+            symptom: key,
+            cause: key,
+            p: probability,
+            when: z.array(z.enum(CONDITIONS)).max(10).optional(),
+          })
+          .strict(),
+      )
+      .max(50_000),
     checkLinks: z
       .array(
         z
-          .object({ check: key, cause: key, pFail: probability, graded: z.object({ well_within: probability, near: probability, beyond: probability, far_beyond: probability }).strict().optional() })
+          .object({
+            check: key,
+            cause: key,
+            pFail: probability,
+            graded: z
+              .object({
+                well_within: probability,
+                near: probability,
+                beyond: probability,
+                far_beyond: probability,
+              })
+              .strict()
+              .optional(),
+          })
           .strict()
-          .refine((l) => !l.graded || Math.abs(l.graded.well_within + l.graded.near + l.graded.beyond + l.graded.far_beyond - 1) < 1e-6, "the four band figures of a graded link add up to 1")
-          .refine((l) => !l.graded || Math.abs(l.graded.beyond + l.graded.far_beyond - l.pFail) < 1e-6, "a graded link's two failing bands add up to its pFail"),
+          .refine(
+            (l) =>
+              !l.graded ||
+              Math.abs(l.graded.well_within + l.graded.near + l.graded.beyond + l.graded.far_beyond - 1) <
+                1e-6,
+            "the four band figures of a graded link add up to 1",
+          )
+          .refine(
+            (l) => !l.graded || Math.abs(l.graded.beyond + l.graded.far_beyond - l.pFail) < 1e-6,
+            "a graded link's two failing bands add up to its pFail",
+          ),
       )
       .max(50_000),
   })

@@ -20,9 +20,29 @@ export function loadKnowledge(db: Db, workshopId: string, version: number): Prom
 
 async function readKnowledge(db: Db, workshopId: string, version: number): Promise<Knowledge> {
   const [s, c, k, sl, cl] = await Promise.all([
-    db.select({ id: symptoms.id, name: symptoms.name, leak: symptoms.leak, synonyms: symptoms.synonyms, conditions: symptoms.conditions, system: symptoms.system }).from(symptoms).where(eq(symptoms.workshopId, workshopId)),
     db
-      .select({ id: causes.id, parentId: causes.parentId, level: causes.level, name: causes.name, baseRate: causes.baseRate, applicability: causes.applicability, priority: causes.priority, repairMinutes: causes.repairMinutes, partsCost: causes.partsCost })
+      .select({
+        id: symptoms.id,
+        name: symptoms.name,
+        leak: symptoms.leak,
+        synonyms: symptoms.synonyms,
+        conditions: symptoms.conditions,
+        system: symptoms.system,
+      })
+      .from(symptoms)
+      .where(eq(symptoms.workshopId, workshopId)),
+    db
+      .select({
+        id: causes.id,
+        parentId: causes.parentId,
+        level: causes.level,
+        name: causes.name,
+        baseRate: causes.baseRate,
+        applicability: causes.applicability,
+        priority: causes.priority,
+        repairMinutes: causes.repairMinutes,
+        partsCost: causes.partsCost,
+      })
       .from(causes)
       .where(eq(causes.workshopId, workshopId)),
     db
@@ -44,8 +64,14 @@ async function readKnowledge(db: Db, workshopId: string, version: number): Promi
       })
       .from(checks)
       .where(eq(checks.workshopId, workshopId)),
-    db.select({ symptomId: symptomLinks.symptomId, causeId: symptomLinks.causeId, p: symptomLinks.p }).from(symptomLinks).where(eq(symptomLinks.workshopId, workshopId)),
-    db.select({ checkId: checkLinks.checkId, causeId: checkLinks.causeId, pFail: checkLinks.pFail }).from(checkLinks).where(eq(checkLinks.workshopId, workshopId)),
+    db
+      .select({ symptomId: symptomLinks.symptomId, causeId: symptomLinks.causeId, p: symptomLinks.p })
+      .from(symptomLinks)
+      .where(eq(symptomLinks.workshopId, workshopId)),
+    db
+      .select({ checkId: checkLinks.checkId, causeId: checkLinks.causeId, pFail: checkLinks.pFail })
+      .from(checkLinks)
+      .where(eq(checkLinks.workshopId, workshopId)),
   ]);
   return { kbVersion: version, symptoms: s, causes: c, checks: k, symptomLinks: sl, checkLinks: cl };
 }
@@ -56,5 +82,12 @@ export async function checkDetails(db: Db, workshopId: string, checkId: string) 
   const kb = await loadKnowledge(db, workshopId, await kbVersion(db, workshopId));
   const k = kb.checks.find((c) => c.id === checkId);
   if (!k) refuse(404, "No such check in this workshop's knowledge base.");
-  return { id: k.id, name: k.name, instructions: k.instructions, tools: k.tools, cautions: k.cautions, failMeans: k.failMeans };
+  return {
+    id: k.id,
+    name: k.name,
+    instructions: k.instructions,
+    tools: k.tools,
+    cautions: k.cautions,
+    failMeans: k.failMeans,
+  };
 }

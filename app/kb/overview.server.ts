@@ -11,7 +11,14 @@ export async function kbOverview(db: Db, workshopId: string) {
     db.select({ n: count() }).from(checkLinks).where(eq(checkLinks.workshopId, workshopId)),
   ]);
   const tree = await db
-    .select({ id: causes.id, parentId: causes.parentId, level: causes.level, name: causes.name, system: causes.system, priority: causes.priority })
+    .select({
+      id: causes.id,
+      parentId: causes.parentId,
+      level: causes.level,
+      name: causes.name,
+      system: causes.system,
+      priority: causes.priority,
+    })
     .from(causes)
     .where(eq(causes.workshopId, workshopId))
     .orderBy(asc(causes.system), asc(causes.name));
@@ -21,7 +28,13 @@ export async function kbOverview(db: Db, workshopId: string) {
     .where(eq(symptoms.workshopId, workshopId))
     .orderBy(asc(symptoms.system), asc(symptoms.name));
   return {
-    counts: { symptoms: symptomList.length, causes: tree.length, checks: k.n, symptomLinks: sl.n, checkLinks: cl.n },
+    counts: {
+      symptoms: symptomList.length,
+      causes: tree.length,
+      checks: k.n,
+      symptomLinks: sl.n,
+      checkLinks: cl.n,
+    },
     tree,
     symptoms: symptomList,
   };

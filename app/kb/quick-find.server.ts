@@ -3,7 +3,15 @@ import type { Db } from "~/db/client.server";
 import { cases, owners, vehicles } from "~/db/schema";
 import { kbCache } from "./cache";
 import { loadKnowledge } from "./knowledge.server";
-import { caseEntry, entriesFromKnowledgeBase, getIndex, quickFindKey, vehicleEntry, type Entry, type QuickFindIndex } from "~/quick-find";
+import {
+  caseEntry,
+  entriesFromKnowledgeBase,
+  getIndex,
+  quickFindKey,
+  vehicleEntry,
+  type Entry,
+  type QuickFindIndex,
+} from "~/quick-find";
 
 const entryCache = kbCache<Entry[]>("quick-find-entries", 100);
 
@@ -19,12 +27,26 @@ export function knowledgeEntries(db: Db, workshopId: string, kbVersion: number):
 export async function fleetEntries(db: Db, workshopId: string): Promise<Entry[]> {
   const [v, c] = await Promise.all([
     db
-      .select({ id: vehicles.id, registration: vehicles.registration, vin: vehicles.vin, make: vehicles.make, model: vehicles.model, year: vehicles.year, ownerName: owners.name })
+      .select({
+        id: vehicles.id,
+        registration: vehicles.registration,
+        vin: vehicles.vin,
+        make: vehicles.make,
+        model: vehicles.model,
+        year: vehicles.year,
+        ownerName: owners.name,
+      })
       .from(vehicles)
       .innerJoin(owners, eq(owners.id, vehicles.ownerId))
       .where(eq(vehicles.workshopId, workshopId)),
     db
-      .select({ id: cases.id, number: cases.number, registration: vehicles.registration, vehicle: sql<string>`${vehicles.make} || ' ' || ${vehicles.model}`, complaint: cases.complaint })
+      .select({
+        id: cases.id,
+        number: cases.number,
+        registration: vehicles.registration,
+        vehicle: sql<string>`${vehicles.make} || ' ' || ${vehicles.model}`,
+        complaint: cases.complaint,
+      })
       .from(cases)
       .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
       .where(eq(cases.workshopId, workshopId))
@@ -34,7 +56,11 @@ export async function fleetEntries(db: Db, workshopId: string): Promise<Entry[]>
   return [...v.map(vehicleEntry), ...c.map(caseEntry)];
 }
 
-export async function quickFindIndexes(db: Db, workshopId: string, kbVersion: number): Promise<QuickFindIndex[]> {
+export async function quickFindIndexes(
+  db: Db,
+  workshopId: string,
+  kbVersion: number,
+): Promise<QuickFindIndex[]> {
   const kbEntries = await knowledgeEntries(db, workshopId, kbVersion);
   const kb = getIndex(quickFindKey(workshopId, kbVersion), () => kbEntries);
   const fleet = await fleetEntries(db, workshopId);

@@ -14,6 +14,9 @@ export async function sendMail(message: { to: string; subject: string; text: str
   // Loopback fakes speak plain SMTP; anything else must offer TLS.
   const loopback = /^smtp:\/\/(127\.0\.0\.1|localhost)[:/]/.test(url);
   transport ??= createTransport({ url, ignoreTLS: loopback } as Parameters<typeof createTransport>[0]);
-  await transport.sendMail({ from: process.env.MAIL_FROM ?? "Ramplight <no-reply@ramplight.invalid>", ...message });
+  await transport.sendMail({
+    from: process.env.MAIL_FROM ?? "Ramplight <no-reply@ramplight.invalid>",
+    ...message,
+  });
   return true;
 }

@@ -33,17 +33,27 @@ const P0_GROUPS: Record<string, string> = {
 };
 
 export function parseDtc(input: string): DtcResult {
-  const code = String(input ?? "").trim().toUpperCase();
+  const code = String(input ?? "")
+    .trim()
+    .toUpperCase();
   if (!/^[A-Z][0-9A-Z]{4}$/.test(code)) {
-    return { valid: false, message: `"${input}" is not a trouble code; codes look like P0301: a letter and four characters.` };
+    return {
+      valid: false,
+      message: `"${input}" is not a trouble code; codes look like P0301: a letter and four characters.`,
+    };
   }
   const system = SYSTEMS[code[0]];
   if (!system) return { valid: false, message: `A trouble code starts with P, C, B or U, not ${code[0]}.` };
-  if (!/[0-3]/.test(code[1])) return { valid: false, message: `The second character of a trouble code is 0 to 3, not ${code[1]}.` };
+  if (!/[0-3]/.test(code[1]))
+    return { valid: false, message: `The second character of a trouble code is 0 to 3, not ${code[1]}.` };
   if (!/^[0-9A-F]{3}$/.test(code.slice(2))) {
-    return { valid: false, message: `The last three characters of a trouble code are 0–9 or A–F; "${code.slice(2)}" is not.` };
+    return {
+      valid: false,
+      message: `The last three characters of a trouble code are 0–9 or A–F; "${code.slice(2)}" is not.`,
+    };
   }
-  const scope: DtcScope = code[1] === "0" ? "generic" : code[1] === "1" ? "manufacturer" : "depends on system and edition";
+  const scope: DtcScope =
+    code[1] === "0" ? "generic" : code[1] === "1" ? "manufacturer" : "depends on system and edition";
   const result: { valid: true } & Dtc = { valid: true, code, system, scope };
   if (code.startsWith("P0") && P0_GROUPS[code[2]]) result.group = P0_GROUPS[code[2]];
   return result;

@@ -23,7 +23,12 @@ export type Formatted = { value: number; unit: string; text: string };
  * Convert and round to `digits` significant figures (default 3), but never round away whole
  * units: 123456 km stays 123456, 0.08890 mm shows as 0.0889.
  */
-export function formatQuantity(input: ReadingInput, kind: QuantityKind, system: UnitSystem, digits = 3): Formatted {
+export function formatQuantity(
+  input: ReadingInput,
+  kind: QuantityKind,
+  system: UnitSystem,
+  digits = 3,
+): Formatted {
   const target = TARGETS[kind]?.[system];
   if (!target) measureFail("INVALID_VALUE", `Cannot show a ${kind} in the ${system} system.`);
   const [unit, label] = target;
@@ -32,7 +37,10 @@ export function formatQuantity(input: ReadingInput, kind: QuantityKind, system: 
   if (reading.units.length === 0 || !reading.equalBase(ref)) {
     const example = `1 ${TARGETS[kind].metric[0]}`;
     const got = reading.units.length === 0 ? "has no unit" : `is in ${unitText(reading)}`;
-    measureFail("UNIT_MISMATCH", `That value ${got}; it should be ${describeKind(math.unit(example), example)}, such as ${example}.`);
+    measureFail(
+      "UNIT_MISMATCH",
+      `That value ${got}; it should be ${describeKind(math.unit(example), example)}, such as ${example}.`,
+    );
   }
   const value = reading.toNumber(unit);
   const text = `${round(value, digits)} ${label}`;

@@ -22,7 +22,8 @@ export function convertFuelConsumption(value: number, from: FuelUnit, to: FuelUn
     measureFail("INVALID_VALUE", `A fuel consumption must be a number above 0; got ${String(value)}.`);
   }
   for (const u of [from, to]) {
-    if (u !== "L/100km" && u !== "mpg_us" && u !== "mpg_uk") measureFail("UNKNOWN_UNIT", `"${u}" is not L/100km, mpg_us or mpg_uk.`);
+    if (u !== "L/100km" && u !== "mpg_us" && u !== "mpg_uk")
+      measureFail("UNKNOWN_UNIT", `"${u}" is not L/100km, mpg_us or mpg_uk.`);
   }
   const l100 = toLPer100km(value, from);
   return to === "L/100km" ? l100 : toLPer100km(l100, to); // the reciprocal is its own inverse

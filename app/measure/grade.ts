@@ -31,7 +31,8 @@ export type GradedReading = RuleResult & {
 
 type Bound = { side: "lower" | "upper"; limit: number };
 
-const strip = (n: MathNode): MathNode => (n.type === "ParenthesisNode" ? strip((n as MathNode & { content: MathNode }).content) : n);
+const strip = (n: MathNode): MathNode =>
+  n.type === "ParenthesisNode" ? strip((n as MathNode & { content: MathNode }).content) : n;
 const isValue = (n: MathNode) => {
   const s = strip(n);
   return s.type === "SymbolNode" && (s as MathNode & { name: string }).name === "value";
@@ -83,7 +84,11 @@ function bandOf(pass: boolean, m: number): ReadingBand {
  * Evaluate a reading against a rule and say how far it falls: `scale` (a quantity in the rule's
  * kind of unit, such as "0.4 V", or a plain number for unitless rules) overrides the default scale.
  */
-export function gradeReading(rule: string | CompiledRule, input: ReadingInput, scale?: ReadingInput): GradedReading {
+export function gradeReading(
+  rule: string | CompiledRule,
+  input: ReadingInput,
+  scale?: ReadingInput,
+): GradedReading {
   const compiled = typeof rule === "string" ? compileRule(rule) : rule;
   const result = evaluateRule(compiled, input);
   const unit = isUnit(compiled.expected) ? unitText(compiled.expected as Unit) : "";
@@ -97,7 +102,10 @@ export function gradeReading(rule: string | CompiledRule, input: ReadingInput, s
   } else {
     const lower = bounds.filter((b) => b.side === "lower").map((b) => b.limit);
     const upper = bounds.filter((b) => b.side === "upper").map((b) => b.limit);
-    s = lower.length && upper.length ? (Math.min(...upper) - Math.max(...lower)) / 2 : Math.abs(bounds[0].limit);
+    s =
+      lower.length && upper.length
+        ? (Math.min(...upper) - Math.max(...lower)) / 2
+        : Math.abs(bounds[0].limit);
   }
   if (!(s > 0)) return { ...result, band: null, miss: null };
   // Signed distance past each limit: positive outside it, negative inside.

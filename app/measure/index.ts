@@ -18,5 +18,13 @@ export { convertFuelConsumption, L100KM_TIMES_MPG_US, L100KM_TIMES_MPG_UK } from
 export type { FuelUnit } from "./fuel";
 export { formatQuantity } from "./format";
 export type { Formatted, QuantityKind, UnitSystem as QuantitySystem } from "./format";
-export { describeRule, formatMileage, KM_PER_MILE, mileageUnit, parseDecimal, parseMileage, showQuantity } from "./unit-system";
+export {
+  describeRule,
+  formatMileage,
+  KM_PER_MILE,
+  mileageUnit,
+  parseDecimal,
+  parseMileage,
+  showQuantity,
+} from "./unit-system";
 export type { Parsed, UnitSystem } from "./unit-system";

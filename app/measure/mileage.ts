@@ -21,7 +21,15 @@ export type Parsed<T> = { ok: true; value: T } | { ok: false; message: string };
 
 // Whole numbers with thousands separators as people write them: 84000, 84,000, 84 000.
 const WHOLE = /^(\d{1,3}(?:[, \u00a0\u202f]\d{3})+|\d+)$/;
-const DISTANCE_WORDS: Record<string, UnitSystem> = { km: "metric", kms: "metric", kilometres: "metric", kilometers: "metric", mi: "imperial", mile: "imperial", miles: "imperial" };
+const DISTANCE_WORDS: Record<string, UnitSystem> = {
+  km: "metric",
+  kms: "metric",
+  kilometres: "metric",
+  kilometers: "metric",
+  mi: "imperial",
+  mile: "imperial",
+  miles: "imperial",
+};
 
 /**
  * A mileage as typed ("84,000", "84 000 miles", "135000 km") in km, the unit it is stored in.
@@ -32,11 +40,15 @@ export function parseMileage(text: string, system: UnitSystem): Parsed<number> {
   const m = /^([\d, \u00a0\u202f]+?)\s*([a-z]+)?$/.exec(t);
   const unit = m?.[2] ? DISTANCE_WORDS[m[2]] : system;
   if (!m || !unit || !WHOLE.test(m[1].trim())) {
-    return { ok: false, message: `Mileage is a whole number of ${mileageUnit(system)}, such as ${system === "imperial" ? "84,000" : "135,000"}.` };
+    return {
+      ok: false,
+      message: `Mileage is a whole number of ${mileageUnit(system)}, such as ${system === "imperial" ? "84,000" : "135,000"}.`,
+    };
   }
   const n = Number(m[1].replace(/[^\d]/g, ""));
   const km = unit === "imperial" ? Math.round(n * KM_PER_MILE) : n;
-  if (km > 3_000_000) return { ok: false, message: "That mileage is more than any car covers; check the digits." };
+  if (km > 3_000_000)
+    return { ok: false, message: "That mileage is more than any car covers; check the digits." };
   return { ok: true, value: km };
 }
 
@@ -46,4 +58,3 @@ export function parseDecimal(text: string): number | null {
   if (!/^[-+]?(\d{1,3}(,\d{3})+|\d+)(\.\d+)?$/.test(t)) return null;
   return Number(t.replace(/,/g, ""));
 }
-

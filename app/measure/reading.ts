@@ -20,7 +20,8 @@ export function parseReading(input: ReadingInput): Unit {
 /** Like parseReading, and says whether the number was written as a percentage. */
 export function readReading(input: ReadingInput): Reading {
   if (typeof input === "number") return { unit: fromNumber(input, ""), percent: false };
-  if (typeof input === "object" && input !== null) return { unit: fromNumber(input.value, input.unit), percent: false };
+  if (typeof input === "object" && input !== null)
+    return { unit: fromNumber(input.value, input.unit), percent: false };
   if (typeof input !== "string" || input.trim() === "") {
     measureFail("EMPTY_READING", "No reading was entered. Type the number and its unit, such as 0.05 mm.");
   }
@@ -35,13 +36,17 @@ function parseText(raw: string): Unit {
   const fraction = FRACTION.exec(text);
   if (fraction) {
     const [, whole, num, den, unitWord] = fraction;
-    if (Number(den) === 0) measureFail("BAD_READING", `"${raw}" divides by zero. Write a fraction such as 2/32 in.`);
+    if (Number(den) === 0)
+      measureFail("BAD_READING", `"${raw}" divides by zero. Write a fraction such as 2/32 in.`);
     const value = Number(whole ?? 0) + Number(num) / Number(den);
     // mathjs would read "2/32 in" as 2 ÷ (32 in); the fraction is the number, the word its unit.
     text = `${value} ${unitWord === '"' ? "in" : unitWord.trim()}`;
   }
   if (/\d,\d/.test(text)) {
-    measureFail("DECIMAL_COMMA", `"${text}" has a comma. Write decimals with a point (0.09 mm) and no thousands separators.`);
+    measureFail(
+      "DECIMAL_COMMA",
+      `"${text}" has a comma. Write decimals with a point (0.09 mm) and no thousands separators.`,
+    );
   }
   let u: Unit;
   try {
@@ -49,7 +54,10 @@ function parseText(raw: string): Unit {
   } catch (e) {
     const unknown = /Unit "([^"]+)" not found/.exec(String((e as Error).message));
     if (unknown) {
-      measureFail("UNKNOWN_UNIT", `"${unknown[1]}" is not a unit I know. Use one such as mm, in, kPa, psi, bar, N m, lbf ft, L or degC.`);
+      measureFail(
+        "UNKNOWN_UNIT",
+        `"${unknown[1]}" is not a unit I know. Use one such as mm, in, kPa, psi, bar, N m, lbf ft, L or degC.`,
+      );
     }
     measureFail("BAD_READING", `"${raw}" is not a reading. Type a number then its unit, such as 0.05 mm.`);
   }
@@ -61,12 +69,18 @@ function parseText(raw: string): Unit {
 
 function fromNumber(value: number, unit: string): Unit {
   if (typeof value !== "number" || !Number.isFinite(value)) {
-    measureFail("BAD_READING", `${String(value)} is not a number. Type a number then its unit, such as 0.05 mm.`);
+    measureFail(
+      "BAD_READING",
+      `${String(value)} is not a number. Type a number then its unit, such as 0.05 mm.`,
+    );
   }
   if (unit === "") return math.unit(`${value}`);
   try {
     return math.unit(value, unit);
   } catch {
-    measureFail("UNKNOWN_UNIT", `"${unit}" is not a unit I know. Use one such as mm, in, kPa, psi, bar, N m, lbf ft, L or degC.`);
+    measureFail(
+      "UNKNOWN_UNIT",
+      `"${unit}" is not a unit I know. Use one such as mm, in, kPa, psi, bar, N m, lbf ft, L or degC.`,
+    );
   }
 }

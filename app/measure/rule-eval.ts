@@ -16,7 +16,10 @@ export function assertWhitelisted(node: MathNode): void {
   switch (node.type) {
     case "ConstantNode":
       if (typeof (node as MathNode & { value: unknown }).value !== "number") {
-        measureFail("UNSUPPORTED_RULE", `The rule contains ${node.toString()}; only numbers, value and units are allowed.`);
+        measureFail(
+          "UNSUPPORTED_RULE",
+          `The rule contains ${node.toString()}; only numbers, value and units are allowed.`,
+        );
       }
       return;
     case "SymbolNode": {
@@ -37,11 +40,15 @@ export function assertWhitelisted(node: MathNode): void {
     }
     case "RelationalNode": {
       const rel = node as RelationalNode;
-      if (!rel.conditionals.every((c) => COMPARISONS.has(c))) measureFail("UNSUPPORTED_RULE", "The rule chains an unknown comparison.");
+      if (!rel.conditionals.every((c) => COMPARISONS.has(c)))
+        measureFail("UNSUPPORTED_RULE", "The rule chains an unknown comparison.");
       return rel.params.forEach(assertWhitelisted);
     }
     default:
-      measureFail("UNSUPPORTED_RULE", `The rule contains ${node.type.replace("Node", "").toLowerCase()} syntax (${node.toString()}); rules are comparisons of value with numbers and units.`);
+      measureFail(
+        "UNSUPPORTED_RULE",
+        `The rule contains ${node.type.replace("Node", "").toLowerCase()} syntax (${node.toString()}); rules are comparisons of value with numbers and units.`,
+      );
   }
 }
 
@@ -61,7 +68,8 @@ export function evaluate(node: MathNode, value: Value): Value {
       const args = op.args.map((a) => evaluate(a, value));
       if (COMPARISONS.has(op.fn)) return compare(op.fn, args[0], args[1]);
       if (LOGIC.has(op.fn)) return logic(op.fn, args);
-      if (args.some((a) => typeof a === "boolean")) measureFail("RULE_NOT_A_TEST", `The rule does arithmetic on a true/false result: ${op.toString()}.`);
+      if (args.some((a) => typeof a === "boolean"))
+        measureFail("RULE_NOT_A_TEST", `The rule does arithmetic on a true/false result: ${op.toString()}.`);
       return arithmetic(op.fn, args);
     }
     case "RelationalNode": {
@@ -78,14 +86,20 @@ export function evaluate(node: MathNode, value: Value): Value {
 // offset units such as degF and degC by their stored values, which is wrong; converting first is
 // right for every unit.) Number comparison uses mathjs's relative tolerance, so 0.16 cm = 1.6 mm.
 function compare(fn: string, a: Value, b: Value): boolean {
-  if (typeof a === "boolean" || typeof b === "boolean") measureFail("RULE_NOT_A_TEST", "The rule compares a true/false result with a number.");
+  if (typeof a === "boolean" || typeof b === "boolean")
+    measureFail("RULE_NOT_A_TEST", "The rule compares a true/false result with a number.");
   for (const side of [a, b]) {
-    if (isUnit(side) && side.value === null) measureFail("BAD_RULE", `The rule has the unit ${unitText(side)} without a number before it.`);
+    if (isUnit(side) && side.value === null)
+      measureFail("BAD_RULE", `The rule has the unit ${unitText(side)} without a number before it.`);
   }
   let x: number;
   let y: number;
   if (isUnit(a) && isUnit(b)) {
-    if (!a.equalBase(b)) measureFail("RULE_UNIT_MISMATCH", `The rule compares ${unitText(a)} with ${unitText(b)}, which measure different things.`);
+    if (!a.equalBase(b))
+      measureFail(
+        "RULE_UNIT_MISMATCH",
+        `The rule compares ${unitText(a)} with ${unitText(b)}, which measure different things.`,
+      );
     const target = unitText(b);
     x = a.toNumber(target);
     y = b.toNumber(target);
@@ -94,7 +108,8 @@ function compare(fn: string, a: Value, b: Value): boolean {
     y = b;
   } else {
     const withUnit = (isUnit(a) ? a : b) as Unit;
-    if (withUnit.units.length > 0) measureFail("RULE_UNIT_MISMATCH", `The rule compares a plain number with ${unitText(withUnit)}.`);
+    if (withUnit.units.length > 0)
+      measureFail("RULE_UNIT_MISMATCH", `The rule compares a plain number with ${unitText(withUnit)}.`);
     x = isUnit(a) ? a.toNumber() : a;
     y = isUnit(b) ? b.toNumber() : b;
   }
@@ -102,7 +117,11 @@ function compare(fn: string, a: Value, b: Value): boolean {
 }
 
 function logic(fn: string, args: Value[]): boolean {
-  if (args.some((a) => typeof a !== "boolean")) measureFail("RULE_NOT_A_TEST", `"${fn}" needs comparisons on both sides, such as value >= 1 mm and value <= 2 mm.`);
+  if (args.some((a) => typeof a !== "boolean"))
+    measureFail(
+      "RULE_NOT_A_TEST",
+      `"${fn}" needs comparisons on both sides, such as value >= 1 mm and value <= 2 mm.`,
+    );
   if (fn === "not") return !args[0];
   return fn === "and" ? Boolean(args[0] && args[1]) : Boolean(args[0] || args[1]);
 }
@@ -111,8 +130,12 @@ function arithmetic(fn: string, args: Value[]): Value {
   try {
     return callMath(fn, args) as Value;
   } catch (e) {
-    return measureFail("RULE_UNIT_MISMATCH", `The rule's arithmetic does not work out: ${(e as Error).message}`);
+    return measureFail(
+      "RULE_UNIT_MISMATCH",
+      `The rule's arithmetic does not work out: ${(e as Error).message}`,
+    );
   }
 }
 
-const callMath = (fn: string, args: Value[]): unknown => (math as unknown as Record<string, (...a: Value[]) => unknown>)[fn](...args);
+const callMath = (fn: string, args: Value[]): unknown =>
+  (math as unknown as Record<string, (...a: Value[]) => unknown>)[fn](...args);

@@ -26,7 +26,8 @@ const cache = new Map<string, CompiledRule>();
 export function compileRule(source: string): CompiledRule {
   const hit = cache.get(source);
   if (hit) return hit;
-  if (typeof source !== "string" || source.trim() === "") measureFail("BAD_RULE", "The check has an empty rule.");
+  if (typeof source !== "string" || source.trim() === "")
+    measureFail("BAD_RULE", "The check has an empty rule.");
   let tree: MathNode;
   try {
     tree = math.parse(source);
@@ -34,12 +35,23 @@ export function compileRule(source: string): CompiledRule {
     measureFail("BAD_RULE", `The rule "${source}" does not read as a formula: ${(e as Error).message}`);
   }
   assertWhitelisted(tree);
-  if (!isTest(tree)) measureFail("RULE_NOT_A_TEST", `The rule "${source}" is not a comparison; write it like value <= 0.05 mm.`);
+  if (!isTest(tree))
+    measureFail(
+      "RULE_NOT_A_TEST",
+      `The rule "${source}" is not a comparison; write it like value <= 0.05 mm.`,
+    );
   const bounds = comparedWithValue(tree);
   const first = bounds[0];
   for (const b of bounds.slice(1)) {
-    const same = isUnit(first.value) && isUnit(b.value) ? first.value.equalBase(b.value) : isUnit(first.value) === isUnit(b.value);
-    if (!same) measureFail("RULE_UNIT_MISMATCH", `The rule "${source}" compares value with both ${first.text} and ${b.text}.`);
+    const same =
+      isUnit(first.value) && isUnit(b.value)
+        ? first.value.equalBase(b.value)
+        : isUnit(first.value) === isUnit(b.value);
+    if (!same)
+      measureFail(
+        "RULE_UNIT_MISMATCH",
+        `The rule "${source}" compares value with both ${first.text} and ${b.text}.`,
+      );
   }
   const compiled: CompiledRule = { source, expected: first?.value ?? null, example: first?.text ?? "", tree };
   if (cache.size > 1000) cache.clear(); // a bound, not an LRU: rules are few and re-parsing is cheap
@@ -58,13 +70,19 @@ export function evaluateRule(rule: string | CompiledRule, input: ReadingInput): 
   } catch (e) {
     // With `value` inside arithmetic the kind is only known while evaluating: blame the reading.
     if (e instanceof MeasureError && e.code === "RULE_UNIT_MISMATCH" && compiled.expected === null) {
-      measureFail("UNIT_MISMATCH", `That reading is in ${unitText(reading) || "no unit"}, which the rule ${compiled.source} cannot use.`);
+      measureFail(
+        "UNIT_MISMATCH",
+        `That reading is in ${unitText(reading) || "no unit"}, which the rule ${compiled.source} cannot use.`,
+      );
     }
     throw e;
   }
-  if (typeof out !== "boolean") measureFail("RULE_NOT_A_TEST", `The rule "${compiled.source}" did not come out true or false.`);
+  if (typeof out !== "boolean")
+    measureFail("RULE_NOT_A_TEST", `The rule "${compiled.source}" did not come out true or false.`);
   const target = isUnit(compiled.expected) ? unitText(compiled.expected) : unitText(reading);
-  const shown = target ? `${+reading.toNumber(target).toPrecision(6)} ${target}` : `${+reading.toNumber().toPrecision(6)}`;
+  const shown = target
+    ? `${+reading.toNumber(target).toPrecision(6)} ${target}`
+    : `${+reading.toNumber().toPrecision(6)}`;
   return { pass: out, result: out ? "pass" : "fail", reading: shown };
 }
 
@@ -81,16 +99,30 @@ function checkKind(rule: CompiledRule, reading: Unit, percent: boolean): void {
   const has = reading.units.length > 0;
   if (!isUnit(expected)) {
     // Ratio checks compare percent figures: "65 %" and "65" are the same reading.
-    if (has) measureFail("UNEXPECTED_UNIT", `That reading is in ${unitText(reading)}; this check needs a plain number or a percentage, such as ${example}.`);
+    if (has)
+      measureFail(
+        "UNEXPECTED_UNIT",
+        `That reading is in ${unitText(reading)}; this check needs a plain number or a percentage, such as ${example}.`,
+      );
     return;
   }
   const needs = describeKind(expected, example);
-  if (percent) measureFail("UNIT_MISMATCH", `That reading is a percentage; this check needs ${needs}, such as ${example}.`);
-  if (!has) measureFail("MISSING_UNIT", `That reading has no unit; this check needs ${needs}, such as ${example}.`);
-  if (!reading.equalBase(expected)) measureFail("UNIT_MISMATCH", `That reading is in ${unitText(reading)}; this check needs ${needs}, such as ${example}.`);
+  if (percent)
+    measureFail(
+      "UNIT_MISMATCH",
+      `That reading is a percentage; this check needs ${needs}, such as ${example}.`,
+    );
+  if (!has)
+    measureFail("MISSING_UNIT", `That reading has no unit; this check needs ${needs}, such as ${example}.`);
+  if (!reading.equalBase(expected))
+    measureFail(
+      "UNIT_MISMATCH",
+      `That reading is in ${unitText(reading)}; this check needs ${needs}, such as ${example}.`,
+    );
 }
 
-const strip = (n: MathNode): MathNode => (n.type === "ParenthesisNode" ? strip((n as MathNode & { content: MathNode }).content) : n);
+const strip = (n: MathNode): MathNode =>
+  n.type === "ParenthesisNode" ? strip((n as MathNode & { content: MathNode }).content) : n;
 const COMPARE = new Set(["smaller", "smallerEq", "larger", "largerEq", "equal", "unequal"]);
 
 function isTest(node: MathNode): boolean {
@@ -121,10 +153,12 @@ function comparedWithValue(node: MathNode): { value: number | Unit; text: string
       else return op.args.forEach(visit); // and / or / not
     }
     operands.forEach((o, i) => {
-      const nextToValue = (i > 0 && isValue(operands[i - 1])) || (i + 1 < operands.length && isValue(operands[i + 1]));
+      const nextToValue =
+        (i > 0 && isValue(operands[i - 1])) || (i + 1 < operands.length && isValue(operands[i + 1]));
       if (!nextToValue || mentionsValue(o)) return;
       const v = evaluate(o, 0);
-      if (typeof v === "boolean") measureFail("RULE_NOT_A_TEST", `The rule compares value with a true/false result: ${o.toString()}.`);
+      if (typeof v === "boolean")
+        measureFail("RULE_NOT_A_TEST", `The rule compares value with a true/false result: ${o.toString()}.`);
       found.push({ value: v, text: o.toString() });
     });
   };

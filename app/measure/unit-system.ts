@@ -12,8 +12,22 @@ import { type UnitSystem } from "./mileage";
 export { formatMileage, KM_PER_MILE, mileageUnit, parseDecimal, parseMileage, type Parsed } from "./mileage";
 export type { UnitSystem };
 
-const TARGET: Record<string, string> = { length: "in", pressure: "psi", torque: "lbf ft", volume: "ukpint", mass: "lb", speed: "mi/h" };
-const LABEL: Record<string, string> = { in: "in", psi: "psi", "lbf ft": "lbf·ft", ukpint: "pt", lb: "lb", "mi/h": "mph" };
+const TARGET: Record<string, string> = {
+  length: "in",
+  pressure: "psi",
+  torque: "lbf ft",
+  volume: "ukpint",
+  mass: "lb",
+  speed: "mi/h",
+};
+const LABEL: Record<string, string> = {
+  in: "in",
+  psi: "psi",
+  "lbf ft": "lbf·ft",
+  ukpint: "pt",
+  lb: "lb",
+  "mi/h": "mph",
+};
 
 function round(v: number, digits = 3): string {
   if (v === 0) return "0";
@@ -31,8 +45,18 @@ export function showQuantity(u: Unit, system: UnitSystem): string {
   return `${round(u.toNumber(target))} ${LABEL[target]} (${own})`;
 }
 
-const PHRASE: Record<string, string> = { smallerEq: "at most", largerEq: "at least", smaller: "below", larger: "above" };
-const FLIP: Record<string, string> = { smallerEq: "largerEq", largerEq: "smallerEq", smaller: "larger", larger: "smaller" };
+const PHRASE: Record<string, string> = {
+  smallerEq: "at most",
+  largerEq: "at least",
+  smaller: "below",
+  larger: "above",
+};
+const FLIP: Record<string, string> = {
+  smallerEq: "largerEq",
+  largerEq: "smallerEq",
+  smaller: "larger",
+  larger: "smaller",
+};
 
 /**
  * A measurement rule (true when the reading passes) in words, in the workshop's units:
@@ -48,16 +72,26 @@ export function describeRule(rule: string, system: UnitSystem): string {
 }
 
 function phrase(node: MathNode, system: UnitSystem): string {
-  const n = node as MathNode & { op?: string; fn?: string; args?: MathNode[]; content?: MathNode; conditionals?: string[]; params?: MathNode[] };
+  const n = node as MathNode & {
+    op?: string;
+    fn?: string;
+    args?: MathNode[];
+    content?: MathNode;
+    conditionals?: string[];
+    params?: MathNode[];
+  };
   if (n.type === "ParenthesisNode" && n.content) return phrase(n.content, system);
-  if (n.type === "OperatorNode" && (n.fn === "and" || n.fn === "or") && n.args) return n.args.map((a) => phrase(a, system)).join(` ${n.fn} `);
+  if (n.type === "OperatorNode" && (n.fn === "and" || n.fn === "or") && n.args)
+    return n.args.map((a) => phrase(a, system)).join(` ${n.fn} `);
   let pairs: [string, MathNode, MathNode][] = [];
   if (n.type === "OperatorNode" && n.fn && PHRASE[n.fn] && n.args) pairs = [[n.fn, n.args[0], n.args[1]]];
-  else if (n.type === "RelationalNode" && n.conditionals && n.params) pairs = n.conditionals.map((c, i) => [c, n.params![i], n.params![i + 1]]);
+  else if (n.type === "RelationalNode" && n.conditionals && n.params)
+    pairs = n.conditionals.map((c, i) => [c, n.params![i], n.params![i + 1]]);
   if (!pairs.length) throw new Error("not a comparison");
   return pairs
     .map(([fn, a, b]) => {
-      const isValue = (x: MathNode) => x.type === "SymbolNode" && (x as MathNode & { name: string }).name === "value";
+      const isValue = (x: MathNode) =>
+        x.type === "SymbolNode" && (x as MathNode & { name: string }).name === "value";
       if (!isValue(a) && !isValue(b)) throw new Error("no value");
       const [op, other] = isValue(a) ? [fn, b] : [FLIP[fn], a];
       const limit = other.compile().evaluate({}) as Unit | number;

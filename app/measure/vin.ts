@@ -5,13 +5,41 @@
 // Table and weights as in 49 CFR 565.15 (recalled from memory, not re-read for this code).
 
 export type VinResult =
-  | { valid: true; vin: string; wmi: string; vds: string; vis: string; checkDigit: string; checkDigitMatches: boolean }
+  | {
+      valid: true;
+      vin: string;
+      wmi: string;
+      vds: string;
+      vis: string;
+      checkDigit: string;
+      checkDigitMatches: boolean;
+    }
   | { valid: false; code: "VIN_LENGTH" | "VIN_CHARACTER" | "VIN_CHECK_DIGIT"; message: string };
 
 const LETTER_VALUES: Record<string, number> = {
-  A: 1, B: 2, C: 3, D: 4, E: 5, F: 6, G: 7, H: 8,
-  J: 1, K: 2, L: 3, M: 4, N: 5, P: 7, R: 9,
-  S: 2, T: 3, U: 4, V: 5, W: 6, X: 7, Y: 8, Z: 9,
+  A: 1,
+  B: 2,
+  C: 3,
+  D: 4,
+  E: 5,
+  F: 6,
+  G: 7,
+  H: 8,
+  J: 1,
+  K: 2,
+  L: 3,
+  M: 4,
+  N: 5,
+  P: 7,
+  R: 9,
+  S: 2,
+  T: 3,
+  U: 4,
+  V: 5,
+  W: 6,
+  X: 7,
+  Y: 8,
+  Z: 9,
 };
 const WEIGHTS = [8, 7, 6, 5, 4, 3, 2, 10, 0, 9, 8, 7, 6, 5, 4, 3, 2];
 
@@ -29,18 +57,32 @@ export function vinCheckDigit(vin: string): string {
 }
 
 export function validateVin(input: string, options?: { requireCheckDigit?: boolean }): VinResult {
-  const vin = String(input ?? "").replace(/[\s-]/g, "").toUpperCase(); // spaces and dashes are how people copy it
+  const vin = String(input ?? "")
+    .replace(/[\s-]/g, "")
+    .toUpperCase(); // spaces and dashes are how people copy it
   if (vin.length !== 17) {
-    return { valid: false, code: "VIN_LENGTH", message: `A VIN has 17 characters; this one has ${vin.length}.` };
+    return {
+      valid: false,
+      code: "VIN_LENGTH",
+      message: `A VIN has 17 characters; this one has ${vin.length}.`,
+    };
   }
   for (let i = 0; i < 17; i++) {
     const ch = vin[i];
     if (ch === "I" || ch === "O" || ch === "Q") {
       const like = ch === "I" ? "1" : "0";
-      return { valid: false, code: "VIN_CHARACTER", message: `Character ${i + 1} is ${ch}, which a VIN never uses; it is probably ${like}.` };
+      return {
+        valid: false,
+        code: "VIN_CHARACTER",
+        message: `Character ${i + 1} is ${ch}, which a VIN never uses; it is probably ${like}.`,
+      };
     }
     if (!/[0-9A-Z]/.test(ch)) {
-      return { valid: false, code: "VIN_CHARACTER", message: `Character ${i + 1} ("${ch}") is not a digit or capital letter.` };
+      return {
+        valid: false,
+        code: "VIN_CHARACTER",
+        message: `Character ${i + 1} ("${ch}") is not a digit or capital letter.`,
+      };
     }
   }
   const expected = vinCheckDigit(vin);
@@ -52,5 +94,13 @@ export function validateVin(input: string, options?: { requireCheckDigit?: boole
       message: `The check digit (character 9) is ${vin[8]} but the rest of the VIN gives ${expected}; one character is probably mistyped.`,
     };
   }
-  return { valid: true, vin, wmi: vin.slice(0, 3), vds: vin.slice(3, 9), vis: vin.slice(9), checkDigit: vin[8], checkDigitMatches: matches };
+  return {
+    valid: true,
+    vin,
+    wmi: vin.slice(0, 3),
+    vds: vin.slice(3, 9),
+    vis: vin.slice(9),
+    checkDigit: vin[8],
+    checkDigitMatches: matches,
+  };
 }

@@ -54,13 +54,15 @@ export function compileThesaurus(groups: SynonymGroup[]): Thesaurus {
 export const THESAURUS = compileThesaurus(SYNONYM_GROUPS);
 
 /** The concept of one word, as written or by its stem. */
-export const conceptOf = (w: string, th: Thesaurus = THESAURUS): string | null => th.wordConcept.get(w) ?? th.wordConcept.get(porterStem(w)) ?? null;
+export const conceptOf = (w: string, th: Thesaurus = THESAURUS): string | null =>
+  th.wordConcept.get(w) ?? th.wordConcept.get(porterStem(w)) ?? null;
 
 function matchAt(ws: string[], i: number, th: Thesaurus): Phrase | null {
   for (const p of th.phrasesByFirst.get(porterStem(ws[i])) ?? []) {
     if (i + p.words.length > ws.length) continue;
     let ok = true;
-    for (let k = 1; k < p.words.length && ok; k++) ok = ws[i + k] === p.words[k] || porterStem(ws[i + k]) === p.stems[k];
+    for (let k = 1; k < p.words.length && ok; k++)
+      ok = ws[i + k] === p.words[k] || porterStem(ws[i + k]) === p.stems[k];
     if (ok) return p;
   }
   return null;
@@ -84,7 +86,14 @@ function phraseAt(ws: string[], i: number, th: Thesaurus): Phrase | null {
  */
 const ALL_WELL: ReadonlySet<string> = new Set(["fine", "ok", "okay", "normal", "normally"]);
 /** After a negation these say "it works": fillers ("no problem") are dropped, fault words ("isn't dead") kept for matching. */
-const NO_FAULT_FILLERS: ReadonlySet<string> = new Set(["problem", "problems", "trouble", "issue", "issues", "bother"]);
+const NO_FAULT_FILLERS: ReadonlySet<string> = new Set([
+  "problem",
+  "problems",
+  "trouble",
+  "issue",
+  "issues",
+  "bother",
+]);
 const FAULT_WORDS: ReadonlySet<string> = new Set(["dead", "broken"]);
 
 export type Analysis = { tokens: Token[]; negated: boolean; allWell: boolean };
@@ -94,7 +103,23 @@ export type Analysis = { tokens: Token[]; negated: boolean; allWell: boolean };
  * itself: "keeps losing coolant but there's no leak" and "cuts out when warm and won't restart"
  * are still positive complaints.
  */
-const CLAUSE_BREAKS: ReadonlySet<string> = new Set(["but", "and", "though", "although", "till", "until", "unless", "because", "so", "then", "once", "after", "before", "except", "since"]);
+const CLAUSE_BREAKS: ReadonlySet<string> = new Set([
+  "but",
+  "and",
+  "though",
+  "although",
+  "till",
+  "until",
+  "unless",
+  "because",
+  "so",
+  "then",
+  "once",
+  "after",
+  "before",
+  "except",
+  "since",
+]);
 
 /**
  * Tokens of already-split words; stopwords dropped after phrases had their chance, and so are
@@ -106,10 +131,14 @@ export function analyseWithPolarity(ws: string[], th: Thesaurus = THESAURUS): An
   let negated = false;
   let allWell = false;
   let firstClause = true;
-  for (let i = 0; i < ws.length; ) {
+  for (let i = 0; i < ws.length;) {
     const p = phraseAt(ws, i, th);
     if (p) {
-      const t: Token = { word: null, concept: p.concept, covered: ws.slice(i, i + p.words.length).filter((w) => !STOPWORDS.has(w) && !NEGATIONS.has(w)) };
+      const t: Token = {
+        word: null,
+        concept: p.concept,
+        covered: ws.slice(i, i + p.words.length).filter((w) => !STOPWORDS.has(w) && !NEGATIONS.has(w)),
+      };
       if (!firstClause) t.later = true;
       tokens.push(t);
       i += p.words.length;
@@ -139,7 +168,8 @@ export function analyseWithPolarity(ws: string[], th: Thesaurus = THESAURUS): An
   return { tokens, negated, allWell };
 }
 
-export const analyseWords = (ws: string[], th: Thesaurus = THESAURUS): Token[] => analyseWithPolarity(ws, th).tokens;
+export const analyseWords = (ws: string[], th: Thesaurus = THESAURUS): Token[] =>
+  analyseWithPolarity(ws, th).tokens;
 
 export const analyse = (text: string, th: Thesaurus = THESAURUS) => analyseWords(words(text), th);
 

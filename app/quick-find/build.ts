@@ -45,7 +45,12 @@ export const FUSE_KEYS = [
   { name: "keywords", weight: 2 },
   { name: "subtitle", weight: 1 },
 ];
-const FUSE_BASE: IFuseOptions<FuseDoc> = { keys: FUSE_KEYS, includeScore: true, ignoreLocation: true, threshold: 0.4 };
+const FUSE_BASE: IFuseOptions<FuseDoc> = {
+  keys: FUSE_KEYS,
+  includeScore: true,
+  ignoreLocation: true,
+  threshold: 0.4,
+};
 
 /** Words, plus concepts, as one string for Fuse: "judder braking _vibration _brake". */
 function fuseText(tokens: Token[]): string {
@@ -57,7 +62,15 @@ function fuseText(tokens: Token[]): string {
   return parts.join(" ");
 }
 
-type FieldAnalysis = { words: string[]; concepts: string[]; fragments: string[]; canonical: string; literal: string; fuse: string; polarity: FieldPolarity };
+type FieldAnalysis = {
+  words: string[];
+  concepts: string[];
+  fragments: string[];
+  canonical: string;
+  literal: string;
+  fuse: string;
+  polarity: FieldPolarity;
+};
 /** What one phrase of an entry says, for comparing its polarity (and word order) with a query's. */
 export type FieldPolarity = { keys: ReadonlySet<string>; seq: readonly string[]; negated: boolean };
 
@@ -79,7 +92,15 @@ function analyseField(text: string): FieldAnalysis {
   const { tokens, negated } = analyseWithPolarity(all);
   const seq = tokens.map(tokenKey);
   const polarity = { keys: new Set(seq), seq, negated };
-  const out: FieldAnalysis = { words: [], concepts: [], fragments: [], canonical: canonical(tokens), literal: literal(tokens), fuse: fuseText(tokens), polarity };
+  const out: FieldAnalysis = {
+    words: [],
+    concepts: [],
+    fragments: [],
+    canonical: canonical(tokens),
+    literal: literal(tokens),
+    fuse: fuseText(tokens),
+    polarity,
+  };
   for (const t of tokens) {
     if (t.word) {
       out.words.push(t.word);
@@ -131,11 +152,16 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
       for (const w of a.words) wordP.add(w, i, weight);
       for (const c of a.concepts) conceptP.add(c, i, weight);
       for (const f of a.fragments) codeP.add(f, i, weight);
-      if (phrase && a.canonical) (own.push(a.canonical), ownLiteral.push(a.literal), ownPolarity?.push(a.polarity));
+      if (phrase && a.canonical)
+        (own.push(a.canonical), ownLiteral.push(a.literal), ownPolarity?.push(a.polarity));
       return a.fuse;
     };
     const title = field(e.title, FIELD_WEIGHT.title);
-    titleKeys.push(e.kind === "symptom" || e.kind === "cause" || e.kind === "check" ? analysed.get(e.title)!.polarity.keys : null);
+    titleKeys.push(
+      e.kind === "symptom" || e.kind === "cause" || e.kind === "check"
+        ? analysed.get(e.title)!.polarity.keys
+        : null,
+    );
     const keywords = e.keywords.map((k) => field(k, FIELD_WEIGHT.keyword));
     const subtitle = e.subtitle ? field(e.subtitle, FIELD_WEIGHT.subtitle) : "";
     for (const d of e.details ?? []) field(d, FIELD_WEIGHT.detail, false);
@@ -159,7 +185,11 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
 
   const full = Fuse.createIndex(FUSE_KEYS, fuseDocs);
   const rerankIndex = Fuse.parseIndex<FuseDoc>({ keys: full.keys, records: [] });
-  const rerank = new Fuse(fuseDocs, { ...FUSE_BASE, useExtendedSearch: true, shouldSort: false }, rerankIndex);
+  const rerank = new Fuse(
+    fuseDocs,
+    { ...FUSE_BASE, useExtendedSearch: true, shouldSort: false },
+    rerankIndex,
+  );
 
   return {
     entries,
@@ -181,7 +211,11 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
     fuseRecords: full.records,
     rerank,
     rerankIndex,
-    scratch: { tok: new Float32Array(entries.length), total: new Float32Array(entries.length), cover: new Uint8Array(entries.length) },
+    scratch: {
+      tok: new Float32Array(entries.length),
+      total: new Float32Array(entries.length),
+      cover: new Uint8Array(entries.length),
+    },
     builtMs: performance.now() - started,
   };
 }

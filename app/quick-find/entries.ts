@@ -13,7 +13,8 @@ const idOf = (row: Identified): string => {
 import { SYSTEM_LABEL } from "~/domain/knowledge";
 
 export { SYSTEM_LABEL };
-const systemLabel = (s: string | undefined) => (s ? ((SYSTEM_LABEL as Record<string, string>)[s] ?? s.replace(/_/g, " ")) : undefined);
+const systemLabel = (s: string | undefined) =>
+  s ? ((SYSTEM_LABEL as Record<string, string>)[s] ?? s.replace(/_/g, " ")) : undefined;
 
 export type SymptomInput = Identified & {
   name: string;
@@ -24,9 +25,29 @@ export type SymptomInput = Identified & {
   code?: string | null; // a trouble-code symptom's code
 };
 export type CauseInput = Identified & { name: string; system?: string; level?: string; parentName?: string };
-export type CheckInput = Identified & { name: string; tools?: readonly string[]; minutes?: number; instructions?: readonly string[] };
-export type VehicleInput = { id: string; registration: string; vin?: string | null; make?: string; model?: string; year?: number; ownerName?: string };
-export type CaseInput = { id: string; number: number; registration?: string; vehicle?: string; complaint?: string; ownerName?: string };
+export type CheckInput = Identified & {
+  name: string;
+  tools?: readonly string[];
+  minutes?: number;
+  instructions?: readonly string[];
+};
+export type VehicleInput = {
+  id: string;
+  registration: string;
+  vin?: string | null;
+  make?: string;
+  model?: string;
+  year?: number;
+  ownerName?: string;
+};
+export type CaseInput = {
+  id: string;
+  number: number;
+  registration?: string;
+  vehicle?: string;
+  complaint?: string;
+  ownerName?: string;
+};
 
 export function symptomEntry(s: SymptomInput): Entry {
   const conditions = s.conditions ?? [];
@@ -41,17 +62,36 @@ export function symptomEntry(s: SymptomInput): Entry {
   };
 }
 
-const LEVEL_LABEL: Record<string, string> = { system: "System", component: "Component", failure_mode: "Failure mode" };
+const LEVEL_LABEL: Record<string, string> = {
+  system: "System",
+  component: "Component",
+  failure_mode: "Failure mode",
+};
 
 export function causeEntry(c: CauseInput): Entry {
-  const where = [c.level ? LEVEL_LABEL[c.level] : undefined, c.parentName, systemLabel(c.system)].filter(Boolean);
-  return { kind: "cause", id: idOf(c), title: c.name, subtitle: where.join(" · ") || undefined, keywords: c.parentName ? [c.parentName] : [] };
+  const where = [c.level ? LEVEL_LABEL[c.level] : undefined, c.parentName, systemLabel(c.system)].filter(
+    Boolean,
+  );
+  return {
+    kind: "cause",
+    id: idOf(c),
+    title: c.name,
+    subtitle: where.join(" · ") || undefined,
+    keywords: c.parentName ? [c.parentName] : [],
+  };
 }
 
 export function checkEntry(c: CheckInput): Entry {
   const minutes = c.minutes !== undefined ? `${c.minutes} min` : undefined;
   // The steps find the check by what is done in it ("rock at 12 and 6 o'clock").
-  return { kind: "check", id: idOf(c), title: c.name, subtitle: minutes, keywords: [...(c.tools ?? [])], ...(c.instructions?.length ? { details: [...c.instructions] } : {}) };
+  return {
+    kind: "check",
+    id: idOf(c),
+    title: c.name,
+    subtitle: minutes,
+    keywords: [...(c.tools ?? [])],
+    ...(c.instructions?.length ? { details: [...c.instructions] } : {}),
+  };
 }
 
 export function vehicleEntry(v: VehicleInput): Entry {
@@ -72,7 +112,11 @@ export function caseEntry(c: CaseInput): Entry {
     id: c.id,
     title: head,
     subtitle: c.complaint,
-    keywords: [String(c.number), ...(c.registration ? [c.registration] : []), ...(c.ownerName ? [c.ownerName] : [])],
+    keywords: [
+      String(c.number),
+      ...(c.registration ? [c.registration] : []),
+      ...(c.ownerName ? [c.ownerName] : []),
+    ],
   };
 }
 

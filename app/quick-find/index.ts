@@ -22,4 +22,13 @@ export { DEFAULT_LIMIT, RELATIVE_FLOOR, search, WEAK_QUALITY } from "./search";
 export { presentFor } from "./score";
 export { conditionsOf } from "./conditions";
 export { SYNONYM_GROUPS, type SynonymGroup } from "./synonyms";
-export { ENTRY_KINDS, GROUP_HEADING, type Entry, type EntryKind, type GroupKind, type ResultGroup, type ScoredEntry, type SearchOptions } from "./types";
+export {
+  ENTRY_KINDS,
+  GROUP_HEADING,
+  type Entry,
+  type EntryKind,
+  type GroupKind,
+  type ResultGroup,
+  type ScoredEntry,
+  type SearchOptions,
+} from "./types";

@@ -4,19 +4,105 @@ import { stemmer } from "stemmer";
 
 /** Words that carry no meaning in a complaint ("the wheel shakes when I brake"). */
 export const STOPWORDS: ReadonlySet<string> = new Set([
-  "a", "an", "the", "and", "or", "of", "to", "in", "on", "at", "by", "for", "with", "from", "into",
-  "is", "it", "its", "be", "been", "was", "are", "i", "my", "me", "we", "our", "you", "your",
-  "when", "while", "whenever", "under", "over", "as", "that", "this", "then", "there", "just",
-  "very", "bit", "some", "gets", "get", "car", "vehicle", "s",
+  "a",
+  "an",
+  "the",
+  "and",
+  "or",
+  "of",
+  "to",
+  "in",
+  "on",
+  "at",
+  "by",
+  "for",
+  "with",
+  "from",
+  "into",
+  "is",
+  "it",
+  "its",
+  "be",
+  "been",
+  "was",
+  "are",
+  "i",
+  "my",
+  "me",
+  "we",
+  "our",
+  "you",
+  "your",
+  "when",
+  "while",
+  "whenever",
+  "under",
+  "over",
+  "as",
+  "that",
+  "this",
+  "then",
+  "there",
+  "just",
+  "very",
+  "bit",
+  "some",
+  "gets",
+  "get",
+  "car",
+  "vehicle",
+  "s",
   // Auxiliaries carry no symptom ("does not hold", "will not open"); the negation beside them is
   // kept as the phrase's polarity (NEGATIONS below).
-  "do", "does", "did", "will", "would", "can", "could", "has", "have", "had",
+  "do",
+  "does",
+  "did",
+  "will",
+  "would",
+  "can",
+  "could",
+  "has",
+  "have",
+  "had",
   // Fillers of an owner's sentence: how often and how much, not what.
-  "every", "few", "than", "ever", "really", "quite", "lot", "sometimes", "always", "now", "again", "still",
-  "also", "too", "even", "time", "times",
+  "every",
+  "few",
+  "than",
+  "ever",
+  "really",
+  "quite",
+  "lot",
+  "sometimes",
+  "always",
+  "now",
+  "again",
+  "still",
+  "also",
+  "too",
+  "even",
+  "time",
+  "times",
   // Verbs of motion and feeling that only carry the sentence ("it goes cold", "it feels loose").
-  "go", "goes", "going", "gone", "went", "come", "comes", "came", "coming", "keep", "keeps", "kept", "got",
-  "feel", "feels", "felt", "seem", "seems", "try", "tried",
+  "go",
+  "goes",
+  "going",
+  "gone",
+  "went",
+  "come",
+  "comes",
+  "came",
+  "coming",
+  "keep",
+  "keeps",
+  "kept",
+  "got",
+  "feel",
+  "feels",
+  "felt",
+  "seem",
+  "seems",
+  "try",
+  "tried",
 ]);
 
 /**
@@ -26,8 +112,26 @@ export const STOPWORDS: ReadonlySet<string> = new Set([
  * this, so "don't" arrives as "dont". "nothing" is left out: "click or nothing" is still a symptom.
  */
 export const NEGATIONS: ReadonlySet<string> = new Set([
-  "no", "not", "never", "none", "cannot", "dont", "doesnt", "didnt", "isnt", "arent", "wasnt", "werent",
-  "wont", "cant", "couldnt", "wouldnt", "hasnt", "havent", "hadnt", "aint",
+  "no",
+  "not",
+  "never",
+  "none",
+  "cannot",
+  "dont",
+  "doesnt",
+  "didnt",
+  "isnt",
+  "arent",
+  "wasnt",
+  "werent",
+  "wont",
+  "cant",
+  "couldnt",
+  "wouldnt",
+  "hasnt",
+  "havent",
+  "hadnt",
+  "aint",
 ]);
 
 const APOSTROPHES = /['’‘`]/g;
@@ -40,11 +144,7 @@ const LETTERS_ONLY = /^[a-z]+$/;
 export function normaliseText(text: string): string {
   // Unicode decomposition is the slow step; most text in a workshop is plain ASCII.
   const plain = NON_ASCII.test(text) ? text.normalize("NFKD").replace(COMBINING, "") : text;
-  return plain
-    .toLowerCase()
-    .replace(APOSTROPHES, "")
-    .replace(NON_WORD, " ")
-    .trim();
+  return plain.toLowerCase().replace(APOSTROPHES, "").replace(NON_WORD, " ").trim();
 }
 
 /**
@@ -52,7 +152,8 @@ export function normaliseText(text: string): string {
  * "battery". Codes (VINs, registrations) are never touched: a VIN may well end in S.
  */
 export function stem(word: string): string {
-  if (word.length <= 3 || word.charCodeAt(word.length - 1) !== 115 /* s */ || !LETTERS_ONLY.test(word)) return word;
+  if (word.length <= 3 || word.charCodeAt(word.length - 1) !== 115 /* s */ || !LETTERS_ONLY.test(word))
+    return word;
   if (word.endsWith("ies") && word.length > 4) return `${word.slice(0, -3)}y`;
   if (/(?:sh|ch|x|ss)es$/.test(word)) return word.slice(0, -2);
   if (word.endsWith("s") && !/(?:ss|us|is)$/.test(word)) return word.slice(0, -1);

@@ -59,7 +59,8 @@ export function parseQuery(raw: string): ParsedQuery {
   const raws = normaliseText(raw).split(" ");
   for (let i = 0; i < raws.length; i++) {
     // "P 0420" is the same code typed with a space.
-    const w = /^[pcbu]$/.test(raws[i]) && /^[0-9a-f]{4}$/.test(raws[i + 1] ?? "") ? raws[i] + raws[++i] : raws[i];
+    const w =
+      /^[pcbu]$/.test(raws[i]) && /^[0-9a-f]{4}$/.test(raws[i + 1] ?? "") ? raws[i] + raws[++i] : raws[i];
     if (!CODE_SHAPE.test(w)) continue;
     const dtc = parseDtc(w);
     if (dtc.valid && !codes.includes(dtc.code)) codes.push(dtc.code);

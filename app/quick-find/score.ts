@@ -11,7 +11,16 @@ import { ENTRY_KINDS, type EntryKind, type ScoredEntry } from "./types";
 
 // How much each kind of match is worth, relative to the word itself found in the same field.
 // The stem is nearly the word itself: "jerks" for "jerking".
-export const MATCH = { exact: 1, stem: 0.95, concept: 0.7, prefix: 0.8, prefixConcept: 0.6, code: 0.7, typo: 0.6, typoConcept: 0.5 } as const;
+export const MATCH = {
+  exact: 1,
+  stem: 0.95,
+  concept: 0.7,
+  prefix: 0.8,
+  prefixConcept: 0.6,
+  code: 0.7,
+  typo: 0.6,
+  typoConcept: 0.5,
+} as const;
 // The whole query is one of the entry's phrases: word for word ("pulls left"), through the
 // synonym table ("shudder braking" for "judder when braking"), or the start of one while typing.
 export const PHRASE_BONUS = { literal: 0.25, canonical: 0.15, typing: 0.1 } as const;
@@ -43,9 +52,17 @@ function* withPrefix(list: string[], prefix: string): Generator<string> {
   }
 }
 
-export type ScoreInput = { query: ParsedQuery; kinds: ReadonlySet<EntryKind>; recent: ReadonlySet<string>; limit: number };
+export type ScoreInput = {
+  query: ParsedQuery;
+  kinds: ReadonlySet<EntryKind>;
+  recent: ReadonlySet<string>;
+  limit: number;
+};
 
-export function scoreIndex(index: QuickFindIndex, { query, kinds, recent, limit }: ScoreInput): ScoredEntry[] {
+export function scoreIndex(
+  index: QuickFindIndex,
+  { query, kinds, recent, limit }: ScoreInput,
+): ScoredEntry[] {
   const { tok, total, cover } = index.scratch;
   const all: number[] = [];
   const span = new Int32Array(2);
@@ -117,7 +134,8 @@ export function scoreIndex(index: QuickFindIndex, { query, kinds, recent, limit 
   // Every word should count; with three or more words one may miss (an owner's extra word).
   const n = query.tokens.length;
   let maxCover = 0;
-  for (const d of all) if (kinds.has(ENTRY_KINDS[index.kindOf[d]]) && cover[d] > maxCover) maxCover = cover[d];
+  for (const d of all)
+    if (kinds.has(ENTRY_KINDS[index.kindOf[d]]) && cover[d] > maxCover) maxCover = cover[d];
   const required = Math.max(1, maxCover - (n >= 3 ? 1 : 0));
   const byKind = new Map<number, Picked[]>();
   for (const d of all) {
@@ -135,7 +153,8 @@ export function scoreIndex(index: QuickFindIndex, { query, kinds, recent, limit 
   }
 
   const picked: Picked[] = [];
-  for (const list of byKind.values()) picked.push(...list.sort((a, b) => b.s - a.s).slice(0, limit * RERANK_PER_KIND));
+  for (const list of byKind.values())
+    picked.push(...list.sort((a, b) => b.s - a.s).slice(0, limit * RERANK_PER_KIND));
   return rerank(index, query, picked);
 }
 
@@ -143,7 +162,8 @@ function phraseBonus(index: QuickFindIndex, d: number, q: ParsedQuery): number {
   if (!q.canonical) return 0;
   if (index.literals[d].includes(q.literal)) return PHRASE_BONUS.literal;
   if (index.phrases[d].includes(q.canonical)) return PHRASE_BONUS.canonical;
-  if (q.typing && q.literal.length >= 3 && index.literals[d].some((p) => p.startsWith(q.literal))) return PHRASE_BONUS.typing;
+  if (q.typing && q.literal.length >= 3 && index.literals[d].some((p) => p.startsWith(q.literal)))
+    return PHRASE_BONUS.typing;
   return 0;
 }
 
@@ -167,7 +187,11 @@ function nameBonus(index: QuickFindIndex, d: number, q: ParsedQuery): number {
           if (f.seq[i] !== q.keys[j]) continue;
           const next = q.keys[j + 1];
           const skip = q.keys[j + 2];
-          if (f.seq[i + 1] === next || f.seq[i + 2] === next || (skip !== undefined && f.seq[i + 1] === skip)) {
+          if (
+            f.seq[i + 1] === next ||
+            f.seq[i + 2] === next ||
+            (skip !== undefined && f.seq[i + 1] === skip)
+          ) {
             bonus += ADJACENT_BONUS;
             break outer;
           }
@@ -228,7 +252,9 @@ function splitMatch(index: QuickFindIndex, w: string, prefix: boolean, tok: Floa
     const left = index.words.get(w.slice(0, i));
     if (!left) continue;
     const rightWord = w.slice(i);
-    const right = index.words.get(rightWord) ?? (prefix ? index.words.get(withPrefix(index.wordList, rightWord).next().value ?? "") : undefined);
+    const right =
+      index.words.get(rightWord) ??
+      (prefix ? index.words.get(withPrefix(index.wordList, rightWord).next().value ?? "") : undefined);
     if (!right) continue;
     const fromLeft = new Map<number, number>();
     for (let k = 0; k < left.docs.length; k++) fromLeft.set(left.docs[k], left.weights[k]);

@@ -16,7 +16,11 @@ export const RELATIVE_FLOOR = 0.45;
  */
 export const WEAK_QUALITY = 0.33;
 
-export function search(index: QuickFindIndex | readonly QuickFindIndex[], query: string, opts: SearchOptions = {}): ResultGroup[] {
+export function search(
+  index: QuickFindIndex | readonly QuickFindIndex[],
+  query: string,
+  opts: SearchOptions = {},
+): ResultGroup[] {
   const indexes: readonly QuickFindIndex[] = Array.isArray(index) ? index : [index as QuickFindIndex];
   const limit = Math.max(1, opts.limit ?? DEFAULT_LIMIT);
   const recentIds = opts.recentIds ?? [];
@@ -26,7 +30,9 @@ export function search(index: QuickFindIndex | readonly QuickFindIndex[], query:
   if (parsed.tokens.length === 0) return browse(indexes, kinds, recentIds, limit);
 
   const recent = new Set(recentIds);
-  let scored: ScoredEntry[] = indexes.flatMap((ix) => scoreIndex(ix, { query: parsed, kinds, recent, limit }));
+  let scored: ScoredEntry[] = indexes.flatMap((ix) =>
+    scoreIndex(ix, { query: parsed, kinds, recent, limit }),
+  );
   for (const s of scored) s.weak = (s.quality ?? 1) <= WEAK_QUALITY;
   const best = scored.reduce((m, s) => Math.max(m, s.score), 0);
   scored = scored.filter((s) => s.score >= best * RELATIVE_FLOOR);
@@ -38,7 +44,12 @@ export function search(index: QuickFindIndex | readonly QuickFindIndex[], query:
  * A trouble code typed as a code lands on its own symptom, or else on the generic "trouble code
  * stored" symptom with the code kept, ahead of anything the words matched.
  */
-function withCode(indexes: readonly QuickFindIndex[], scored: ScoredEntry[], code: string, best: number): ScoredEntry[] {
+function withCode(
+  indexes: readonly QuickFindIndex[],
+  scored: ScoredEntry[],
+  code: string,
+  best: number,
+): ScoredEntry[] {
   let hit: { ix: QuickFindIndex; d: number } | null = null;
   for (const ix of indexes) {
     const d = ix.dtcEntry.get(code);
@@ -60,7 +71,12 @@ function group(scored: ScoredEntry[], limit: number): ResultGroup[] {
     // Real matches first; weak ones after them, flagged, so a weak hit is never the default pick.
     const items = scored
       .filter((s) => s.entry.kind === kind)
-      .sort((a, b) => Number(a.weak === true) - Number(b.weak === true) || b.score - a.score || a.entry.title.localeCompare(b.entry.title))
+      .sort(
+        (a, b) =>
+          Number(a.weak === true) - Number(b.weak === true) ||
+          b.score - a.score ||
+          a.entry.title.localeCompare(b.entry.title),
+      )
       .slice(0, limit);
     if (items.length) groups.push({ kind, items });
   }
@@ -68,7 +84,12 @@ function group(scored: ScoredEntry[], limit: number): ResultGroup[] {
 }
 
 /** Empty box: the user's recent items first, then the first few of each kind in the order given. */
-function browse(indexes: readonly QuickFindIndex[], kinds: ReadonlySet<EntryKind>, recentIds: readonly string[], limit: number): ResultGroup[] {
+function browse(
+  indexes: readonly QuickFindIndex[],
+  kinds: ReadonlySet<EntryKind>,
+  recentIds: readonly string[],
+  limit: number,
+): ResultGroup[] {
   const recent: ScoredEntry[] = [];
   const shown = new Set<string>();
   for (const id of recentIds) {

@@ -42,7 +42,11 @@ export class CompiledModel {
     if (!this.#costOrder) {
       const { cost, checkIds } = this.#base;
       const inverse = cost.map((c) => 1 / c); // cheapest = largest 1/cost (costs are > 0)
-      this.#costOrder = orderByKeyDesc(inverse, cost.length, (a, b) => cost[a] - cost[b] || compareIds(checkIds[a], checkIds[b]));
+      this.#costOrder = orderByKeyDesc(
+        inverse,
+        cost.length,
+        (a, b) => cost[a] - cost[b] || compareIds(checkIds[a], checkIds[b]),
+      );
     }
     return this.#costOrder;
   }
@@ -52,7 +56,11 @@ export class CompiledModel {
     if (!this.#priorOrder) {
       const { leafWeight, tree } = this.#base;
       const id = (leaf: number) => tree.ids[tree.leafCause[leaf]];
-      this.#priorOrder = orderByKeyDesc(leafWeight, leafWeight.length, (a, b) => leafWeight[b] - leafWeight[a] || compareIds(id(a), id(b)));
+      this.#priorOrder = orderByKeyDesc(
+        leafWeight,
+        leafWeight.length,
+        (a, b) => leafWeight[b] - leafWeight[a] || compareIds(id(a), id(b)),
+      );
     }
     return this.#priorOrder;
   }

@@ -18,7 +18,8 @@ export function conditionMask(list: readonly string[] | undefined, what: () => s
   let mask = 0;
   for (const c of list ?? []) {
     const i = (CONDITIONS as readonly string[]).indexOf(c);
-    if (i < 0) throw new RangeError(`${what()} names the condition "${c}"; use one of ${CONDITIONS.join(", ")}.`);
+    if (i < 0)
+      throw new RangeError(`${what()} names the condition "${c}"; use one of ${CONDITIONS.join(", ")}.`);
     mask |= 1 << i;
   }
   return mask;

@@ -15,11 +15,13 @@ export type CheckCostInput = {
  */
 export function checkCost(input: CheckCostInput): number {
   const nonNegative = (v: unknown, what: string): number => {
-    if (typeof v !== "number" || !Number.isFinite(v) || v < 0) fail("INVALID_COST", `${what} is ${String(v)}; it must be 0 or more.`);
+    if (typeof v !== "number" || !Number.isFinite(v) || v < 0)
+      fail("INVALID_COST", `${what} is ${String(v)}; it must be 0 or more.`);
     return v;
   };
   let minutes = nonNegative(input.minutes, "Check minutes");
-  for (const [kind, m] of Object.entries(input.access ?? {})) minutes += nonNegative(m, `Access minutes for ${kind}`);
+  for (const [kind, m] of Object.entries(input.access ?? {}))
+    minutes += nonNegative(m, `Access minutes for ${kind}`);
   const rate = nonNegative(input.labourRatePerHour, "The labour rate");
   return (minutes * rate) / 60 + nonNegative(input.consumables ?? 0, "Consumables");
 }

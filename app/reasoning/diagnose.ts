@@ -8,11 +8,18 @@ import { computePosterior } from "./posterior";
 import { rankFrom, type Ranking } from "./rank";
 import type { Evidence, Model } from "./schema";
 
-export function diagnose(model: Model | CompiledModel, evidence: Evidence, options?: PlanOptions): { ranking: Ranking; plan: Plan } {
+export function diagnose(
+  model: Model | CompiledModel,
+  evidence: Evidence,
+  options?: PlanOptions,
+): { ranking: Ranking; plan: Plan } {
   const opts = resolveOptions(options);
   const compiled = toCompiled(model);
   const index = compiled.scoped(opts.unlistedPrior);
   const items = resolveEvidence(index, evidence, opts.ownerReliability, opts.unlistedSymptomRate);
   const post = computePosterior(index, items);
-  return { ranking: rankFrom(compiled, index, items, post), plan: planFrom(compiled, index, evidence, post, opts.maxSkill) };
+  return {
+    ranking: rankFrom(compiled, index, items, post),
+    plan: planFrom(compiled, index, evidence, post, opts.maxSkill),
+  };
 }

@@ -2,7 +2,14 @@
 // base"). Each item is sparse: one default likelihood for every hypothesis the item says nothing
 // specific about (the symptom's leak, the check's false-alarm rate) and explicit values for the
 // leaves its links reach.
-import { bandLikelihood, FAULT_BAND_SHARE, PASSING_BANDS, READING_BANDS, SOUND_BAND_SHARE, type ReadingBand } from "./bands";
+import {
+  bandLikelihood,
+  FAULT_BAND_SHARE,
+  PASSING_BANDS,
+  READING_BANDS,
+  SOUND_BAND_SHARE,
+  type ReadingBand,
+} from "./bands";
 import { conditionFactor, conditionMask } from "./conditions";
 import { fail } from "./errors";
 import type { ModelIndex } from "./model-index";
@@ -28,18 +35,33 @@ export function unlistedSymptomLik(leak: number, rate: number, present: boolean,
   return present ? p : 1 - p;
 }
 
-export function resolveEvidence(index: ModelIndex, evidence: Evidence, ownerReliability: number, unlistedRate = 0): EvidenceItem[] {
+export function resolveEvidence(
+  index: ModelIndex,
+  evidence: Evidence,
+  ownerReliability: number,
+  unlistedRate = 0,
+): EvidenceItem[] {
   if (!evidence || !Array.isArray(evidence.observations) || !Array.isArray(evidence.findings)) {
     fail("INVALID_INPUT", "Evidence needs a list of observations and a list of findings.");
   }
   const items: EvidenceItem[] = [];
   for (const o of chooseObservations(evidence.observations)) {
     const s = index.symptomIndex.get(o.symptomId);
-    if (s === undefined) fail("UNKNOWN_ID", `An observation names symptom "${o.symptomId}", which is not in the model.`);
+    if (s === undefined)
+      fail("UNKNOWN_ID", `An observation names symptom "${o.symptomId}", which is not in the model.`);
     const observed = o.conditions?.length ? observedMask(o) : 0;
     const item =
       observed === 0
-        ? expandItem(index, `symptom:${o.symptomId}`, index.leak[s], index.linkStart, index.linkNode, index.linkP, s, o.present)
+        ? expandItem(
+            index,
+            `symptom:${o.symptomId}`,
+            index.leak[s],
+            index.linkStart,
+            index.linkNode,
+            index.linkP,
+            s,
+            o.present,
+          )
         : conditionedItem(index, `symptom:${o.symptomId}`, s, observed, o.present);
     const anyFactor = observed === 0 ? 1 : conditionFactor(observed, 0);
     const pUnlisted = unlistedSymptomLik(index.leak[s], unlistedRate, true, index.unlistedP[s]) * anyFactor;
@@ -49,20 +71,40 @@ export function resolveEvidence(index: ModelIndex, evidence: Evidence, ownerReli
   }
   for (const f of chooseFindings(evidence.findings)) {
     const k = index.checkIndex.get(f.checkId);
-    if (k === undefined) fail("UNKNOWN_ID", `A finding names check "${f.checkId}", which is not in the model.`);
+    if (k === undefined)
+      fail("UNKNOWN_ID", `A finding names check "${f.checkId}", which is not in the model.`);
     if (f.result !== "pass" && f.result !== "fail") {
-      fail("INVALID_INPUT", `The finding for check "${f.checkId}" is "${String(f.result)}"; use pass or fail.`);
+      fail(
+        "INVALID_INPUT",
+        `The finding for check "${f.checkId}" is "${String(f.result)}"; use pass or fail.`,
+      );
     }
     if (f.band !== undefined) {
-      if (!READING_BANDS.includes(f.band)) fail("INVALID_INPUT", `The reading band of check "${f.checkId}" is "${String(f.band)}"; use ${READING_BANDS.join(", ")}.`);
+      if (!READING_BANDS.includes(f.band))
+        fail(
+          "INVALID_INPUT",
+          `The reading band of check "${f.checkId}" is "${String(f.band)}"; use ${READING_BANDS.join(", ")}.`,
+        );
       if (PASSING_BANDS.has(f.band) !== (f.result === "pass")) {
-        fail("INVALID_INPUT", `Check "${f.checkId}" is recorded as ${f.result} with a reading ${f.band.replace("_", " ")} the limit; the two must agree.`);
+        fail(
+          "INVALID_INPUT",
+          `Check "${f.checkId}" is recorded as ${f.result} with a reading ${f.band.replace("_", " ")} the limit; the two must agree.`,
+        );
       }
       items.push(bandItem(index, k, f.band));
       continue;
     }
     items.push(
-      expandItem(index, `check:${f.checkId}`, index.falseAlarm[k], index.bearStart, index.bearNode, index.bearP, k, f.result === "fail"),
+      expandItem(
+        index,
+        `check:${f.checkId}`,
+        index.falseAlarm[k],
+        index.bearStart,
+        index.bearNode,
+        index.bearP,
+        k,
+        f.result === "fail",
+      ),
     );
   }
   return items;
@@ -70,7 +112,16 @@ export function resolveEvidence(index: ModelIndex, evidence: Evidence, ownerReli
 
 /** The likelihood vector of "check k gave this result", for what-if and planning. */
 export function checkItem(index: ModelIndex, k: number, failed: boolean): EvidenceItem {
-  return expandItem(index, `check:${index.checkIds[k]}`, index.falseAlarm[k], index.bearStart, index.bearNode, index.bearP, k, failed);
+  return expandItem(
+    index,
+    `check:${index.checkIds[k]}`,
+    index.falseAlarm[k],
+    index.bearStart,
+    index.bearNode,
+    index.bearP,
+    k,
+    failed,
+  );
 }
 
 function observedMask(o: Observation): number {
@@ -86,12 +137,19 @@ function observedMask(o: Observation): number {
  * conditions (CONDITION_MATCH where its link lists the condition, CONDITION_MISS where the link
  * lists others only, CONDITION_ANY where it lists none, and for the leak); 1 − that if absent.
  */
-function conditionedItem(index: ModelIndex, key: string, s: number, observed: number, present: boolean): EvidenceItem {
+function conditionedItem(
+  index: ModelIndex,
+  key: string,
+  s: number,
+  observed: number,
+  present: boolean,
+): EvidenceItem {
   const from = index.linkStart[s];
   const m = index.linkStart[s + 1] - from;
   const values = new Float64Array(m);
   for (let j = 0; j < m; j++) {
-    const p = index.linkP[from + j] * conditionFactor(observed, index.linkWhen ? index.linkWhen[from + j] : 0);
+    const p =
+      index.linkP[from + j] * conditionFactor(observed, index.linkWhen ? index.linkWhen[from + j] : 0);
     values[j] = present ? p : 1 - p;
   }
   const ex = index.expander;
@@ -170,7 +228,10 @@ function temperOwnerReport(index: ModelIndex, item: EvidenceItem, r: number): vo
     linkedMass += w;
     linkedLik += w * item.liks[j];
   }
-  const marginal = Math.min(1, Math.max(0, item.defaultLik * Math.max(0, 1 - linkedMass - pU) + linkedLik + pU * item.unlistedLik));
+  const marginal = Math.min(
+    1,
+    Math.max(0, item.defaultLik * Math.max(0, 1 - linkedMass - pU) + linkedLik + pU * item.unlistedLik),
+  );
   item.defaultLik = r * item.defaultLik + (1 - r) * marginal;
   item.unlistedLik = r * item.unlistedLik + (1 - r) * marginal;
   for (let j = 0; j < item.liks.length; j++) item.liks[j] = r * item.liks[j] + (1 - r) * marginal;
@@ -181,9 +242,11 @@ function temperOwnerReport(index: ModelIndex, item: EvidenceItem, r: number): vo
 function chooseObservations(observations: readonly Observation[]): Observation[] {
   const chosen = new Map<string, Observation>();
   for (const o of observations) {
-    if (typeof o?.present !== "boolean") fail("INVALID_INPUT", `The observation of "${o?.symptomId}" needs present: true or false.`);
+    if (typeof o?.present !== "boolean")
+      fail("INVALID_INPUT", `The observation of "${o?.symptomId}" needs present: true or false.`);
     const source = o.source ?? "technician";
-    if (source !== "owner" && source !== "technician") fail("INVALID_INPUT", `Observation source "${String(source)}" is not owner or technician.`);
+    if (source !== "owner" && source !== "technician")
+      fail("INVALID_INPUT", `Observation source "${String(source)}" is not owner or technician.`);
     const before = chosen.get(o.symptomId);
     if (!before) {
       chosen.set(o.symptomId, o);
@@ -192,7 +255,10 @@ function chooseObservations(observations: readonly Observation[]): Observation[]
     const beforeSource = before.source ?? "technician";
     if (beforeSource === source) {
       if (before.present !== o.present) {
-        fail("CONFLICTING_EVIDENCE", `Symptom "${o.symptomId}" is recorded both present and absent by the ${source}.`);
+        fail(
+          "CONFLICTING_EVIDENCE",
+          `Symptom "${o.symptomId}" is recorded both present and absent by the ${source}.`,
+        );
       }
     } else if (source === "technician") {
       chosen.set(o.symptomId, o);
@@ -206,7 +272,10 @@ function chooseFindings(findings: Evidence["findings"]): Evidence["findings"] {
   for (const f of findings) {
     const before = chosen.get(f.checkId);
     if (before && before.result !== f.result) {
-      fail("CONFLICTING_EVIDENCE", `Check "${f.checkId}" is recorded as both passed and failed; keep the latest result only.`);
+      fail(
+        "CONFLICTING_EVIDENCE",
+        `Check "${f.checkId}" is recorded as both passed and failed; keep the latest result only.`,
+      );
     }
     chosen.set(f.checkId, f);
   }

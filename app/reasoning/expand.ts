@@ -25,7 +25,9 @@ export class LeafExpander {
     for (let j = from; j < from + m; j++) {
       if (tree.leafOf[nodes[j]] < 0 && m > 1) {
         // Inner nodes present: apply shallow pairs first so deeper (nearer) ones overwrite them.
-        order = Array.from({ length: m }, (_, k) => from + k).sort((a, b) => tree.depth[nodes[a]] - tree.depth[nodes[b]]);
+        order = Array.from({ length: m }, (_, k) => from + k).sort(
+          (a, b) => tree.depth[nodes[a]] - tree.depth[nodes[b]],
+        );
         break;
       }
     }

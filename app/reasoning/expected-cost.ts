@@ -67,7 +67,12 @@ export class Survival {
 
 export type OrderCost = { total: number; reached: Float64Array }; // reached[i] = P(step i is run)
 
-export function expectedCost(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, order: ArrayLike<number>): OrderCost {
+export function expectedCost(
+  index: ModelIndex,
+  cl: CheckLeaves,
+  prob: Float64Array,
+  order: ArrayLike<number>,
+): OrderCost {
   const s = new Survival(prob);
   let total = 0;
   const reached = new Float64Array(order.length);

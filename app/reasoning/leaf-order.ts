@@ -7,11 +7,17 @@ import { compareIds } from "./ids";
 import type { ModelIndex } from "./model-index";
 import { orderByKeyDesc } from "./sort-keys";
 
-export function rankingOrder(index: ModelIndex, items: readonly EvidenceItem[], prob: Float64Array, priorOrder: Int32Array): Int32Array {
+export function rankingOrder(
+  index: ModelIndex,
+  items: readonly EvidenceItem[],
+  prob: Float64Array,
+  priorOrder: Int32Array,
+): Int32Array {
   const L = index.leafCount;
   const { tree } = index;
   const idOf = (leaf: number) => tree.ids[tree.leafCause[leaf]];
-  const before = (a: number, b: number) => prob[a] > prob[b] || (prob[a] === prob[b] && compareIds(idOf(a), idOf(b)) < 0);
+  const before = (a: number, b: number) =>
+    prob[a] > prob[b] || (prob[a] === prob[b] && compareIds(idOf(a), idOf(b)) < 0);
 
   const isTouched = new Uint8Array(L);
   const touched: number[] = [];
@@ -25,7 +31,11 @@ export function rankingOrder(index: ModelIndex, items: readonly EvidenceItem[], 
   }
   const keys = new Float64Array(touched.length);
   for (let j = 0; j < touched.length; j++) keys[j] = prob[touched[j]];
-  const sortedTouched = orderByKeyDesc(keys, touched.length, (a, b) => keys[b] - keys[a] || compareIds(idOf(touched[a]), idOf(touched[b])));
+  const sortedTouched = orderByKeyDesc(
+    keys,
+    touched.length,
+    (a, b) => keys[b] - keys[a] || compareIds(idOf(touched[a]), idOf(touched[b])),
+  );
 
   const out = new Int32Array(L);
   let t = 0;

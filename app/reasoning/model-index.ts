@@ -59,7 +59,8 @@ export function buildIndex(model: Model): BaseIndex {
     if (symptomIndex.has(s.id)) fail("DUPLICATE_ID", `Two symptoms have the id "${s.id}".`);
     symptomIndex.set(s.id, i);
     leak[i] = checkProbability(s.leak, () => `The leak of symptom "${s.id}"`);
-    if (s.unlisted !== undefined) unlistedP[i] = checkProbability(s.unlisted, () => `P(${s.id} | not in the knowledge base)`);
+    if (s.unlisted !== undefined)
+      unlistedP[i] = checkProbability(s.unlisted, () => `P(${s.id} | not in the knowledge base)`);
   }
 
   const links = model.links ?? [];
@@ -68,17 +69,24 @@ export function buildIndex(model: Model): BaseIndex {
   for (let i = 0; i < links.length; i++) {
     const l = links[i];
     const s = symptomIndex.get(l.symptomId);
-    if (s === undefined) fail("UNKNOWN_ID", `A link names symptom "${l.symptomId}", which is not in the model.`);
+    if (s === undefined)
+      fail("UNKNOWN_ID", `A link names symptom "${l.symptomId}", which is not in the model.`);
     const c = tree.causeIndex.get(l.causeId);
     if (c === undefined) fail("UNKNOWN_ID", `A link names cause "${l.causeId}", which is not in the model.`);
     // Tested inline so the per-link cost is one comparison; checkProbability only builds the error.
-    if (typeof l.p !== "number" || !(l.p >= 0 && l.p <= 1)) checkProbability(l.p, () => `P(${l.symptomId} | ${l.causeId})`);
+    if (typeof l.p !== "number" || !(l.p >= 0 && l.p <= 1))
+      checkProbability(l.p, () => `P(${l.symptomId} | ${l.causeId})`);
     linkSym[i] = s;
     linkCause[i] = c;
   }
   const link = groupBy(linkSym, linkCause, model.symptoms.length, links);
   const linkWhen = link.when.some((w) => w !== 0) ? link.when : null;
-  rejectDuplicates(link.start, link.node, tree, (s, c) => `symptom "${model.symptoms[s].id}" and cause "${c}"`);
+  rejectDuplicates(
+    link.start,
+    link.node,
+    tree,
+    (s, c) => `symptom "${model.symptoms[s].id}" and cause "${c}"`,
+  );
 
   const checks = model.checks ?? [];
   const checkIndex = new Map<string, number>();
@@ -89,7 +97,8 @@ export function buildIndex(model: Model): BaseIndex {
   const bearStart = new Int32Array(checks.length + 1);
   for (let i = 0; i < checks.length; i++) {
     const bears = checks[i].bears;
-    if (!Array.isArray(bears)) fail("INVALID_INPUT", `Check "${checks[i].id}" has no list of causes it bears on.`);
+    if (!Array.isArray(bears))
+      fail("INVALID_INPUT", `Check "${checks[i].id}" has no list of causes it bears on.`);
     bearStart[i + 1] = bearStart[i] + bears.length;
   }
   const bearNode = new Int32Array(bearStart[checks.length]);
@@ -101,13 +110,16 @@ export function buildIndex(model: Model): BaseIndex {
     checkIndex.set(k.id, i);
     cost[i] = checkCostValue(k.cost, () => `The cost of check "${k.id}"`);
     falseAlarm[i] = checkProbability(k.falseAlarm, () => `The false-alarm rate of check "${k.id}"`);
-    skill[i] = k.skill === undefined ? DEFAULT_SKILL_RANK : skillRank(k.skill, `The skill of check "${k.id}"`);
+    skill[i] =
+      k.skill === undefined ? DEFAULT_SKILL_RANK : skillRank(k.skill, `The skill of check "${k.id}"`);
     for (let j = 0, at = bearStart[i]; j < k.bears.length; j++, at++) {
       const b = k.bears[j];
       const c = tree.causeIndex.get(b.causeId);
-      if (c === undefined) fail("UNKNOWN_ID", `Check "${k.id}" bears on cause "${b.causeId}", which is not in the model.`);
+      if (c === undefined)
+        fail("UNKNOWN_ID", `Check "${k.id}" bears on cause "${b.causeId}", which is not in the model.`);
       bearNode[at] = c;
-      if (typeof b.pFail !== "number" || !(b.pFail >= 0 && b.pFail <= 1)) checkProbability(b.pFail, () => `P(${k.id} fails | ${b.causeId})`);
+      if (typeof b.pFail !== "number" || !(b.pFail >= 0 && b.pFail <= 1))
+        checkProbability(b.pFail, () => `P(${k.id} fails | ${b.causeId})`);
       bearP[at] = b.pFail;
       if (b.graded !== undefined) {
         bearGraded ??= new Float64Array(4 * bearP.length).fill(Number.NaN);
@@ -152,7 +164,11 @@ function gradedInto(out: Float64Array, at: number, graded: Record<ReadingBand, n
     out[4 * at + i] = p;
     sum += p;
   });
-  if (Math.abs(sum - 1) > 1e-6) fail("INVALID_PROBABILITY", `The graded figures of ${what()} add up to ${sum}; the four bands must add up to 1.`);
+  if (Math.abs(sum - 1) > 1e-6)
+    fail(
+      "INVALID_PROBABILITY",
+      `The graded figures of ${what()} add up to ${sum}; the four bands must add up to 1.`,
+    );
 }
 
 // Inner nodes' priors are validated but ignored: a node's share is always the sum of its leaves.
@@ -165,8 +181,10 @@ function leafWeights(model: Model, tree: Tree) {
   }
   const leafWeight = new Float64Array(tree.leafCount);
   let leafWeightSum = 0;
-  for (let leaf = 0; leaf < tree.leafCount; leaf++) leafWeightSum += leafWeight[leaf] = model.causes[tree.leafCause[leaf]].prior;
-  if (!(leafWeightSum > 0)) fail("ZERO_PRIOR", "Every candidate cause has prior 0; at least one needs a positive base rate.");
+  for (let leaf = 0; leaf < tree.leafCount; leaf++)
+    leafWeightSum += leafWeight[leaf] = model.causes[tree.leafCause[leaf]].prior;
+  if (!(leafWeightSum > 0))
+    fail("ZERO_PRIOR", "Every candidate cause has prior 0; at least one needs a positive base rate.");
   return { leafWeight, leafWeightSum };
 }
 
@@ -205,7 +223,12 @@ function whenMask(l: Model["links"][number]): number {
   }
 }
 
-function rejectDuplicates(start: Int32Array, node: Int32Array, tree: Tree, what: (g: number, cause: string) => string) {
+function rejectDuplicates(
+  start: Int32Array,
+  node: Int32Array,
+  tree: Tree,
+  what: (g: number, cause: string) => string,
+) {
   const seen = new Int32Array(tree.ids.length).fill(-1);
   for (let g = 0; g + 1 < start.length; g++) {
     for (let j = start[g]; j < start[g + 1]; j++) {

@@ -39,11 +39,17 @@ export type RankOptions = {
 
 export type PlanOptions = RankOptions & { maxSkill?: Skill }; // absent: "senior" (no gating)
 
-export type ResolvedOptions = { unlistedPrior: number; ownerReliability: number; unlistedSymptomRate: number; maxSkill: number };
+export type ResolvedOptions = {
+  unlistedPrior: number;
+  ownerReliability: number;
+  unlistedSymptomRate: number;
+  maxSkill: number;
+};
 
 export function skillRank(skill: Skill | undefined, what: string): number {
   const rank = SKILL_LEVELS.indexOf(skill ?? DEFAULT_CHECK_SKILL);
-  if (rank < 0) fail("INVALID_OPTION", `${what} is "${String(skill)}"; use apprentice, technician or senior.`);
+  if (rank < 0)
+    fail("INVALID_OPTION", `${what} is "${String(skill)}"; use apprentice, technician or senior.`);
   return rank;
 }
 
@@ -58,7 +64,10 @@ export function resolveOptions(options: PlanOptions | undefined): ResolvedOption
   }
   const unlistedSymptomRate = options?.unlistedSymptomRate ?? DEFAULT_UNLISTED_SYMPTOM_RATE;
   if (typeof unlistedSymptomRate !== "number" || !(unlistedSymptomRate >= 0 && unlistedSymptomRate <= 1)) {
-    fail("INVALID_OPTION", `unlistedSymptomRate is ${String(unlistedSymptomRate)}; it must be between 0 and 1.`);
+    fail(
+      "INVALID_OPTION",
+      `unlistedSymptomRate is ${String(unlistedSymptomRate)}; it must be between 0 and 1.`,
+    );
   }
   const maxSkill = skillRank(options?.maxSkill ?? "senior", "maxSkill");
   return { unlistedPrior, ownerReliability, unlistedSymptomRate, maxSkill };

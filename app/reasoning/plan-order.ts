@@ -19,7 +19,14 @@ const MIN_GAIN = 1e-12;
  * which no check finds, pays for every step in any order). Every swap lowers the expected cost, so
  * the result is never worse than the start. Returns the number of swaps made.
  */
-export function improveBySwaps(index: ModelIndex, cl: CheckLeaves, prob: Float64Array, order: Int32Array, maxPasses: number, window = order.length): number {
+export function improveBySwaps(
+  index: ModelIndex,
+  cl: CheckLeaves,
+  prob: Float64Array,
+  order: Int32Array,
+  maxPasses: number,
+  window = order.length,
+): number {
   let swaps = 0;
   const end = Math.min(order.length, window);
   for (let pass = 0; pass < maxPasses; pass++) {

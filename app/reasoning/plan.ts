@@ -54,11 +54,19 @@ export function planChecks(model: Model | CompiledModel, evidence: Evidence, opt
 }
 
 /** Expected cost of running the given checks in exactly this order (e.g. a technician's own order). */
-export function orderCost(model: Model | CompiledModel, evidence: Evidence, checkIds: readonly string[], options?: PlanOptions): number {
+export function orderCost(
+  model: Model | CompiledModel,
+  evidence: Evidence,
+  checkIds: readonly string[],
+  options?: PlanOptions,
+): number {
   const opts = resolveOptions(options);
   const compiled = toCompiled(model);
   const index = compiled.scoped(opts.unlistedPrior);
-  const post = computePosterior(index, resolveEvidence(index, evidence, opts.ownerReliability, opts.unlistedSymptomRate));
+  const post = computePosterior(
+    index,
+    resolveEvidence(index, evidence, opts.ownerReliability, opts.unlistedSymptomRate),
+  );
   const order = checkIds.map((id) => {
     const k = index.checkIndex.get(id);
     if (k === undefined) fail("UNKNOWN_ID", `The order names check "${id}", which is not in the model.`);
@@ -68,7 +76,13 @@ export function orderCost(model: Model | CompiledModel, evidence: Evidence, chec
   return expectedCost(index, compiled.checkLeaves(), post.prob, order).total;
 }
 
-export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: Evidence, post: Posterior, maxSkill: number): Plan {
+export function planFrom(
+  compiled: CompiledModel,
+  index: ModelIndex,
+  evidence: Evidence,
+  post: Posterior,
+  maxSkill: number,
+): Plan {
   const cl = compiled.checkLeaves();
   const K = index.checkIds.length;
   const done = new Uint8Array(K);
@@ -86,7 +100,12 @@ export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: E
   // Best ratio first. Ratios that agree to 2^−32 (about 10 significant digits) tie, so that pairs
   // equal on paper, such as 0.3/10 and 0.6/20, tie in floating point too: cheaper first, then id.
   const { cost, checkIds: ids } = index;
-  const order = orderByKeyDesc(ratio, K, (a, b) => cost[a] - cost[b] || compareIds(ids[a], ids[b]), RATIO_TIE_BITS);
+  const order = orderByKeyDesc(
+    ratio,
+    K,
+    (a, b) => cost[a] - cost[b] || compareIds(ids[a], ids[b]),
+    RATIO_TIE_BITS,
+  );
 
   const withinAll = new Int32Array(K);
   let n = 0;
@@ -96,7 +115,14 @@ export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: E
     if (done[k]) continue;
     if (index.skill[k] <= maxSkill) withinAll[n++] = k;
     else {
-      const step: AboveSkillStep = { checkId: ids[k], pFind: pFind[k], cost: cost[k], ratio: ratio[k], skill: SKILL_LEVELS[index.skill[k]], before: n };
+      const step: AboveSkillStep = {
+        checkId: ids[k],
+        pFind: pFind[k],
+        cost: cost[k],
+        ratio: ratio[k],
+        skill: SKILL_LEVELS[index.skill[k]],
+        before: n,
+      };
       if (index.checkNames[k] !== undefined) step.name = index.checkNames[k];
       aboveSkill.push(step);
     }
@@ -122,7 +148,14 @@ export function planFrom(compiled: CompiledModel, index: ModelIndex, evidence: E
   for (let s = 0; s < within.length; s++) {
     const k = within[s];
     // A literal rather than a spread: building 3,000 steps by spreading costs more than the plan itself.
-    const step: PlanStep = { checkId: ids[k], pFind: pFind[k], cost: cost[k], ratio: ratio[k], skill: SKILL_LEVELS[index.skill[k]], pReached: ecr.reached[s] };
+    const step: PlanStep = {
+      checkId: ids[k],
+      pFind: pFind[k],
+      cost: cost[k],
+      ratio: ratio[k],
+      skill: SKILL_LEVELS[index.skill[k]],
+      pReached: ecr.reached[s],
+    };
     if (index.checkNames[k] !== undefined) step.name = index.checkNames[k];
     steps[s] = step;
   }

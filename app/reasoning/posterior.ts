@@ -47,7 +47,10 @@ export function normalise(lp: Float64Array): Posterior {
   let max = -Infinity;
   for (let h = 0; h < H; h++) if (lp[h] > max) max = lp[h];
   if (max === -Infinity) {
-    fail("IMPOSSIBLE_EVIDENCE", "No cause, listed or not, can produce this evidence; check the recorded results and the model's 0 and 1 figures.");
+    fail(
+      "IMPOSSIBLE_EVIDENCE",
+      "No cause, listed or not, can produce this evidence; check the recorded results and the model's 0 and 1 figures.",
+    );
   }
   let sum = 0;
   for (let h = 0; h < H; h++) sum += Math.exp(lp[h] - max);

@@ -26,7 +26,11 @@ export type VehicleFacts = { fuel?: string; drivetrain?: string; ageYears?: numb
 export type PriorOptions = { outcomes?: Record<string, number>; pseudoCount?: number };
 export type ResolvedPrior = { id: string; prior: number; base: number; factor: number; count: number };
 
-export function resolvePriors(causes: readonly PriorInput[], vehicle: VehicleFacts, options?: PriorOptions): ResolvedPrior[] {
+export function resolvePriors(
+  causes: readonly PriorInput[],
+  vehicle: VehicleFacts,
+  options?: PriorOptions,
+): ResolvedPrior[] {
   if (causes.length === 0) fail("EMPTY_MODEL", "There are no causes to give priors to.");
   const alpha = options?.pseudoCount ?? DEFAULT_PSEUDO_COUNT;
   if (typeof alpha !== "number" || !Number.isFinite(alpha) || alpha < 0) {
@@ -49,7 +53,10 @@ export function resolvePriors(causes: readonly PriorInput[], vehicle: VehicleFac
   }
   const total = weights.reduce((s, w) => s + w.weight, 0);
   if (!(total > 0) && !(n > 0)) {
-    fail("ZERO_PRIOR", "No cause applies to this vehicle and no outcomes are recorded, so every prior would be 0.");
+    fail(
+      "ZERO_PRIOR",
+      "No cause applies to this vehicle and no outcomes are recorded, so every prior would be 0.",
+    );
   }
   return weights.map(({ id, factor, weight }) => {
     const base = total > 0 ? weight / total : 0;
@@ -74,6 +81,7 @@ function applicabilityFactor(c: PriorInput, v: VehicleFacts): number {
 }
 
 function nonNegative(v: unknown, what: string): number {
-  if (typeof v !== "number" || !Number.isFinite(v) || v < 0) fail("INVALID_PRIOR", `${what} is ${String(v)}; it must be 0 or more.`);
+  if (typeof v !== "number" || !Number.isFinite(v) || v < 0)
+    fail("INVALID_PRIOR", `${what} is ${String(v)}; it must be 0 or more.`);
   return v;
 }

@@ -52,7 +52,9 @@ export class RankedCause {
   }
   toJSON() {
     const { id, name, probability, prior, contributions } = this;
-    return name === undefined ? { id, probability, prior, contributions } : { id, name, probability, prior, contributions };
+    return name === undefined
+      ? { id, probability, prior, contributions }
+      : { id, name, probability, prior, contributions };
   }
 }
 
@@ -71,7 +73,12 @@ export function rankCauses(model: Model | CompiledModel, evidence: Evidence, opt
 }
 
 /** Shared with diagnose(): builds the ranking from an index, its evidence and its posterior. */
-export function rankFrom(compiled: CompiledModel, index: ModelIndex, items: readonly EvidenceItem[], post: Posterior): Ranking {
+export function rankFrom(
+  compiled: CompiledModel,
+  index: ModelIndex,
+  items: readonly EvidenceItem[],
+  post: Posterior,
+): Ranking {
   const { tree, leafCount: L } = index;
   const explanation = new Explanation(index, items);
   const ids = tree.ids;

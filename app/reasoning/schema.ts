@@ -17,7 +17,12 @@ const probability = z.number().min(0).max(1);
 export const ConditionSchema = z.enum(CONDITIONS);
 export const ReadingBandSchema = z.enum(READING_BANDS);
 // P(reading in each band | cause), summing to 1: how far a measurement misses when this cause is there.
-const bandFigures = z.object({ well_within: probability, near: probability, beyond: probability, far_beyond: probability });
+const bandFigures = z.object({
+  well_within: probability,
+  near: probability,
+  beyond: probability,
+  far_beyond: probability,
+});
 
 export const CauseSchema = z.object({
   id,

@@ -24,16 +24,26 @@ export type SecondFault = {
   kept: Evidence; // the evidence the second ranking uses
 };
 
-export function rankSecondFault(model: Model | CompiledModel, evidence: Evidence, confirmed: readonly string[], options?: PlanOptions): SecondFault {
+export function rankSecondFault(
+  model: Model | CompiledModel,
+  evidence: Evidence,
+  confirmed: readonly string[],
+  options?: PlanOptions,
+): SecondFault {
   const opts = resolveOptions(options);
   const compiled = toCompiled(model);
   const base = compiled.scoped(opts.unlistedPrior);
-  if (!Array.isArray(confirmed) || confirmed.length === 0) fail("INVALID_INPUT", "Name at least one confirmed cause to look for a second fault.");
+  if (!Array.isArray(confirmed) || confirmed.length === 0)
+    fail("INVALID_INPUT", "Name at least one confirmed cause to look for a second fault.");
   const leaves = confirmed.map((id) => {
     const c = base.tree.causeIndex.get(id);
     if (c === undefined) fail("UNKNOWN_ID", `The confirmed cause "${id}" is not in the model.`);
     const leaf = base.tree.leafOf[c];
-    if (leaf < 0) fail("INVALID_INPUT", `"${id}" is a group of causes, not a failure mode; confirm the failure mode itself.`);
+    if (leaf < 0)
+      fail(
+        "INVALID_INPUT",
+        `"${id}" is a group of causes, not a failure mode; confirm the failure mode itself.`,
+      );
     return leaf;
   });
 

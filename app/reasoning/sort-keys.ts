@@ -9,7 +9,12 @@
 const LITTLE_ENDIAN = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
 const MAX_INDEX_BITS = 20; // beyond a million items, fall back to a comparator sort
 
-export function orderByKeyDesc(keys: Float64Array, n: number, tie: (a: number, b: number) => number, tieBits = 0): Int32Array {
+export function orderByKeyDesc(
+  keys: Float64Array,
+  n: number,
+  tie: (a: number, b: number) => number,
+  tieBits = 0,
+): Int32Array {
   const order = new Int32Array(n);
   const bits = Math.max(tieBits, Math.ceil(Math.log2(Math.max(2, n))));
   if (bits > MAX_INDEX_BITS || !LITTLE_ENDIAN) {

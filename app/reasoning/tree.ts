@@ -39,7 +39,8 @@ export function buildTree(causes: readonly Cause[]): Tree {
       continue;
     }
     const p = causeIndex.get(pid);
-    if (p === undefined) fail("UNKNOWN_ID", `Cause "${causes[i].id}" has parent "${pid}", which is not a cause.`);
+    if (p === undefined)
+      fail("UNKNOWN_ID", `Cause "${causes[i].id}" has parent "${pid}", which is not a cause.`);
     parent[i] = p;
     childCount[p]++;
   }
@@ -109,7 +110,10 @@ function computeDepths(parent: Int32Array, causes: readonly Cause[]): Int32Array
     while (v !== -1 && depth[v] < 0) {
       if (onPath[v]) {
         const loop = path.slice(path.indexOf(v)).map((k) => causes[k].id);
-        fail("CYCLE", `The cause tree loops: ${[...loop, causes[v].id].join(" → ")}. A cause cannot sit below itself.`);
+        fail(
+          "CYCLE",
+          `The cause tree loops: ${[...loop, causes[v].id].join(" → ")}. A cause cannot sit below itself.`,
+        );
       }
       onPath[v] = 1;
       path.push(v);

@@ -23,11 +23,17 @@ export type WhatIf = {
   ifPass: WhatIfOutcome | null; // null when the check cannot pass (pFail = 1)
 };
 
-export function whatIf(model: Model | CompiledModel, evidence: Evidence, checkId: string, options?: RankOptions): WhatIf {
+export function whatIf(
+  model: Model | CompiledModel,
+  evidence: Evidence,
+  checkId: string,
+  options?: RankOptions,
+): WhatIf {
   const opts = resolveOptions(options);
   const index = toCompiled(model).scoped(opts.unlistedPrior);
   const k = index.checkIndex.get(checkId);
-  if (k === undefined) fail("UNKNOWN_ID", `What-if asked about check "${checkId}", which is not in the model.`);
+  if (k === undefined)
+    fail("UNKNOWN_ID", `What-if asked about check "${checkId}", which is not in the model.`);
   if (evidence?.findings?.some((f) => f.checkId === checkId)) {
     fail("ALREADY_RECORDED", `Check "${checkId}" already has a result; what-if is for checks not yet done.`);
   }
@@ -37,7 +43,12 @@ export function whatIf(model: Model | CompiledModel, evidence: Evidence, checkId
 
 export function whatIfFrom(index: ModelIndex, post: Posterior, k: number): WhatIf {
   const failed = checkItem(index, k, true);
-  const passed: EvidenceItem = { ...failed, defaultLik: 1 - failed.defaultLik, unlistedLik: 1 - failed.unlistedLik, liks: failed.liks.map((q) => 1 - q) };
+  const passed: EvidenceItem = {
+    ...failed,
+    defaultLik: 1 - failed.defaultLik,
+    unlistedLik: 1 - failed.unlistedLik,
+    liks: failed.liks.map((q) => 1 - q),
+  };
   const pFail = marginal(post, failed);
   const pPass = marginal(post, passed); // summed on its own, not 1 − pFail, to stay exact near 0
   return {
@@ -52,7 +63,8 @@ export function whatIfFrom(index: ModelIndex, post: Posterior, k: number): WhatI
 function marginal(post: Posterior, item: EvidenceItem): number {
   const U = post.prob.length - 1;
   let p = item.defaultLik + post.prob[U] * (item.unlistedLik - item.defaultLik);
-  for (let j = 0; j < item.leaves.length; j++) p += post.prob[item.leaves[j]] * (item.liks[j] - item.defaultLik);
+  for (let j = 0; j < item.leaves.length; j++)
+    p += post.prob[item.leaves[j]] * (item.liks[j] - item.defaultLik);
   return Math.min(1, Math.max(0, p));
 }
 
@@ -77,10 +89,16 @@ function outcome(index: ModelIndex, post: Posterior, item: EvidenceItem, z: numb
   for (let h = 0; h < L; h++) {
     if (borne[h]) continue;
     const lh = post.logPost[h];
-    if (best < 0 || lh > post.logPost[best] || (lh === post.logPost[best] && compareIds(idOf(h), idOf(best)) < 0)) best = h;
+    if (
+      best < 0 ||
+      lh > post.logPost[best] ||
+      (lh === post.logPost[best] && compareIds(idOf(h), idOf(best)) < 0)
+    )
+      best = h;
   }
   if (best >= 0) consider(best, post.prob[best] * item.defaultLik);
-  for (let j = 0; j < item.leaves.length; j++) consider(item.leaves[j], post.prob[item.leaves[j]] * item.liks[j]);
+  for (let j = 0; j < item.leaves.length; j++)
+    consider(item.leaves[j], post.prob[item.leaves[j]] * item.liks[j]);
   const unlisted = (post.prob[L] * item.unlistedLik) / z;
   if (top < 0 || unlisted > topWeight / z) return { topCauseId: null, probability: unlisted, unlisted };
   return { topCauseId: idOf(top), probability: topWeight / z, unlisted };

@@ -16,15 +16,30 @@ export async function loader({ request, context }: Route.LoaderArgs) {
 export function meta() {
   return [
     { title: "Ramplight — from complaint to confirmed cause" },
-    { name: "description", content: "The workbench for independent vehicle workshops: diagnose, estimate, explain, get approval." },
+    {
+      name: "description",
+      content: "The workbench for independent vehicle workshops: diagnose, estimate, explain, get approval.",
+    },
   ];
 }
 
 const STEPS = [
-  { title: "Hear the complaint", body: "Record what the driver says in their own words, then what you find on the road test and the ramp." },
-  { title: "See the likely causes", body: "Every observation re-ranks the causes, with the evidence for and against each one in plain view." },
-  { title: "Check in the best order", body: "The check plan puts the cheapest way to find the fault first, with tools, time, skill and cautions." },
-  { title: "Explain and get approval", body: "The owner gets a plain summary with evidence and an estimate, approves the work and pays." },
+  {
+    title: "Hear the complaint",
+    body: "Record what the driver says in their own words, then what you find on the road test and the ramp.",
+  },
+  {
+    title: "See the likely causes",
+    body: "Every observation re-ranks the causes, with the evidence for and against each one in plain view.",
+  },
+  {
+    title: "Check in the best order",
+    body: "The check plan puts the cheapest way to find the fault first, with tools, time, skill and cautions.",
+  },
+  {
+    title: "Explain and get approval",
+    body: "The owner gets a plain summary with evidence and an estimate, approves the work and pays.",
+  },
 ];
 
 export default function Landing() {
@@ -48,9 +63,9 @@ export default function Landing() {
             From a driver's vague complaint to a confirmed cause, a fair estimate and an owner who says yes.
           </h1>
           <p className="mt-5 max-w-2xl text-lg text-graphite-700">
-            Ramplight is the shared workbench of an independent workshop: technicians and apprentices diagnose with a
-            ranked list of likely causes and a check plan, seniors keep the shop's knowledge, and service advisors turn the
-            finding into words and numbers the owner understands.
+            Ramplight is the shared workbench of an independent workshop: technicians and apprentices diagnose
+            with a ranked list of likely causes and a check plan, seniors keep the shop's knowledge, and
+            service advisors turn the finding into words and numbers the owner understands.
           </p>
         </section>
         <ol className="grid gap-4 sm:grid-cols-2">
@@ -66,7 +81,9 @@ export default function Landing() {
           <h2 id="priorities" className="text-lg font-semibold">
             Four words for the owner
           </h2>
-          <p className="mt-1 text-graphite-700">Every item on an owner summary carries one of them, with its own shape as well as its colour.</p>
+          <p className="mt-1 text-graphite-700">
+            Every item on an owner summary carries one of them, with its own shape as well as its colour.
+          </p>
           <ul className="mt-4 grid gap-3 sm:grid-cols-4">
             {(["stop", "soon", "watch", "sound"] as const).map((p) => (
               <li key={p}>
@@ -76,8 +93,9 @@ export default function Landing() {
           </ul>
         </section>
         <p className="mt-10 text-sm text-graphite-600">
-          Ramplight suggests; a qualified person decides. Work on brakes, fuel, airbags, lifting and high-voltage systems
-          follows the vehicle maker's procedures, local regulations and licensed practice.
+          Ramplight suggests; a qualified person decides. Work on brakes, fuel, airbags, lifting and
+          high-voltage systems follows the vehicle maker's procedures, local regulations and licensed
+          practice.
         </p>
       </main>
     </div>

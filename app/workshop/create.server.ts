@@ -40,7 +40,14 @@ export async function createWorkshop(db: Db, userId: string, input: NewWorkshopI
       .returning({ id: workshops.id, slug: workshops.slug });
     await tx.insert(members).values({ workshopId: w.id, userId, role: "admin", skill: "technician" });
     await copyKnowledgeBase(tx, w.id, await loadTemplate(tx, STARTER_TEMPLATE));
-    await audit(tx, { workshopId: w.id, actorUserId: userId, action: "workshop.create", entity: "workshop", entityId: w.id, after: { ...input, slug } });
+    await audit(tx, {
+      workshopId: w.id,
+      actorUserId: userId,
+      action: "workshop.create",
+      entity: "workshop",
+      entityId: w.id,
+      after: { ...input, slug },
+    });
     return w;
   });
 }

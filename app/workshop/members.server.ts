@@ -14,7 +14,15 @@ const INVITE_DAYS = 14;
 
 export async function listMembers(db: Db, workshopId: string) {
   return db
-    .select({ id: members.id, name: users.name, email: users.email, login: identities.login, role: members.role, skill: members.skill, status: members.status })
+    .select({
+      id: members.id,
+      name: users.name,
+      email: users.email,
+      login: identities.login,
+      role: members.role,
+      skill: members.skill,
+      status: members.status,
+    })
     .from(members)
     .innerJoin(users, eq(users.id, members.userId))
     .leftJoin(identities, eq(identities.userId, users.id))
@@ -24,7 +32,13 @@ export async function listMembers(db: Db, workshopId: string) {
 
 export async function listPendingInvitations(db: Db, workshopId: string) {
   return db
-    .select({ id: invitations.id, email: invitations.email, githubLogin: invitations.githubLogin, role: invitations.role, expiresAt: invitations.expiresAt })
+    .select({
+      id: invitations.id,
+      email: invitations.email,
+      githubLogin: invitations.githubLogin,
+      role: invitations.role,
+      expiresAt: invitations.expiresAt,
+    })
     .from(invitations)
     .where(and(eq(invitations.workshopId, workshopId), isNull(invitations.acceptedAt)))
     .orderBy(desc(invitations.createdAt));
@@ -36,12 +50,23 @@ const LOGIN = /^[A-Za-z0-9](?:[A-Za-z0-9-]{0,38})$/;
  * An invitation by e-mail address or code-hosting login, and its e-mail. The invitation stands
  * even when the mail relay is down; the answer says so. Refusals name the field they concern.
  */
-export async function invite(db: Db, by: CurrentMember, input: { target: string; role: Role }): Promise<string> {
+export async function invite(
+  db: Db,
+  by: CurrentMember,
+  input: { target: string; role: Role },
+): Promise<string> {
   const isEmail = input.target.includes("@");
-  if (isEmail && !z.email().safeParse(input.target).success) refuse(400, "That e-mail address does not look right");
-  if (!isEmail && !LOGIN.test(input.target)) refuse(400, "A GitHub login has letters, digits and dashes only");
-  await inviteMember(db, by, isEmail ? { email: input.target, role: input.role } : { githubLogin: input.target, role: input.role });
-  if (!isEmail) return `Invitation saved for ${input.target}: they join as ${input.role} when they next sign in.`;
+  if (isEmail && !z.email().safeParse(input.target).success)
+    refuse(400, "That e-mail address does not look right");
+  if (!isEmail && !LOGIN.test(input.target))
+    refuse(400, "A GitHub login has letters, digits and dashes only");
+  await inviteMember(
+    db,
+    by,
+    isEmail ? { email: input.target, role: input.role } : { githubLogin: input.target, role: input.role },
+  );
+  if (!isEmail)
+    return `Invitation saved for ${input.target}: they join as ${input.role} when they next sign in.`;
   const sent = await sendMail({
     to: input.target,
     subject: `You are invited to ${by.workshopName} on Ramplight`,
@@ -51,48 +76,112 @@ export async function invite(db: Db, by: CurrentMember, input: { target: string;
     return "failed" as const;
   });
   // Saved, so not a refusal: the notice says what did not happen and what to do.
-  if (sent === "failed") return `Invitation saved, but the e-mail to ${input.target} could not be sent. Tell them to sign in with that address.`;
-  return sent ? `Invitation e-mailed to ${input.target}.` : `Invitation saved for ${input.target}: they join as ${input.role} when they next sign in.`;
+  if (sent === "failed")
+    return `Invitation saved, but the e-mail to ${input.target} could not be sent. Tell them to sign in with that address.`;
+  return sent
+    ? `Invitation e-mailed to ${input.target}.`
+    : `Invitation saved for ${input.target}: they join as ${input.role} when they next sign in.`;
 }
 
-export async function inviteMember(db: Db, by: CurrentMember, input: { email?: string; githubLogin?: string; role: Role }) {
+export async function inviteMember(
+  db: Db,
+  by: CurrentMember,
+  input: { email?: string; githubLogin?: string; role: Role },
+) {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(invitations)
-      .values({ workshopId: by.workshopId, email: input.email ?? null, githubLogin: input.githubLogin ?? null, role: input.role, invitedBy: by.memberId, expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000) })
+      .values({
+        workshopId: by.workshopId,
+        email: input.email ?? null,
+        githubLogin: input.githubLogin ?? null,
+        role: input.role,
+        invitedBy: by.memberId,
+        expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
+      })
       .returning({ id: invitations.id });
-    await audit(tx, { workshopId: by.workshopId, actorUserId: by.userId, action: "member.invite", entity: "invitation", entityId: row.id, after: input });
+    await audit(tx, {
+      workshopId: by.workshopId,
+      actorUserId: by.userId,
+      action: "member.invite",
+      entity: "invitation",
+      entityId: row.id,
+      after: input,
+    });
     return row.id;
   });
 }
 
 export async function revokeInvitation(db: Db, by: CurrentMember, invitationId: string) {
   await db.transaction(async (tx) => {
-    const gone = await tx.delete(invitations).where(and(eq(invitations.id, invitationId), eq(invitations.workshopId, by.workshopId), isNull(invitations.acceptedAt))).returning({ id: invitations.id });
-    if (gone.length === 0) throw new Response("That invitation does not exist or was accepted already.", { status: 404 });
-    await audit(tx, { workshopId: by.workshopId, actorUserId: by.userId, action: "member.invite_revoke", entity: "invitation", entityId: invitationId });
+    const gone = await tx
+      .delete(invitations)
+      .where(
+        and(
+          eq(invitations.id, invitationId),
+          eq(invitations.workshopId, by.workshopId),
+          isNull(invitations.acceptedAt),
+        ),
+      )
+      .returning({ id: invitations.id });
+    if (gone.length === 0)
+      throw new Response("That invitation does not exist or was accepted already.", { status: 404 });
+    await audit(tx, {
+      workshopId: by.workshopId,
+      actorUserId: by.userId,
+      action: "member.invite_revoke",
+      entity: "invitation",
+      entityId: invitationId,
+    });
   });
 }
 
 /** Role or status change. The workshop always keeps at least one active admin, so nobody locks it out. */
-export async function updateMember(db: Db, by: CurrentMember, memberId: string, change: { role?: Role; status?: "active" | "suspended" }) {
+export async function updateMember(
+  db: Db,
+  by: CurrentMember,
+  memberId: string,
+  change: { role?: Role; status?: "active" | "suspended" },
+) {
   await db.transaction(async (tx) => {
-    const [target] = await tx.select().from(members).where(and(eq(members.id, memberId), eq(members.workshopId, by.workshopId))).for("update");
+    const [target] = await tx
+      .select()
+      .from(members)
+      .where(and(eq(members.id, memberId), eq(members.workshopId, by.workshopId)))
+      .for("update");
     if (!target) throw new Response("No such member in this workshop.", { status: 404 });
-    const losesAdmin = target.role === "admin" && target.status === "active" && ((change.role && change.role !== "admin") || change.status === "suspended");
+    const losesAdmin =
+      target.role === "admin" &&
+      target.status === "active" &&
+      ((change.role && change.role !== "admin") || change.status === "suspended");
     if (losesAdmin) {
       const [{ n }] = await tx
         .select({ n: sql<number>`count(*)::int` })
         .from(members)
-        .where(and(eq(members.workshopId, by.workshopId), eq(members.role, "admin"), eq(members.status, "active"), ne(members.id, memberId)));
-      if (n === 0) throw new Response("This is the workshop's only active admin. Make someone else admin first.", { status: 409 });
+        .where(
+          and(
+            eq(members.workshopId, by.workshopId),
+            eq(members.role, "admin"),
+            eq(members.status, "active"),
+            ne(members.id, memberId),
+          ),
+        );
+      if (n === 0)
+        throw new Response("This is the workshop's only active admin. Make someone else admin first.", {
+          status: 409,
+        });
     }
     const next = { role: change.role ?? target.role, status: change.status ?? target.status };
-    await tx.update(members).set({ ...next, skill: change.role ? skillForRole(change.role) : target.skill }).where(eq(members.id, memberId));
+    await tx
+      .update(members)
+      .set({ ...next, skill: change.role ? skillForRole(change.role) : target.skill })
+      .where(eq(members.id, memberId));
     await audit(tx, {
       workshopId: by.workshopId,
       actorUserId: by.userId,
-      action: change.status ? `member.${change.status === "suspended" ? "suspend" : "reactivate"}` : "member.role",
+      action: change.status
+        ? `member.${change.status === "suspended" ? "suspend" : "reactivate"}`
+        : "member.role",
       entity: "member",
       entityId: memberId,
       before: { role: target.role, status: target.status },

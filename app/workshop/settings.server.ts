@@ -20,12 +20,30 @@ export async function getWorkshop(db: Db, workshopId: string) {
   return w;
 }
 
-export type WorkshopSettingsInput = { name: string; currency: string; taxRate: number; units: "metric" | "imperial"; labourRatePerHour: number };
+export type WorkshopSettingsInput = {
+  name: string;
+  currency: string;
+  taxRate: number;
+  units: "metric" | "imperial";
+  labourRatePerHour: number;
+};
 
-export async function updateWorkshop(db: Db, by: { workshopId: string; userId: string }, input: WorkshopSettingsInput) {
+export async function updateWorkshop(
+  db: Db,
+  by: { workshopId: string; userId: string },
+  input: WorkshopSettingsInput,
+) {
   await db.transaction(async (tx) => {
     const before = await getWorkshop(tx as unknown as Db, by.workshopId);
     await tx.update(workshops).set(input).where(eq(workshops.id, by.workshopId));
-    await audit(tx, { workshopId: by.workshopId, actorUserId: by.userId, action: "settings.update", entity: "workshop", entityId: by.workshopId, before, after: input });
+    await audit(tx, {
+      workshopId: by.workshopId,
+      actorUserId: by.userId,
+      action: "settings.update",
+      entity: "workshop",
+      entityId: by.workshopId,
+      before,
+      after: input,
+    });
   });
 }

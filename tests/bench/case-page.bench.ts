@@ -10,7 +10,12 @@ import { availableParallelism, tmpdir } from "node:os";
 import { join } from "node:path";
 import { eq } from "drizzle-orm";
 
-const PG = { RL_PG_PORT: "54349", RL_PG_DIR: "/tmp/ramplight-bench-pg", RL_PG_FAST: "1", RL_PG_DB: "postgres" };
+const PG = {
+  RL_PG_PORT: "54349",
+  RL_PG_DIR: "/tmp/ramplight-bench-pg",
+  RL_PG_FAST: "1",
+  RL_PG_DB: "postgres",
+};
 const APP_PORT = 3997;
 const APP_URL = `http://127.0.0.1:${APP_PORT}`;
 const UNUSED = "http://127.0.0.1:4997"; // the server only validates the sign-in provider's URLs; nothing listens here
@@ -29,7 +34,20 @@ const TARGET_CLS = 0.1;
 const TARGET_JS_KB = 140;
 const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 // What a technician types, one after another, each adding a symptom that moves the ranking.
-const TYPED = ["judder when braking", "squeal when braking", "grinding when braking", "pulls to one side braking", "pedal pulses", "clunk over bumps", "shakes at motorway speed", "burning smell from a wheel", "abs light", "soft pedal", "knock from a wheel", "hum that changes cornering"];
+const TYPED = [
+  "judder when braking",
+  "squeal when braking",
+  "grinding when braking",
+  "pulls to one side braking",
+  "pedal pulses",
+  "clunk over bumps",
+  "shakes at motorway speed",
+  "burning smell from a wheel",
+  "abs light",
+  "soft pedal",
+  "knock from a wheel",
+  "hum that changes cornering",
+];
 
 process.env.TEST_PG_URL = `postgres://postgres@127.0.0.1:${PG.RL_PG_PORT}/postgres`;
 const { buildTemplate } = await import("../setup/template");
@@ -40,11 +58,26 @@ const { checks, findings, observations } = await import("../../app/db/schema");
 const { seedId } = await import("../../seeds/ids");
 const { kbId } = await import("../../seeds/knowledge");
 
-type Stats = { latency: { p50: number; p99: number; average: number }; requests: { average: number; total: number }; non2xx: number; errors: number; timeouts: number };
-type Autocannon = (opts: { url: string; connections: number; duration: number; headers?: Record<string, string> }) => Promise<Stats>;
+type Stats = {
+  latency: { p50: number; p99: number; average: number };
+  requests: { average: number; total: number };
+  non2xx: number;
+  errors: number;
+  timeouts: number;
+};
+type Autocannon = (opts: {
+  url: string;
+  connections: number;
+  duration: number;
+  headers?: Record<string, string>;
+}) => Promise<Stats>;
 const autocannon = createRequire(import.meta.url)("autocannon") as Autocannon;
 
-const pg = (cmd: "reset" | "stop") => execFileSync("bash", ["scripts/pg.sh", cmd], { env: { ...process.env, ...PG }, stdio: ["ignore", "ignore", "inherit"] });
+const pg = (cmd: "reset" | "stop") =>
+  execFileSync("bash", ["scripts/pg.sh", cmd], {
+    env: { ...process.env, ...PG },
+    stdio: ["ignore", "ignore", "inherit"],
+  });
 
 function newestMtime(dir: string): number {
   let newest = 0;
@@ -70,10 +103,38 @@ async function seedCase(databaseUrl: string) {
     const { loadAccount } = await import("../../app/auth/accounts.server");
     const { asMember } = await import("../../app/auth/guards.server");
     const member = asMember((await loadAccount(db, seedId("user:priya-hale")))!);
-    const created = await openCase(db, member, { vehicleId: seedId("vehicle:orlan-brisk"), mileageKm: 70_000, complaint: "Bench: steering wheel shakes under braking." });
-    const kbChecks = await db.select({ id: checks.id }).from(checks).where(eq(checks.workshopId, member.workshopId)).orderBy(checks.id).limit(30);
-    await db.insert(findings).values(kbChecks.map((k) => ({ workshopId: member.workshopId, caseId: created.id, checkId: k.id, result: "pass" as const, recordedById: member.memberId })));
-    await db.insert(observations).values({ workshopId: member.workshopId, caseId: created.id, symptomId: kbId("bramblegate", "symptom", "vibration_braking"), present: true, source: "owner", recordedById: member.memberId });
+    const created = await openCase(db, member, {
+      vehicleId: seedId("vehicle:orlan-brisk"),
+      mileageKm: 70_000,
+      complaint: "Bench: steering wheel shakes under braking.",
+    });
+    const kbChecks = await db
+      .select({ id: checks.id })
+      .from(checks)
+      .where(eq(checks.workshopId, member.workshopId))
+      .orderBy(checks.id)
+      .limit(30);
+    await db
+      .insert(findings)
+      .values(
+        kbChecks.map((k) => ({
+          workshopId: member.workshopId,
+          caseId: created.id,
+          checkId: k.id,
+          result: "pass" as const,
+          recordedById: member.memberId,
+        })),
+      );
+    await db
+      .insert(observations)
+      .values({
+        workshopId: member.workshopId,
+        caseId: created.id,
+        symptomId: kbId("bramblegate", "symptom", "vibration_braking"),
+        present: true,
+        source: "owner",
+        recordedById: member.memberId,
+      });
     const token = await createSession(db, member.userId, "case-page bench");
     return { caseId: created.id, cookie: `rl_session=${token}`, findings: kbChecks.length };
   } finally {
@@ -99,15 +160,31 @@ async function stopServer(server: ChildProcess | undefined) {
   if (!server || server.exitCode !== null || server.signalCode !== null) return;
   const exited = new Promise((r) => server.once("exit", r));
   server.kill("SIGTERM");
-  const done = await Promise.race([exited.then(() => true), new Promise((r) => setTimeout(() => r(false), 5000))]);
+  const done = await Promise.race([
+    exited.then(() => true),
+    new Promise((r) => setTimeout(() => r(false), 5000)),
+  ]);
   if (!done) server.kill("SIGKILL");
 }
 
-async function measure(name: string, path: string, headers: Record<string, string>, connections = CONNECTIONS, duration = DURATION_S) {
+async function measure(
+  name: string,
+  path: string,
+  headers: Record<string, string>,
+  connections = CONNECTIONS,
+  duration = DURATION_S,
+) {
   const url = `${APP_URL}${path}`;
   await autocannon({ url, connections, duration: WARMUP_S, headers });
   const r = await autocannon({ url, connections, duration, headers });
-  return { name, p50: r.latency.p50, p99: r.latency.p99, rps: r.requests.average, total: r.requests.total, bad: r.non2xx + r.errors + r.timeouts };
+  return {
+    name,
+    p50: r.latency.p50,
+    p99: r.latency.p99,
+    rps: r.requests.average,
+    total: r.requests.total,
+    bad: r.non2xx + r.errors + r.timeouts,
+  };
 }
 
 /**
@@ -115,13 +192,24 @@ async function measure(name: string, path: string, headers: Record<string, strin
  * layout shift, and keypress → re-ranked list painted, for symptoms added one after another with
  * Quick find (Enter on the first match; the re-ranked causes come in the answer to that one request).
  */
-async function inBrowser(seeded: { caseId: string; cookie: string }, mark: (ok: boolean) => string): Promise<string[]> {
+async function inBrowser(
+  seeded: { caseId: string; cookie: string },
+  mark: (ok: boolean) => string,
+): Promise<string[]> {
   const { chromium } = await import("playwright-core");
   const dir = mkdtempSync(join(tmpdir(), "rl-bench-chromium-"));
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: CHROMIUM,
     headless: true,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
     viewport: { width: 1280, height: 900 },
   });
   try {
@@ -138,7 +226,11 @@ async function inBrowser(seeded: { caseId: string; cookie: string }, mark: (ok: 
         new Promise<number>((resolve) => {
           let sum = 0;
           new PerformanceObserver((list) => {
-            for (const e of list.getEntries() as (PerformanceEntry & { value: number; hadRecentInput: boolean })[]) if (!e.hadRecentInput) sum += e.value;
+            for (const e of list.getEntries() as (PerformanceEntry & {
+              value: number;
+              hadRecentInput: boolean;
+            })[])
+              if (!e.hadRecentInput) sum += e.value;
           }).observe({ type: "layout-shift", buffered: true });
           setTimeout(() => resolve(sum), 500);
         }),
@@ -163,7 +255,10 @@ async function inBrowser(seeded: { caseId: string; cookie: string }, mark: (ok: 
           });
           seen.observe(list, { subtree: true, childList: true, characterData: true, attributes: true });
         });
-        document.addEventListener("keydown", (e) => e.key === "Enter" && (w.__t0 = performance.now()), { capture: true, once: true });
+        document.addEventListener("keydown", (e) => e.key === "Enter" && (w.__t0 = performance.now()), {
+          capture: true,
+          once: true,
+        });
       });
       await page.keyboard.press("Enter");
       times.push(await page.evaluate(() => (window as unknown as { __painted: Promise<number> }).__painted));
@@ -198,7 +293,8 @@ async function cleanup() {
     console.error("could not stop the bench cluster:", (e as Error).message);
   }
 }
-for (const signal of ["SIGINT", "SIGTERM"] as const) process.once(signal, () => void cleanup().then(() => process.exit(130)));
+for (const signal of ["SIGINT", "SIGTERM"] as const)
+  process.once(signal, () => void cleanup().then(() => process.exit(130)));
 
 try {
   pg("reset");
@@ -224,7 +320,10 @@ try {
     stock: ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"],
   } as const;
   const start = async (args: readonly string[], extra: Record<string, string> = {}) => {
-    server = spawn(process.execPath, [...args], { env: { ...env, ...extra }, stdio: ["ignore", "ignore", "pipe"] });
+    server = spawn(process.execPath, [...args], {
+      env: { ...env, ...extra },
+      stdio: ["ignore", "ignore", "pipe"],
+    });
     server.stderr?.on("data", (d) => (stderr = (stderr + String(d)).slice(-4000)));
     await waitFor(`${APP_URL}/`, server);
   };
@@ -233,14 +332,22 @@ try {
   const signedIn = { cookie: seeded.cookie };
   // The requests measured must be the real thing: a 200 document and the case's JSON.
   const page = await fetch(`${APP_URL}/cases/${seeded.caseId}`, { headers: signedIn, redirect: "manual" });
-  if (page.status !== 200) throw new Error(`GET /cases/:id answered ${page.status}, not 200: is the session accepted?`);
+  if (page.status !== 200)
+    throw new Error(`GET /cases/:id answered ${page.status}, not 200: is the session accepted?`);
   const pageBytes = (await page.arrayBuffer()).byteLength;
-  const json = (await (await fetch(`${APP_URL}/api/cases/${seeded.caseId}`, { headers: signedIn })).json()) as { case: { findingCount: number } };
-  if (json.case.findingCount !== seeded.findings) throw new Error(`the case has ${json.case.findingCount} findings, expected ${seeded.findings}`);
+  const json = (await (
+    await fetch(`${APP_URL}/api/cases/${seeded.caseId}`, { headers: signedIn })
+  ).json()) as { case: { findingCount: number } };
+  if (json.case.findingCount !== seeded.findings)
+    throw new Error(`the case has ${json.case.findingCount} findings, expected ${seeded.findings}`);
   const apiBytes = JSON.stringify(json).length;
 
-  console.log(`case-page bench: ${CONNECTIONS} connections, ${WARMUP_S} s warm-up + ${DURATION_S} s each, case with ${seeded.findings} findings, production build on ${APP_URL}`);
-  console.log(`response sizes: case page ${(pageBytes / 1024).toFixed(0)} KiB, case API ${(apiBytes / 1024).toFixed(0)} KiB`);
+  console.log(
+    `case-page bench: ${CONNECTIONS} connections, ${WARMUP_S} s warm-up + ${DURATION_S} s each, case with ${seeded.findings} findings, production build on ${APP_URL}`,
+  );
+  console.log(
+    `response sizes: case page ${(pageBytes / 1024).toFixed(0)} KiB, case API ${(apiBytes / 1024).toFixed(0)} KiB`,
+  );
   const casePath = `/cases/${seeded.caseId}`;
   const trivial = await measure("landing page GET / (trivial)", "/", {});
   const casePage = await measure("case page GET /cases/:id (signed in)", casePath, signedIn);
@@ -260,20 +367,40 @@ try {
   const stockPage = await measure("case page, stock react-router-serve", casePath, signedIn);
 
   const pad = (s: string, n: number) => s.padEnd(n);
-  console.log(`${pad("route (scripts/serve.mjs unless named)", 42)} ${pad("p50 ms", 8)} ${pad("p99 ms", 8)} ${pad("req/s", 10)} non-2xx/errors`);
+  console.log(
+    `${pad("route (scripts/serve.mjs unless named)", 42)} ${pad("p50 ms", 8)} ${pad("p99 ms", 8)} ${pad("req/s", 10)} non-2xx/errors`,
+  );
   const rows = [trivial, casePage, caseApi, serial, multiTrivial, multiPage, stockTrivial, stockPage];
-  for (const r of rows) console.log(`${pad(r.name, 42)} ${pad(String(r.p50), 8)} ${pad(String(r.p99), 8)} ${pad(r.rps.toFixed(0), 10)} ${r.bad}`);
+  for (const r of rows)
+    console.log(
+      `${pad(r.name, 42)} ${pad(String(r.p50), 8)} ${pad(String(r.p99), 8)} ${pad(r.rps.toFixed(0), 10)} ${r.bad}`,
+    );
   const ratio = casePage.rps / trivial.rps;
   console.log(`case page throughput / trivial: ${ratio.toFixed(2)}×`);
-  console.log(`target case page p99 ≤ ${TARGET_P99_TIMES}× the trivial route's (${trivial.p99} ms → ${TARGET_P99_TIMES * trivial.p99} ms): ${casePage.p99} ms — ${mark(casePage.p99 <= TARGET_P99_TIMES * trivial.p99)}`);
-  console.log(`target case page throughput ≥ ${TARGET_RATIO}× trivial: ${ratio.toFixed(2)}× — ${mark(ratio >= TARGET_RATIO)}`);
-  console.log(`target case page document ≤ ${TARGET_DOC_KIB} KiB: ${(pageBytes / 1024).toFixed(1)} KiB — ${mark(pageBytes <= TARGET_DOC_KIB * 1024)}`);
+  console.log(
+    `target case page p99 ≤ ${TARGET_P99_TIMES}× the trivial route's (${trivial.p99} ms → ${TARGET_P99_TIMES * trivial.p99} ms): ${casePage.p99} ms — ${mark(casePage.p99 <= TARGET_P99_TIMES * trivial.p99)}`,
+  );
+  console.log(
+    `target case page throughput ≥ ${TARGET_RATIO}× trivial: ${ratio.toFixed(2)}× — ${mark(ratio >= TARGET_RATIO)}`,
+  );
+  console.log(
+    `target case page document ≤ ${TARGET_DOC_KIB} KiB: ${(pageBytes / 1024).toFixed(1)} KiB — ${mark(pageBytes <= TARGET_DOC_KIB * 1024)}`,
+  );
   for (const line of browserLines) console.log(line);
-  console.log(`(reference) case API p99 ${caseApi.p99} ms, ${(caseApi.rps / trivial.rps).toFixed(2)}× trivial throughput`);
-  console.log(`(reference) our server vs the stock one: case page ${(casePage.rps / stockPage.rps).toFixed(2)}× the throughput, landing ${(trivial.rps / stockTrivial.rps).toFixed(2)}×`);
-  console.log(`(reference) with ${cores} worker processes: case page p99 ${multiPage.p99} ms, ${(multiPage.rps / multiTrivial.rps).toFixed(2)}× trivial throughput, landing p99 ${multiTrivial.p99} ms`);
-  console.log(`(reference) the trivial route's own p99 in this run: ${trivial.p99} ms (one process), ${multiTrivial.p99} ms (${cores} processes)`);
-  if (rows.some((r) => r.bad > 0)) console.log("warning: some responses were not 2xx; the figures above include them");
+  console.log(
+    `(reference) case API p99 ${caseApi.p99} ms, ${(caseApi.rps / trivial.rps).toFixed(2)}× trivial throughput`,
+  );
+  console.log(
+    `(reference) our server vs the stock one: case page ${(casePage.rps / stockPage.rps).toFixed(2)}× the throughput, landing ${(trivial.rps / stockTrivial.rps).toFixed(2)}×`,
+  );
+  console.log(
+    `(reference) with ${cores} worker processes: case page p99 ${multiPage.p99} ms, ${(multiPage.rps / multiTrivial.rps).toFixed(2)}× trivial throughput, landing p99 ${multiTrivial.p99} ms`,
+  );
+  console.log(
+    `(reference) the trivial route's own p99 in this run: ${trivial.p99} ms (one process), ${multiTrivial.p99} ms (${cores} processes)`,
+  );
+  if (rows.some((r) => r.bad > 0))
+    console.log("warning: some responses were not 2xx; the figures above include them");
 } catch (error) {
   console.error("case-page bench failed:", (error as Error).message);
   if (stderr.trim()) console.error(`app server stderr:\n${stderr}`);

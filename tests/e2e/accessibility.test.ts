@@ -11,7 +11,10 @@ const CASE = (key: string) => `/cases/${seedId(`case:${key}`)}`;
 const VISITS: { login: string | null; paths: string[] }[] = [
   { login: null, paths: ["/", "/sign-in", "/no-such-page"] },
   { login: "sam-newcomer", paths: ["/welcome"] },
-  { login: "priya-hale", paths: ["/board", "/cases", "/cases?q=DEMO", "/cases/new", CASE("b1"), "/kb", "/settings"] },
+  {
+    login: "priya-hale",
+    paths: ["/board", "/cases", "/cases?q=DEMO", "/cases/new", CASE("b1"), "/kb", "/settings"],
+  },
   { login: "ollie-mbeki", paths: [CASE("b2")] },
   { login: "tomas-varga", paths: [CASE("b3"), "/settings/audit"] },
   { login: "dana-reyes", paths: [CASE("b4"), CASE("b5")] },
@@ -36,7 +39,9 @@ for (const view of [
           await page.goto(`${baseUrl()}${path}`);
           await page.waitForLoadState("networkidle");
           // Open every fold on the page so what it hides is checked too.
-          await page.evaluate(() => document.querySelectorAll("main details").forEach((d) => ((d as HTMLDetailsElement).open = true)));
+          await page.evaluate(() =>
+            document.querySelectorAll("main details").forEach((d) => ((d as HTMLDetailsElement).open = true)),
+          );
           await page.waitForTimeout(50);
           for (const v of await seriousViolations(page)) found.push(`${path}: ${v}`);
         }

@@ -15,10 +15,20 @@ import { kbId } from "../../seeds/knowledge";
 // Every route × every kind of caller, against the running production server. Expected outcomes
 // come from app/auth/route-access.ts and the role table; docs/permissions.md states both in words.
 
-type Actor = { name: string; kind: "anonymous" | "newcomer" | "suspended" | "member"; role?: Role; cookie?: string; userId?: string; workshop?: string };
+type Actor = {
+  name: string;
+  kind: "anonymous" | "newcomer" | "suspended" | "member";
+  role?: Role;
+  cookie?: string;
+  userId?: string;
+  workshop?: string;
+};
 
 function routeFiles(list: { file: string; children?: unknown[] }[]): string[] {
-  return list.flatMap((r) => [r.file, ...routeFiles((r.children ?? []) as { file: string; children?: unknown[] }[])]);
+  return list.flatMap((r) => [
+    r.file,
+    ...routeFiles((r.children ?? []) as { file: string; children?: unknown[] }[]),
+  ]);
 }
 
 // Case #1041 of the demo (Bramblegate, open, assigned to the technician).
@@ -31,14 +41,33 @@ const actors: Actor[] = [{ name: "anonymous", kind: "anonymous" }];
 beforeAll(async () => {
   for (const p of DEMO_PEOPLE.filter((p) => p.workshop)) {
     const token = await createSession(db, seedId(`user:${p.login}`), "matrix");
-    actors.push({ name: `${p.role} of ${p.workshop}`, kind: "member", role: p.role!, cookie: `rl_session=${token}`, userId: seedId(`user:${p.login}`), workshop: p.workshop! });
+    actors.push({
+      name: `${p.role} of ${p.workshop}`,
+      kind: "member",
+      role: p.role!,
+      cookie: `rl_session=${token}`,
+      userId: seedId(`user:${p.login}`),
+      workshop: p.workshop!,
+    });
   }
   const [newcomer] = await db.insert(users).values({ name: "Matrix Newcomer" }).returning({ id: users.id });
-  actors.push({ name: "signed in, no workshop", kind: "newcomer", cookie: `rl_session=${await createSession(db, newcomer.id, "matrix")}`, userId: newcomer.id });
+  actors.push({
+    name: "signed in, no workshop",
+    kind: "newcomer",
+    cookie: `rl_session=${await createSession(db, newcomer.id, "matrix")}`,
+    userId: newcomer.id,
+  });
   const [suspended] = await db.insert(users).values({ name: "Matrix Suspended" }).returning({ id: users.id });
   const [w] = await db.select({ id: workshops.id }).from(workshops).where(eq(workshops.slug, "bramblegate"));
-  await db.insert(members).values({ workshopId: w.id, userId: suspended.id, role: "senior", skill: "senior", status: "suspended" });
-  actors.push({ name: "suspended senior", kind: "suspended", cookie: `rl_session=${await createSession(db, suspended.id, "matrix")}`, userId: suspended.id });
+  await db
+    .insert(members)
+    .values({ workshopId: w.id, userId: suspended.id, role: "senior", skill: "senior", status: "suspended" });
+  actors.push({
+    name: "suspended senior",
+    kind: "suspended",
+    cookie: `rl_session=${await createSession(db, suspended.id, "matrix")}`,
+    userId: suspended.id,
+  });
 });
 afterAll(() => pool.end());
 
@@ -51,7 +80,12 @@ function expected(access: RouteAccessLevel, actor: Actor, rule: RouteAccess): Wa
   if (rule.record && actor.kind === "member" && actor.workshop !== "bramblegate") return "not-found";
   if (rule.api && (actor.kind === "newcomer" || actor.kind === "suspended")) return "forbidden";
   if (access === "account") return "allowed";
-  if (access === "no-workshop") return actor.kind === "newcomer" ? "allowed" : actor.kind === "suspended" ? "has-workshop" : "has-workshop";
+  if (access === "no-workshop")
+    return actor.kind === "newcomer"
+      ? "allowed"
+      : actor.kind === "suspended"
+        ? "has-workshop"
+        : "has-workshop";
   if (actor.kind === "newcomer") return "welcome";
   if (actor.kind === "suspended") return "forbidden";
   if (access === "member") return "allowed";
@@ -82,27 +116,51 @@ describe("authorization matrix", () => {
     const methods: ["GET" | "POST", string | undefined, RouteAccessLevel][] = [];
     if (rule.GET) methods.push(["GET", undefined, rule.GET]);
     if (typeof rule.POST === "string") methods.push(["POST", undefined, rule.POST]);
-    else if (rule.POST) for (const [intent, a] of Object.entries(rule.POST)) methods.push(["POST", intent, a]);
+    else if (rule.POST)
+      for (const [intent, a] of Object.entries(rule.POST)) methods.push(["POST", intent, a]);
     for (const [method, intent, access] of methods) {
       it(`${method} ${rule.path}${intent ? ` (${intent})` : ""} — ${access}`, async () => {
         const results: string[] = [];
         for (const actor of actors) {
           const want = expected(access, actor, rule);
           // Signing out revokes the session it is sent with: use a spare one.
-          const cookie = file === "routes/auth/sign-out.tsx" && actor.userId ? `rl_session=${await createSession(db, actor.userId, "spare")}` : actor.cookie;
-          const res = await fetch(`${base}${rule.path.replace("{case}", OPEN_CASE).replace("{check}", A_CHECK)}`, {
-            method,
-            redirect: "manual",
-            headers: { ...(cookie ? { cookie } : {}), ...(method === "POST" ? { origin: base, "content-type": rule.api ? "application/json" : "application/x-www-form-urlencoded" } : {}) },
-            // Deliberately incomplete: an allowed caller gets a 400 and nothing changes.
-            body: method === "POST" ? (rule.api ? JSON.stringify(intent ? { intent } : {}) : new URLSearchParams(intent ? { intent } : {})) : undefined,
-          });
+          const cookie =
+            file === "routes/auth/sign-out.tsx" && actor.userId
+              ? `rl_session=${await createSession(db, actor.userId, "spare")}`
+              : actor.cookie;
+          const res = await fetch(
+            `${base}${rule.path.replace("{case}", OPEN_CASE).replace("{check}", A_CHECK)}`,
+            {
+              method,
+              redirect: "manual",
+              headers: {
+                ...(cookie ? { cookie } : {}),
+                ...(method === "POST"
+                  ? {
+                      origin: base,
+                      "content-type": rule.api ? "application/json" : "application/x-www-form-urlencoded",
+                    }
+                  : {}),
+              },
+              // Deliberately incomplete: an allowed caller gets a 400 and nothing changes.
+              body:
+                method === "POST"
+                  ? rule.api
+                    ? JSON.stringify(intent ? { intent } : {})
+                    : new URLSearchParams(intent ? { intent } : {})
+                  : undefined,
+            },
+          );
           await res.arrayBuffer();
           let got = outcome(res);
           // A public page may send a signed-in newcomer on to set up a workshop.
           if (access === "public" && got === "welcome") got = "allowed";
-          if (want === "has-workshop") got = got === "allowed" && (res.status >= 300 || res.status === 409) ? "has-workshop" : got;
-          if (got !== want) results.push(`${actor.name}: expected ${want}, got ${got} (${res.status} ${res.headers.get("location") ?? ""})`);
+          if (want === "has-workshop")
+            got = got === "allowed" && (res.status >= 300 || res.status === 409) ? "has-workshop" : got;
+          if (got !== want)
+            results.push(
+              `${actor.name}: expected ${want}, got ${got} (${res.status} ${res.headers.get("location") ?? ""})`,
+            );
         }
         expect(results).toEqual([]);
       });
@@ -111,9 +169,13 @@ describe("authorization matrix", () => {
 
   it("answers an unknown page, or an unknown API address, with 404 for everyone", async () => {
     for (const actor of actors) {
-      const res = await fetch(`${base}/no-such-page`, { headers: actor.cookie ? { cookie: actor.cookie } : {} });
+      const res = await fetch(`${base}/no-such-page`, {
+        headers: actor.cookie ? { cookie: actor.cookie } : {},
+      });
       expect(res.status, actor.name).toBe(404);
-      const api = await fetch(`${base}/api/no-such-thing`, { headers: actor.cookie ? { cookie: actor.cookie } : {} });
+      const api = await fetch(`${base}/api/no-such-thing`, {
+        headers: actor.cookie ? { cookie: actor.cookie } : {},
+      });
       expect(api.status, actor.name).toBe(404);
       expect((await api.json()).error).toMatch(/no such API address/);
     }
@@ -124,11 +186,24 @@ describe("authorization matrix", () => {
     const res = await fetch(`${base}/settings`, {
       method: "POST",
       redirect: "manual",
-      headers: { cookie: admin.cookie!, origin: "http://evil.example", "content-type": "application/x-www-form-urlencoded" },
-      body: new URLSearchParams({ name: "Hijacked", currency: "EUR", taxRatePercent: "0", units: "metric", labourRatePerHour: "1" }),
+      headers: {
+        cookie: admin.cookie!,
+        origin: "http://evil.example",
+        "content-type": "application/x-www-form-urlencoded",
+      },
+      body: new URLSearchParams({
+        name: "Hijacked",
+        currency: "EUR",
+        taxRatePercent: "0",
+        units: "metric",
+        labourRatePerHour: "1",
+      }),
     });
     expect(res.status).toBeGreaterThanOrEqual(400);
-    const [w] = await db.select({ name: workshops.name }).from(workshops).where(eq(workshops.slug, "bramblegate"));
+    const [w] = await db
+      .select({ name: workshops.name })
+      .from(workshops)
+      .where(eq(workshops.slug, "bramblegate"));
     expect(w.name).toBe("Bramblegate Motor Works");
   });
 });

@@ -13,11 +13,26 @@ export type AxeViolation = { id: string; impact: string | null; help: string; no
 export async function seriousViolations(page: Page): Promise<string[]> {
   if (!(await page.evaluate(() => "axe" in window))) await page.evaluate(`${axeSource}\n;void 0`);
   const violations = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: unknown) => Promise<{ violations: AxeViolation[] }> } }).axe;
-    const result = await axe.run(document, { runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa", "best-practice"] } });
+    const axe = (
+      window as unknown as {
+        axe: { run: (ctx: Document, opts: unknown) => Promise<{ violations: AxeViolation[] }> };
+      }
+    ).axe;
+    const result = await axe.run(document, {
+      runOnly: {
+        type: "tag",
+        values: ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa", "best-practice"],
+      },
+    });
     return result.violations;
   });
   return violations
     .filter((v) => v.impact === "serious" || v.impact === "critical")
-    .map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join(", ")}`);
+    .map(
+      (v) =>
+        `${v.id} (${v.impact}): ${v.help} — ${v.nodes
+          .slice(0, 3)
+          .map((n) => n.target.join(" "))
+          .join(", ")}`,
+    );
 }

@@ -6,7 +6,15 @@ import { afterAll, beforeAll, inject } from "vitest";
 
 // Debian's Chromium; playwright-core never downloads a browser of its own.
 const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
-const FLAGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+const FLAGS = [
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
 
 export const baseUrl = () => inject("baseUrl");
 

@@ -7,15 +7,26 @@ import { baseUrl, hydrated, signInAs, useBrowser } from "./browser";
 const browser = useBrowser();
 const caseUrl = (key: string) => `${baseUrl()}/cases/${seedId(`case:${key}`)}`;
 
-const focusedLabel = (page: Page) => page.evaluate(() => document.activeElement?.getAttribute("aria-label") ?? document.activeElement?.textContent ?? "");
+const focusedLabel = (page: Page) =>
+  page.evaluate(
+    () => document.activeElement?.getAttribute("aria-label") ?? document.activeElement?.textContent ?? "",
+  );
 
 /** Presses Tab until the focused element matches, as a keyboard user would. */
-async function tabTo(page: Page, match: (el: { tag: string; name: string; text: string }) => boolean, max = 120) {
+async function tabTo(
+  page: Page,
+  match: (el: { tag: string; name: string; text: string }) => boolean,
+  max = 120,
+) {
   for (let i = 0; i < max; i++) {
     await page.keyboard.press("Tab");
     const el = await page.evaluate(() => {
       const a = document.activeElement as HTMLElement | null;
-      return { tag: a?.tagName.toLowerCase() ?? "", name: a?.getAttribute("name") ?? "", text: a?.textContent?.trim() ?? "" };
+      return {
+        tag: a?.tagName.toLowerCase() ?? "",
+        name: a?.getAttribute("name") ?? "",
+        text: a?.textContent?.trim() ?? "",
+      };
     });
     if (match(el)) return;
   }
@@ -24,7 +35,10 @@ async function tabTo(page: Page, match: (el: { tag: string; name: string; text: 
 
 async function topCause(page: Page) {
   const first = page.locator('[aria-label="Likely causes, most likely first"] > li').first();
-  return { name: await first.getAttribute("data-cause"), share: Number((await first.locator(".tabular").first().textContent())!.replace("%", "")) };
+  return {
+    name: await first.getAttribute("data-cause"),
+    share: Number((await first.locator(".tabular").first().textContent())!.replace("%", "")),
+  };
 }
 
 describe("a technician diagnoses a vibration under braking with the keyboard only", () => {
@@ -39,23 +53,37 @@ describe("a technician diagnoses a vibration under braking with the keyboard onl
 
     await page.keyboard.press("Control+k");
     await page.keyboard.type("judder when braking");
-    await page.getByRole("option").first().filter({ hasText: "Vibration through the steering wheel under braking" }).waitFor();
+    await page
+      .getByRole("option")
+      .first()
+      .filter({ hasText: "Vibration through the steering wheel under braking" })
+      .waitFor();
     await page.keyboard.press("Enter"); // present, confirmed by the technician
     await page.keyboard.type("clunk bumps");
     await page.getByRole("option").first().filter({ hasText: "Clunk from the front over bumps" }).waitFor();
     await page.keyboard.press("Shift+Enter"); // absent: matters just as much
     await page.keyboard.press("Escape");
-    await page.getByRole("list", { name: "Observations" }).getByText("Clunk from the front over bumps").waitFor();
+    await page
+      .getByRole("list", { name: "Observations" })
+      .getByText("Clunk from the front over bumps")
+      .waitFor();
 
     await page.keyboard.press("Alt+n");
     expect(await focusedLabel(page)).toBe("Road test the brakes from speed");
     // F asks for Enter before anything is recorded.
     await page.keyboard.press("f");
-    await page.getByRole("status").filter({ hasText: "Press Enter to record “Road test the brakes from speed” as found a fault" }).waitFor();
+    await page
+      .getByRole("status")
+      .filter({ hasText: "Press Enter to record “Road test the brakes from speed” as found a fault" })
+      .waitFor();
     await page.keyboard.press("Enter");
     await page.getByRole("list", { name: "Findings" }).getByText("Road test the brakes from speed").waitFor();
     // The re-ranked plan arrives from the server: the road test leaves it.
-    await page.waitForFunction(() => document.querySelector("[data-step]")?.getAttribute("aria-label") !== "Road test the brakes from speed");
+    await page.waitForFunction(
+      () =>
+        document.querySelector("[data-step]")?.getAttribute("aria-label") !==
+        "Road test the brakes from speed",
+    );
 
     // Move through the plan to the run-out measurement.
     await page.keyboard.press("Alt+n");
@@ -64,10 +92,15 @@ describe("a technician diagnoses a vibration under braking with the keyboard onl
       seen.push(await focusedLabel(page));
       await page.keyboard.press("ArrowDown");
     }
-    expect(await focusedLabel(page), `plan was: ${seen.join(" | ")}`).toBe("Measure front disc lateral run-out with a dial gauge");
+    expect(await focusedLabel(page), `plan was: ${seen.join(" | ")}`).toBe(
+      "Measure front disc lateral run-out with a dial gauge",
+    );
     // Past the first three the plan's checks are folded: Enter opens one (its cautions first);
     // on an open check, Enter goes into the reading field.
-    if (await page.evaluate(() => Boolean(document.activeElement?.querySelector('button[aria-label^="Open "]')))) await page.keyboard.press("Enter");
+    if (
+      await page.evaluate(() => Boolean(document.activeElement?.querySelector('button[aria-label^="Open "]')))
+    )
+      await page.keyboard.press("Enter");
     await page.keyboard.press("Enter");
     await page.keyboard.type("5 kPa");
     await page.keyboard.press("Enter");
@@ -78,10 +111,15 @@ describe("a technician diagnoses a vibration under braking with the keyboard onl
     await page.keyboard.press("Control+a");
     await page.keyboard.type("0.11 mm"); // beyond the generic 0.05 mm limit (common practice; maker-specific)
     await page.keyboard.press("Enter");
-    await page.getByRole("list", { name: "Findings" }).getByText("Measure front disc lateral run-out with a dial gauge").waitFor();
+    await page
+      .getByRole("list", { name: "Findings" })
+      .getByText("Measure front disc lateral run-out with a dial gauge")
+      .waitFor();
     // The re-rank after the failed measurement moves the run-out cause up.
     await page.waitForFunction(
-      (share) => document.querySelector('[aria-label="Likely causes, most likely first"] > li .tabular')?.textContent !== `${share}%`,
+      (share) =>
+        document.querySelector('[aria-label="Likely causes, most likely first"] > li .tabular')
+          ?.textContent !== `${share}%`,
       mid.share,
     );
     const after = await topCause(page);
@@ -93,7 +131,9 @@ describe("a technician diagnoses a vibration under braking with the keyboard onl
     await tabTo(page, (el) => el.tag === "summary" && el.text === "Conclude the case…");
     await page.keyboard.press("Enter");
     await tabTo(page, (el) => el.tag === "select" && el.name === "causeId");
-    expect(await page.evaluate(() => (document.activeElement as HTMLSelectElement).selectedOptions[0].text)).toContain("run-out");
+    expect(
+      await page.evaluate(() => (document.activeElement as HTMLSelectElement).selectedOptions[0].text),
+    ).toContain("run-out");
     await page.keyboard.press("Tab");
     await page.keyboard.type("Front discs 0.11 mm run-out; replace both front discs and pads.");
     await page.keyboard.press("Tab");
@@ -118,11 +158,20 @@ describe("an apprentice follows the plan and asks a senior", () => {
     // Checks above an apprentice's level fold into one line and are never offered.
     await page.getByText(/more checks need a technician or a senior: ask a senior/).waitFor();
     // The check on offer shows every caution the knowledge base gives it, in full.
-    const offered = await page.evaluate(async (url) => (await (await fetch(url)).json()).diagnosis.plan.steps[0] as { name: string; cautions: string[]; unit: string | null }, `/api/cases/${seedId("case:b2")}`);
+    const offered = await page.evaluate(
+      async (url) =>
+        (await (await fetch(url)).json()).diagnosis.plan.steps[0] as {
+          name: string;
+          cautions: string[];
+          unit: string | null;
+        },
+      `/api/cases/${seedId("case:b2")}`,
+    );
     expect(offered.name).toBe(step);
     const notes = plan.locator("[data-step]").first().getByRole("note", { name: "Cautions" });
     await expect(notes.count()).resolves.toBe(offered.cautions.length ? 1 : 0);
-    if (offered.cautions.length) await expect(notes.locator("li").count()).resolves.toBe(offered.cautions.length);
+    if (offered.cautions.length)
+      await expect(notes.locator("li").count()).resolves.toBe(offered.cautions.length);
     const measurement = plan.getByLabel(/^Reading for/);
     if (await measurement.count()) {
       // A reading in the check's own unit; the value is arbitrary.
@@ -137,7 +186,10 @@ describe("an apprentice follows the plan and asks a senior", () => {
     await page.getByRole("status").filter({ hasText: "A senior has been asked." }).waitFor();
     await page.getByText("A senior has been asked to look at this case.").waitFor();
     await page.goto(`${baseUrl()}/board`);
-    await page.getByRole("region", { name: /Needs a senior/ }).getByText("#1042").waitFor();
+    await page
+      .getByRole("region", { name: /Needs a senior/ })
+      .getByText("#1042")
+      .waitFor();
     expect(errors).toEqual([]);
     await page.close();
   });
@@ -154,7 +206,10 @@ describe("a senior signs off an apprentice's conclusion", () => {
     await page.getByRole("button", { name: "Sign off" }).click();
     await page.getByRole("status").filter({ hasText: "Signed off." }).waitFor();
     await page.goto(`${baseUrl()}/board`);
-    await page.getByRole("region", { name: /Ready for the advisor/ }).getByText("#1038").waitFor();
+    await page
+      .getByRole("region", { name: /Ready for the advisor/ })
+      .getByText("#1038")
+      .waitFor();
     expect(errors).toEqual([]);
     await page.close();
   });
@@ -176,7 +231,11 @@ describe("two people edit one case", () => {
 
     await second.page.getByLabel("In the owner's words").fill("Squeal when braking.");
     await second.page.getByRole("button", { name: "Save complaint" }).click();
-    await second.page.getByRole("alert").filter({ hasText: "Someone else changed this case" }).filter({ hasText: "worst in the morning" }).waitFor();
+    await second.page
+      .getByRole("alert")
+      .filter({ hasText: "Someone else changed this case" })
+      .filter({ hasText: "worst in the morning" })
+      .waitFor();
 
     await first.page.reload();
     await first.page.getByText("History").click();

@@ -25,8 +25,16 @@ const check = (key: string) => kbId("bramblegate", "check", key);
 const cause = (key: string) => kbId("bramblegate", "cause", key);
 
 async function freshCase(complaint: string, assignTo?: string) {
-  const created = await openCase(db, await member("priya-hale"), { vehicleId: seedId("vehicle:orlan-brisk"), mileageKm: 70_000, complaint });
-  if (assignTo) await db.update(cases).set({ assignedMemberId: seedId(`member:${assignTo}`) }).where(eq(cases.id, created.id));
+  const created = await openCase(db, await member("priya-hale"), {
+    vehicleId: seedId("vehicle:orlan-brisk"),
+    mileageKm: 70_000,
+    complaint,
+  });
+  if (assignTo)
+    await db
+      .update(cases)
+      .set({ assignedMemberId: seedId(`member:${assignTo}`) })
+      .where(eq(cases.id, created.id));
   return created;
 }
 
@@ -58,7 +66,8 @@ describe("stray keys and undo", () => {
     await page.keyboard.press("Escape");
     await page.getByRole("dialog").waitFor({ state: "detached" });
 
-    const sentences = "clunk over bumps, pulls left when braking, needs a new pad{Enter}squeal from the front passenger side{Enter}pp ff nn pass fail";
+    const sentences =
+      "clunk over bumps, pulls left when braking, needs a new pad{Enter}squeal from the front passenger side{Enter}pp ff nn pass fail";
     const type = async () => {
       for (const part of sentences.split("{Enter}")) {
         await page.keyboard.type(part);
@@ -90,17 +99,27 @@ describe("stray keys and undo", () => {
     const first = page.locator("[data-step]").first();
     const name = await first.getAttribute("aria-label");
     await first.getByRole("button", { name: "Passed" }).click();
-    await page.getByRole("status").filter({ hasText: `Recorded “${name}”: passed.` }).waitFor();
+    await page
+      .getByRole("status")
+      .filter({ hasText: `Recorded “${name}”: passed.` })
+      .waitFor();
     await expect.poll(() => evidenceCount(id)).toBe(1);
     await page.getByRole("button", { name: "Undo" }).click();
     await expect.poll(() => evidenceCount(id)).toBe(0);
 
     await page.keyboard.press("Control+k");
     await page.keyboard.type("judder when braking");
-    await page.getByRole("option").first().filter({ hasText: "Vibration through the steering wheel under braking" }).waitFor();
+    await page
+      .getByRole("option")
+      .first()
+      .filter({ hasText: "Vibration through the steering wheel under braking" })
+      .waitFor();
     await page.keyboard.press("Enter");
     await page.keyboard.press("Escape");
-    await page.getByRole("status").filter({ hasText: "Recorded “Vibration through the steering wheel under braking” as present." }).waitFor();
+    await page
+      .getByRole("status")
+      .filter({ hasText: "Recorded “Vibration through the steering wheel under braking” as present." })
+      .waitFor();
     await expect.poll(() => evidenceCount(id)).toBe(1);
     await page.getByRole("button", { name: "Undo" }).click();
     await expect.poll(() => evidenceCount(id)).toBe(0);
@@ -127,9 +146,15 @@ describe("the workshop's units and the why", () => {
 
     // Put the run-out check on the plan, as a technician's first findings would.
     const c = await loadCaseForChange(db, await member("priya-hale"), caseId);
-    await recordObservation(db, await member("priya-hale"), c, { symptomId: symptom("vibration_braking"), present: true, source: "technician" });
+    await recordObservation(db, await member("priya-hale"), c, {
+      symptomId: symptom("vibration_braking"),
+      present: true,
+      source: "technician",
+    });
     await page.reload();
-    const step = page.locator('[data-step][aria-label="Measure front disc lateral run-out with a dial gauge"]');
+    const step = page.locator(
+      '[data-step][aria-label="Measure front disc lateral run-out with a dial gauge"]',
+    );
     // Past the first three the plan's checks are folded; open it if it is one of those.
     const open = step.getByRole("button", { name: /^Open / });
     if (await open.count()) await open.click();
@@ -138,7 +163,9 @@ describe("the workshop's units and the why", () => {
     await field.fill("65 %");
     await field.press("Enter");
     const alert = step.getByRole("alert");
-    await alert.filter({ hasText: "That reading is a percentage; this check needs a length, such as 0.05 mm." }).waitFor();
+    await alert
+      .filter({ hasText: "That reading is a percentage; this check needs a length, such as 0.05 mm." })
+      .waitFor();
     // The message sits at the field it is about, not at the top of the plan.
     const [f, a] = [await field.boundingBox(), await alert.boundingBox()];
     expect(Math.abs(a!.y - f!.y)).toBeLessThan(200);
@@ -150,24 +177,43 @@ describe("the workshop's units and the why", () => {
     const { id } = await freshCase("Squeal when braking? No, a judder.");
     const c = await loadCaseForChange(db, await member("priya-hale"), id);
     const priya = await member("priya-hale");
-    await recordObservation(db, priya, c, { symptomId: symptom("squeal_braking"), present: false, source: "technician" });
-    await recordObservation(db, priya, c, { symptomId: symptom("vibration_braking"), present: true, source: "technician" });
+    await recordObservation(db, priya, c, {
+      symptomId: symptom("squeal_braking"),
+      present: false,
+      source: "technician",
+    });
+    await recordObservation(db, priya, c, {
+      symptomId: symptom("vibration_braking"),
+      present: true,
+      source: "technician",
+    });
     await recordFinding(db, priya, c, { checkId: check("brake_road_test"), result: "fail" });
     await browser.clearCookies();
     const { page } = await browser.newPage();
     await signInAs(page, "priya-hale");
     await page.goto(`${baseUrl()}/cases/${id}`);
-    for (const summary of await page.locator('[aria-label="Likely causes, most likely first"] summary').all()) {
-      if (!(await summary.evaluate((s) => (s.parentElement as HTMLDetailsElement).open))) await summary.click();
+    for (const summary of await page
+      .locator('[aria-label="Likely causes, most likely first"] summary')
+      .all()) {
+      if (!(await summary.evaluate((s) => (s.parentElement as HTMLDetailsElement).open)))
+        await summary.click();
     }
     const lines = page.locator("[data-why]");
     await lines.first().waitFor();
-    const texts = await lines.evaluateAll((ls) => ls.map((l) => ({ text: l.textContent ?? "", up: l.getAttribute("data-why") === "up" })));
+    const texts = await lines.evaluateAll((ls) =>
+      ls.map((l) => ({ text: l.textContent ?? "", up: l.getAttribute("data-why") === "up" })),
+    );
     const squeal = texts.filter((t) => t.text.startsWith("Squeal when braking"));
     expect(squeal.length).toBeGreaterThan(0);
-    for (const t of squeal) expect(t.text).toMatch(/^Squeal when braking: absent(▲ makes it more likely|▼ makes it less likely)$/);
-    for (const t of texts) expect(t.text).toMatch(t.up ? /▲ makes it more likely$/ : /▼ makes it less likely$/);
-    expect(texts.some((t) => t.text === "Vibration through the steering wheel under braking: present▲ makes it more likely")).toBe(true);
+    for (const t of squeal)
+      expect(t.text).toMatch(/^Squeal when braking: absent(▲ makes it more likely|▼ makes it less likely)$/);
+    for (const t of texts)
+      expect(t.text).toMatch(t.up ? /▲ makes it more likely$/ : /▼ makes it less likely$/);
+    expect(
+      texts.some(
+        (t) => t.text === "Vibration through the steering wheel under braking: present▲ makes it more likely",
+      ),
+    ).toBe(true);
     expect(texts.some((t) => t.text.startsWith("Road test the brakes from speed: failed"))).toBe(true);
     await expect(page.getByText("Points to it").count()).resolves.toBe(0);
     await page.close();
@@ -197,7 +243,11 @@ describe("each person's screen", () => {
     const { id } = await freshCase("Grinding from the front.");
     const priya = await member("priya-hale");
     const c = await loadCaseForChange(db, priya, id);
-    await conclude(db, priya, c, { causeId: cause("brake_pads_metal"), notes: "Pads to the backing plate.", version: c.version });
+    await conclude(db, priya, c, {
+      causeId: cause("brake_pads_metal"),
+      notes: "Pads to the backing plate.",
+      version: c.version,
+    });
     await browser.clearCookies();
     const { page, errors } = await browser.newPage();
     await signInAs(page, "tomas-varga");
@@ -208,14 +258,24 @@ describe("each person's screen", () => {
     await page.getByRole("status").filter({ hasText: "Case reopened" }).waitFor();
     await page.getByRole("heading", { name: "Check plan" }).waitFor();
     await page.getByText("History").click();
-    await page.getByRole("list", { name: "Case history" }).getByText("reopened it (it was cause confirmed): “Owner reports the grinding is back after the pads.”").waitFor();
+    await page
+      .getByRole("list", { name: "Case history" })
+      .getByText("reopened it (it was cause confirmed): “Owner reports the grinding is back after the pads.”")
+      .waitFor();
 
     const again = await loadCaseForChange(db, priya, id);
-    await conclude(db, priya, again, { causeId: cause("brake_disc_corrosion"), notes: "Disc scored; replaced.", version: again.version });
+    await conclude(db, priya, again, {
+      causeId: cause("brake_disc_corrosion"),
+      notes: "Disc scored; replaced.",
+      version: again.version,
+    });
     await page.reload();
     await page.getByRole("button", { name: "Close the case" }).click();
     await page.getByRole("status").filter({ hasText: "Case closed." }).waitFor();
-    const [row] = await db.select({ state: cases.state, closedAt: cases.closedAt }).from(cases).where(eq(cases.id, id));
+    const [row] = await db
+      .select({ state: cases.state, closedAt: cases.closedAt })
+      .from(cases)
+      .where(eq(cases.id, id));
     expect(row.state).toBe("closed");
     expect(row.closedAt).not.toBeNull();
     expect(errors).toEqual([]);
@@ -228,7 +288,9 @@ describe("each person's screen", () => {
     const ollie = await browser.newPage();
     await signInAs(ollie.page, "ollie-mbeki");
     await ollie.page.goto(`${baseUrl()}/cases/${id}`);
-    await ollie.page.getByLabel("What do you need help with?").fill("Is a glazed pad enough to squeal like this?");
+    await ollie.page
+      .getByLabel("What do you need help with?")
+      .fill("Is a glazed pad enough to squeal like this?");
     await ollie.page.getByRole("button", { name: "Ask a senior" }).click();
     await ollie.page.getByRole("status").filter({ hasText: "A senior has been asked." }).waitFor();
     await ollie.page.getByText("Send for a senior's sign-off…").click();
@@ -239,18 +301,29 @@ describe("each person's screen", () => {
     await browser.clearCookies();
     const tomas = await browser.newPage();
     await signInAs(tomas.page, "tomas-varga");
-    const card = tomas.page.getByRole("region", { name: /Needs a senior/ }).getByRole("article").filter({ hasText: `#${number}` });
+    const card = tomas.page
+      .getByRole("region", { name: /Needs a senior/ })
+      .getByRole("article")
+      .filter({ hasText: `#${number}` });
     await card.getByText("Ollie Mbeki asks: “Is a glazed pad enough to squeal like this?”").waitFor();
     await tomas.page.goto(`${baseUrl()}/cases/${id}`);
-    await tomas.page.getByTestId("question").filter({ hasText: "Is a glazed pad enough to squeal like this?" }).waitFor();
-    await tomas.page.getByLabel("Note for the apprentice").fill("Yes: glazing sings. Check the shims next time.");
+    await tomas.page
+      .getByTestId("question")
+      .filter({ hasText: "Is a glazed pad enough to squeal like this?" })
+      .waitFor();
+    await tomas.page
+      .getByLabel("Note for the apprentice")
+      .fill("Yes: glazing sings. Check the shims next time.");
     await tomas.page.getByRole("button", { name: "Sign off" }).click();
     await tomas.page.getByRole("status").filter({ hasText: "Signed off." }).waitFor();
 
     await browser.clearCookies();
     await signInAs(ollie.page, "ollie-mbeki");
     await ollie.page.goto(`${baseUrl()}/cases/${id}`);
-    await ollie.page.getByTestId("senior-note").filter({ hasText: "Note from Tomas Varga: “Yes: glazing sings. Check the shims next time.”" }).waitFor();
+    await ollie.page
+      .getByTestId("senior-note")
+      .filter({ hasText: "Note from Tomas Varga: “Yes: glazing sings. Check the shims next time.”" })
+      .waitFor();
     expect([...ollie.errors, ...tomas.errors]).toEqual([]);
     await ollie.page.close();
     await tomas.page.close();
@@ -269,7 +342,10 @@ describe("each person's screen", () => {
       expect(t).not.toMatch(/[{}]|"[a-z]+":/);
       expect(t).not.toMatch(/\bcase\.[a-z_]+\b/);
     }
-    await page.getByRole("link", { name: /^case #\d+$/ }).first().click();
+    await page
+      .getByRole("link", { name: /^case #\d+$/ })
+      .first()
+      .click();
     await page.waitForURL(/\/cases\/[0-9a-f-]{36}$/);
     expect(errors).toEqual([]);
     await page.close();
@@ -285,9 +361,15 @@ describe("the apprentice on a phone", () => {
     const { page, errors } = await browser.newPage();
     await signInAs(page, "ollie-mbeki");
     await page.goto(`${baseUrl()}/cases/${id}`);
-    const y = async (name: string) => (await page.getByRole("heading", { name, exact: true }).boundingBox())!.y;
+    const y = async (name: string) =>
+      (await page.getByRole("heading", { name, exact: true }).boundingBox())!.y;
     await page.getByRole("heading", { name: "Your next check" }).waitFor();
-    const order = [await y("Your next check"), await y("Not sure?"), await y("Evidence"), await y("Likely causes")];
+    const order = [
+      await y("Your next check"),
+      await y("Not sure?"),
+      await y("Evidence"),
+      await y("Likely causes"),
+    ];
     expect([...order].sort((a, b) => a - b)).toEqual(order);
     // Checks beyond the apprentice's level are one line, not sixty rows before the evidence.
     await expect(page.getByRole("list", { name: "Checks beyond your level" }).count()).resolves.toBe(0);
@@ -297,7 +379,8 @@ describe("the apprentice on a phone", () => {
     expect(header.height).toBeLessThanOrEqual(120);
     // WCAG 2.2 target size: the disclosure summaries are at least 24 px tall; ours are 44.
     for (const s of await page.locator("summary").all()) {
-      if (await s.isVisible()) expect((await s.boundingBox())!.height, await s.textContent() ?? "").toBeGreaterThanOrEqual(44);
+      if (await s.isVisible())
+        expect((await s.boundingBox())!.height, (await s.textContent()) ?? "").toBeGreaterThanOrEqual(44);
     }
     await expect(page.getByText("next check ·").isVisible()).resolves.toBe(false); // keyboard hints are for the desk
     const width = await page.evaluate(() => document.documentElement.scrollWidth);

@@ -8,14 +8,21 @@ describe("landing page", () => {
     const { page, errors } = await browser.newPage();
     const res = await page.goto(`${baseUrl()}/`);
     expect(res?.status()).toBe(200);
-    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toMatch(/complaint to a confirmed cause/);
+    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toMatch(
+      /complaint to a confirmed cause/,
+    );
     await page.evaluate(() => document.fonts.ready);
     const family = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
     expect(family).toMatch(/^"?IBM Plex Sans/);
     const loaded = await page.evaluate(() => document.fonts.check('18px "IBM Plex Sans"'));
     expect(loaded).toBe(true);
     // The font files come from our own origin, not a CDN.
-    const fontUrls = await page.evaluate(() => performance.getEntriesByType("resource").map((e) => e.name).filter((n) => /\.woff2?/.test(n)));
+    const fontUrls = await page.evaluate(() =>
+      performance
+        .getEntriesByType("resource")
+        .map((e) => e.name)
+        .filter((n) => /\.woff2?/.test(n)),
+    );
     expect(fontUrls.length).toBeGreaterThan(0);
     for (const u of fontUrls) expect(new URL(u).origin).toBe(baseUrl());
     expect(errors).toEqual([]);
@@ -58,7 +65,9 @@ describe("landing page", () => {
     const { page } = await browser.newPage();
     await page.setViewportSize({ width: 375, height: 740 });
     await page.goto(`${baseUrl()}/`);
-    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    const overflow = await page.evaluate(
+      () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
+    );
     expect(overflow).toBeLessThanOrEqual(0);
     const button = await page.getByRole("button", { name: "Sign in" }).boundingBox();
     expect(button!.height).toBeGreaterThanOrEqual(44); // touch target, WCAG 2.2 SC 2.5.5 (AAA) size

@@ -32,12 +32,17 @@ describe("an admin manages the workshop's members", () => {
     await page.getByRole("button", { name: "Send invitation" }).click();
     // The message sits at the field it concerns, which names it.
     await page.getByText("That e-mail address does not look right").waitFor();
-    await expect(page.getByLabel("E-mail or GitHub login").getAttribute("aria-invalid")).resolves.toBe("true");
+    await expect(page.getByLabel("E-mail or GitHub login").getAttribute("aria-invalid")).resolves.toBe(
+      "true",
+    );
 
     await page.getByLabel("E-mail or GitHub login").fill("new.tech@mail.example");
     await page.getByLabel("Role", { exact: true }).selectOption("technician");
     await page.getByRole("button", { name: "Send invitation" }).click();
-    await page.getByRole("status").filter({ hasText: "Invitation e-mailed to new.tech@mail.example" }).waitFor();
+    await page
+      .getByRole("status")
+      .filter({ hasText: "Invitation e-mailed to new.tech@mail.example" })
+      .waitFor();
     const mail = await waitForMail("new.tech@mail.example");
     expect(mail.subject).toBe("You are invited to Bramblegate Motor Works on Ramplight");
     expect(mail.text).toContain(`${baseUrl()}/sign-in`);
@@ -67,7 +72,10 @@ describe("an admin manages the workshop's members", () => {
     await page.goto(`${baseUrl()}/settings/audit`);
     // In words, naming who was changed (app/audit/describe.ts).
     await page.getByText("changed Priya Hale's role from senior technician to technician").first().waitFor();
-    await page.getByText(/invited .+ as /).first().waitFor();
+    await page
+      .getByText(/invited .+ as /)
+      .first()
+      .waitFor();
     // The refused invitation (400) and the refused demotion (409) are the only failed loads.
     expect(errors.filter((e) => !/status of (400|409)/.test(e))).toEqual([]);
     expect(errors).toHaveLength(2);
@@ -106,7 +114,10 @@ describe("an admin manages the workshop's members", () => {
     await browser.clearCookies();
     await signInAs(admin.page, "ines-okafor");
     await admin.page.goto(`${baseUrl()}/settings/members`);
-    await admin.page.getByRole("listitem", { name: "Dana Reyes" }).getByRole("button", { name: "Reactivate" }).click();
+    await admin.page
+      .getByRole("listitem", { name: "Dana Reyes" })
+      .getByRole("button", { name: "Reactivate" })
+      .click();
     await admin.page.getByRole("status").filter({ hasText: "Member reactivated" }).waitFor();
     await page.close();
     await admin.page.close();

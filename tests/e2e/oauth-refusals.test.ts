@@ -26,7 +26,9 @@ describe("OAuth refusals (OWASP ASVS 5.0 V10.2.1)", () => {
     const res = await callback(back, stateCookie);
     expect(res.status).toBe(400);
     expect(await res.text()).toContain("security check on its state failed");
-    expect(res.headers.getSetCookie().some((c) => c.startsWith("rl_session=") && !c.includes("Max-Age=0"))).toBe(false);
+    expect(
+      res.headers.getSetCookie().some((c) => c.startsWith("rl_session=") && !c.includes("Max-Age=0")),
+    ).toBe(false);
   });
 
   it("refuses a callback whose state cookie is missing", async () => {
@@ -43,7 +45,10 @@ describe("OAuth refusals (OWASP ASVS 5.0 V10.2.1)", () => {
       expect(res.status, search).toBe(400);
       expect(res.headers.get("location"), search).toBeNull();
       expect(await res.text(), search).toContain("return address is incomplete");
-      expect(res.headers.getSetCookie().some((c) => c.startsWith("rl_session=")), search).toBe(false);
+      expect(
+        res.headers.getSetCookie().some((c) => c.startsWith("rl_session=")),
+        search,
+      ).toBe(false);
     }
   });
 
@@ -68,7 +73,11 @@ describe("OAuth refusals (OWASP ASVS 5.0 V10.2.1)", () => {
     const { authorize, stateCookie } = await startSignIn();
     const form = new URLSearchParams(authorize.searchParams);
     form.set("decision", "deny");
-    const denied = await fetch(`${provider}/login/oauth/authorize`, { method: "POST", body: form, redirect: "manual" });
+    const denied = await fetch(`${provider}/login/oauth/authorize`, {
+      method: "POST",
+      body: form,
+      redirect: "manual",
+    });
     const res = await callback(new URL(denied.headers.get("location")!), stateCookie);
     expect(res.status).toBe(400);
     expect(await res.text()).toContain("cancelled");

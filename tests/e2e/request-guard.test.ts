@@ -25,11 +25,29 @@ beforeAll(async () => {
   apprentice = await sessionCookie("ollie-mbeki");
 });
 
-const settingsForm = (name: string) => new URLSearchParams({ name, currency: "GBP", taxRatePercent: "20", units: "metric", labourRatePerHour: "84" });
-const workshop = async () => (await db.select({ name: workshops.name, labour: workshops.labourRatePerHour }).from(workshops).where(eq(workshops.slug, "bramblegate")))[0];
+const settingsForm = (name: string) =>
+  new URLSearchParams({
+    name,
+    currency: "GBP",
+    taxRatePercent: "20",
+    units: "metric",
+    labourRatePerHour: "84",
+  });
+const workshop = async () =>
+  (
+    await db
+      .select({ name: workshops.name, labour: workshops.labourRatePerHour })
+      .from(workshops)
+      .where(eq(workshops.slug, "bramblegate"))
+  )[0];
 
 /** A raw request, so the path is sent exactly as written and the body can be cut short. */
-function raw(method: string, path: string, headers: Record<string, string | number>, body = ""): Promise<{ status: number; headers: http.IncomingHttpHeaders; text: string }> {
+function raw(
+  method: string,
+  path: string,
+  headers: Record<string, string | number>,
+  body = "",
+): Promise<{ status: number; headers: http.IncomingHttpHeaders; text: string }> {
   const { hostname, port } = new URL(base);
   return new Promise((resolve, reject) => {
     const req = http.request({ host: hostname, port, method, path, headers, setHost: true }, (res) => {
@@ -47,7 +65,12 @@ describe("writes come from our own pages", () => {
     const before = await workshop();
     const body = settingsForm("Hijacked").toString();
     for (const origin of ["http://127.0.0.1:4403", base]) {
-      const res = await raw("POST", "//127.0.0.1:4403/settings", { cookie: admin, origin, "content-type": FORM, "content-length": Buffer.byteLength(body) }, body);
+      const res = await raw(
+        "POST",
+        "//127.0.0.1:4403/settings",
+        { cookie: admin, origin, "content-type": FORM, "content-length": Buffer.byteLength(body) },
+        body,
+      );
       expect(res.status, origin).toBe(400);
       expect(JSON.parse(res.text).error).toMatch(/two slashes/);
     }
@@ -61,10 +84,20 @@ describe("writes come from our own pages", () => {
   it("checks the Origin of every write against APP_URL, not against the request's own address", async () => {
     const before = await workshop();
     for (const origin of ["http://127.0.0.1:4403", "http://evil.example", "null"]) {
-      const res = await fetch(`${base}/settings`, { method: "POST", redirect: "manual", headers: { cookie: admin, origin, "content-type": FORM }, body: settingsForm("Hijacked") });
+      const res = await fetch(`${base}/settings`, {
+        method: "POST",
+        redirect: "manual",
+        headers: { cookie: admin, origin, "content-type": FORM },
+        body: settingsForm("Hijacked"),
+      });
       // The framework's own check on document posts may answer first (400); ours answers 403.
       expect([400, 403], origin).toContain(res.status);
-      const data = await fetch(`${base}/settings.data`, { method: "POST", redirect: "manual", headers: { cookie: admin, origin, "content-type": FORM }, body: settingsForm("Hijacked") });
+      const data = await fetch(`${base}/settings.data`, {
+        method: "POST",
+        redirect: "manual",
+        headers: { cookie: admin, origin, "content-type": FORM },
+        body: settingsForm("Hijacked"),
+      });
       expect([400, 403], `${origin} (data request)`).toContain(data.status);
     }
     expect(await workshop()).toEqual(before);
@@ -72,9 +105,18 @@ describe("writes come from our own pages", () => {
 
   it("refuses a sign-out from another site: the person stays signed in", async () => {
     const cookie = await sessionCookie("tomas-varga");
-    const attempts: Record<string, string>[] = [{ origin: "http://evil.example" }, { "sec-fetch-site": "cross-site" }, {}];
+    const attempts: Record<string, string>[] = [
+      { origin: "http://evil.example" },
+      { "sec-fetch-site": "cross-site" },
+      {},
+    ];
     for (const headers of attempts) {
-      const res = await fetch(`${base}/sign-out`, { method: "POST", redirect: "manual", headers: { cookie, "content-type": FORM, ...headers }, body: new URLSearchParams({ scope: "everywhere" }) });
+      const res = await fetch(`${base}/sign-out`, {
+        method: "POST",
+        redirect: "manual",
+        headers: { cookie, "content-type": FORM, ...headers },
+        body: new URLSearchParams({ scope: "everywhere" }),
+      });
       expect(res.status, JSON.stringify(headers)).toBe(403);
     }
     const board = await fetch(`${base}/board`, { redirect: "manual", headers: { cookie } });
@@ -87,11 +129,20 @@ describe("bodies are limited by route before they are read", () => {
     const { hostname, port } = new URL(base);
     const started = Date.now();
     const status = await new Promise<number>((resolve, reject) => {
-      const req = http.request({ host: hostname, port, method: "POST", path: "/sign-out", headers: { origin: base, "content-type": FORM, "content-length": 300 * 1024 * 1024 } }, (res) => {
-        res.resume();
-        resolve(res.statusCode!);
-        req.destroy();
-      });
+      const req = http.request(
+        {
+          host: hostname,
+          port,
+          method: "POST",
+          path: "/sign-out",
+          headers: { origin: base, "content-type": FORM, "content-length": 300 * 1024 * 1024 },
+        },
+        (res) => {
+          res.resume();
+          resolve(res.statusCode!);
+          req.destroy();
+        },
+      );
       req.on("error", (e) => ((e as NodeJS.ErrnoException).code === "ECONNRESET" ? undefined : reject(e)));
       req.write(Buffer.alloc(64 * 1024, 0x61)); // a first chunk; the answer comes without the rest
     });
@@ -112,10 +163,19 @@ describe("bodies are limited by route before they are read", () => {
   it("refuses a chunked body without a length (411)", async () => {
     const { hostname, port } = new URL(base);
     const status = await new Promise<number>((resolve, reject) => {
-      const req = http.request({ host: hostname, port, method: "POST", path: "/settings", headers: { cookie: admin, origin: base, "content-type": FORM, "transfer-encoding": "chunked" } }, (res) => {
-        res.resume();
-        resolve(res.statusCode!);
-      });
+      const req = http.request(
+        {
+          host: hostname,
+          port,
+          method: "POST",
+          path: "/settings",
+          headers: { cookie: admin, origin: base, "content-type": FORM, "transfer-encoding": "chunked" },
+        },
+        (res) => {
+          res.resume();
+          resolve(res.statusCode!);
+        },
+      );
       req.on("error", reject);
       req.end(settingsForm("Chunked").toString());
     });
@@ -134,7 +194,12 @@ describe("a client's mistake is a 4xx, never a 5xx, and changes nothing", () => 
       ["/sign-out", "", ""],
     ];
     for (const [path, type, body] of posts) {
-      const res = await fetch(`${base}${path}`, { method: "POST", redirect: "manual", headers: { cookie: admin, origin: base, ...(type ? { "content-type": type } : {}) }, body });
+      const res = await fetch(`${base}${path}`, {
+        method: "POST",
+        redirect: "manual",
+        headers: { cookie: admin, origin: base, ...(type ? { "content-type": type } : {}) },
+        body,
+      });
       expect(res.status, `${path} ${type}`).toBe(415);
       expect(await res.text(), path).toMatch(/takes a form/);
     }
@@ -143,7 +208,12 @@ describe("a client's mistake is a 4xx, never a 5xx, and changes nothing", () => 
 
   it("a NUL byte in a form, a JSON body or the query answers 400 and stores nothing", async () => {
     const before = await workshop();
-    const form = await fetch(`${base}/settings`, { method: "POST", redirect: "manual", headers: { cookie: admin, origin: base, "content-type": FORM }, body: settingsForm("Evil\u0000Works") });
+    const form = await fetch(`${base}/settings`, {
+      method: "POST",
+      redirect: "manual",
+      headers: { cookie: admin, origin: base, "content-type": FORM },
+      body: settingsForm("Evil\u0000Works"),
+    });
     expect(form.status).toBe(400);
     expect(await workshop()).toEqual(before);
     const json = await fetch(`${base}/api/cases/${OPEN_CASE}/observations`, {
@@ -168,7 +238,11 @@ describe("a client's mistake is a 4xx, never a 5xx, and changes nothing", () => 
       checks: Array.from({ length: n }, (_, i) => ({ id: `k${i}`, cost: 1, falseAlarm: 1, bears: [] })),
     };
     const send = (m: unknown) =>
-      fetch(`${base}/api/what-if`, { method: "POST", headers: { cookie: apprentice, origin: base, "content-type": "application/json" }, body: JSON.stringify({ model: m, evidence: { observations: [], findings: [] } }) });
+      fetch(`${base}/api/what-if`, {
+        method: "POST",
+        headers: { cookie: apprentice, origin: base, "content-type": "application/json" },
+        body: JSON.stringify({ model: m, evidence: { observations: [], findings: [] } }),
+      });
     const started = Date.now();
     const res = await send(model);
     expect(res.status).toBe(413);
@@ -187,7 +261,9 @@ describe("a client's mistake is a 4xx, never a 5xx, and changes nothing", () => 
         return { status: r.status, ms: Date.now() - t1 };
       }),
     ]);
-    console.log(`capped worst-case what-if: ${answer.ms} ms; another person's request meanwhile: ${other.ms} ms`);
+    console.log(
+      `capped worst-case what-if: ${answer.ms} ms; another person's request meanwhile: ${other.ms} ms`,
+    );
     expect(answer.status).toBe(200);
     expect(answer.body.plan.steps).toHaveLength(2_500);
     expect(other.status).toBe(200);

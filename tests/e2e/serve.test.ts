@@ -48,7 +48,11 @@ describe("the production server", () => {
   });
 
   it("never serves a file from outside the client build (path traversal)", async () => {
-    for (const path of ["/assets/..%2f..%2fserver%2findex.js", "/assets/%2e%2e/%2e%2e/package.json", "/..%2fpackage.json"]) {
+    for (const path of [
+      "/assets/..%2f..%2fserver%2findex.js",
+      "/assets/%2e%2e/%2e%2e/package.json",
+      "/..%2fpackage.json",
+    ]) {
       const res = await fetch(`${baseUrl()}${path}`);
       expect([400, 403, 404], path).toContain(res.status);
       const body = await res.text();
@@ -64,12 +68,30 @@ describe("the caller's address reaches the sign-in rate limit", () => {
       const bucket = "ip:127.0.0.1"; // the browser tests and this fetch all come from loopback
       // Counted from now on: the limiter clears old rows as it goes, so a total could shrink.
       const since = new Date(Date.now() - 1000);
-      const recent = async () => (await db.select({ n: count() }).from(signInAttempts).where(and(eq(signInAttempts.bucket, bucket), gt(signInAttempts.at, since))))[0].n;
+      const recent = async () =>
+        (
+          await db
+            .select({ n: count() })
+            .from(signInAttempts)
+            .where(and(eq(signInAttempts.bucket, bucket), gt(signInAttempts.at, since)))
+        )[0].n;
       const before = await recent();
-      const res = await fetch(`${baseUrl()}/auth/github`, { method: "POST", redirect: "manual", headers: { origin: baseUrl() }, body: new URLSearchParams() });
+      const res = await fetch(`${baseUrl()}/auth/github`, {
+        method: "POST",
+        redirect: "manual",
+        headers: { origin: baseUrl() },
+        body: new URLSearchParams(),
+      });
       expect(res.status).toBe(302);
       expect(await recent()).toBe(before + 1);
-      expect((await db.select({ n: count() }).from(signInAttempts).where(and(eq(signInAttempts.bucket, "ip:direct"), gt(signInAttempts.at, since))))[0].n).toBe(0);
+      expect(
+        (
+          await db
+            .select({ n: count() })
+            .from(signInAttempts)
+            .where(and(eq(signInAttempts.bucket, "ip:direct"), gt(signInAttempts.at, since)))
+        )[0].n,
+      ).toBe(0);
     } finally {
       await pool.end();
     }

@@ -4,7 +4,12 @@ import { DEMO_PEOPLE } from "../../seeds/demo/people";
 import { baseUrl, signInAs, signOut, useBrowser } from "./browser";
 
 const browser = useBrowser();
-const AREA_HEADINGS: Record<string, string> = { "/board": "Board", "/cases": "Cases", "/settings": "Workshop settings", "/kb": "Knowledge base" };
+const AREA_HEADINGS: Record<string, string> = {
+  "/board": "Board",
+  "/cases": "Cases",
+  "/settings": "Workshop settings",
+  "/kb": "Knowledge base",
+};
 
 describe("sign-in round trip against the fake provider", () => {
   for (const person of DEMO_PEOPLE.filter((p) => p.workshop === "bramblegate")) {
@@ -62,7 +67,10 @@ describe("sign-in round trip against the fake provider", () => {
     await page.waitForURL(`${baseUrl()}/settings`);
     await page.getByRole("heading", { level: 1, name: "Workshop settings" }).waitFor();
     await expect(page.getByLabel("Name", { exact: true }).inputValue()).resolves.toBe("Newcomer Test Bay");
-    await page.getByRole("navigation", { name: "Areas" }).getByRole("link", { name: "Knowledge base" }).click();
+    await page
+      .getByRole("navigation", { name: "Areas" })
+      .getByRole("link", { name: "Knowledge base" })
+      .click();
     await page.waitForURL(`${baseUrl()}/kb`);
     await page.getByRole("heading", { level: 1, name: "Knowledge base" }).waitFor();
     // The starter knowledge base came with the new workshop.

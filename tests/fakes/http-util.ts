@@ -78,7 +78,12 @@ export async function readParams(req: IncomingMessage): Promise<Record<string, s
   return Object.fromEntries(new URLSearchParams(raw));
 }
 
-export function sendJson(res: ServerResponse, status: number, body: unknown, headers: Record<string, string> = {}): void {
+export function sendJson(
+  res: ServerResponse,
+  status: number,
+  body: unknown,
+  headers: Record<string, string> = {},
+): void {
   const text = JSON.stringify(body);
   res.writeHead(status, {
     "content-type": "application/json; charset=utf-8",

@@ -56,10 +56,13 @@ function qpToBytes(input: string, underscoreIsSpace: boolean): Uint8Array {
 export function decodeWords(value: string): string {
   return value
     .replace(/(=\?[^?]+\?[BbQq]\?[^?]*\?=)\s+(?==\?)/g, "$1")
-    .replace(/=\?([^?*]+)(?:\*[^?]+)?\?([BbQq])\?([^?]*)\?=/g, (_all, charset: string, enc: string, data: string) => {
-      const bytes = enc.toUpperCase() === "B" ? Buffer.from(data, "base64") : qpToBytes(data, true);
-      return decodeCharset(bytes, charset);
-    });
+    .replace(
+      /=\?([^?*]+)(?:\*[^?]+)?\?([BbQq])\?([^?]*)\?=/g,
+      (_all, charset: string, enc: string, data: string) => {
+        const bytes = enc.toUpperCase() === "B" ? Buffer.from(data, "base64") : qpToBytes(data, true);
+        return decodeCharset(bytes, charset);
+      },
+    );
 }
 
 function headerParams(value: string): { value: string; params: Record<string, string> } {
@@ -68,7 +71,10 @@ function headerParams(value: string): { value: string; params: Record<string, st
   for (const part of rest) {
     const eq = part.indexOf("=");
     if (eq < 0) continue;
-    params[part.slice(0, eq).trim().toLowerCase()] = part.slice(eq + 1).trim().replace(/^"(.*)"$/, "$1");
+    params[part.slice(0, eq).trim().toLowerCase()] = part
+      .slice(eq + 1)
+      .trim()
+      .replace(/^"(.*)"$/, "$1");
   }
   return { value: (first ?? "").trim().toLowerCase(), params };
 }
@@ -94,7 +100,11 @@ function walk(raw: string, found: { text: string | null; html: string | null }):
     }
   } else if (disposition !== "attachment") {
     // Line breaks are CRLF on the wire; callers compare with what the app passed in (LF).
-    const decoded = decodeBody(body, headers["content-transfer-encoding"] ?? "7bit", type.params.charset ?? "utf-8").replace(/\r\n/g, "\n");
+    const decoded = decodeBody(
+      body,
+      headers["content-transfer-encoding"] ?? "7bit",
+      type.params.charset ?? "utf-8",
+    ).replace(/\r\n/g, "\n");
     if (type.value === "text/plain" && found.text === null) found.text = decoded;
     if (type.value === "text/html" && found.html === null) found.html = decoded;
   }

@@ -56,13 +56,17 @@ export async function startFakeOAuthProvider(opts: FakeOAuthOptions): Promise<Fa
   const userByLogin = (login: string | undefined) => opts.users.find((u) => u.login === login);
 
   // Shared by GET (render) and POST (decide), because the POSTed hidden fields can be edited.
-  type Checked = { ok: true; fields: ConsentFields } | { ok: false; page: string } | { ok: false; redirectTo: URL };
+  type Checked =
+    { ok: true; fields: ConsentFields } | { ok: false; page: string } | { ok: false; redirectTo: URL };
   function checkAuthorize(p: Record<string, string | undefined>): Checked {
     const client = clientById(p.client_id);
     if (!client) return { ok: false, page: `Unknown client_id "${p.client_id ?? ""}".` };
     if (!p.redirect_uri) return { ok: false, page: "redirect_uri is missing; this fake requires it." };
     if (!client.redirectUris.includes(p.redirect_uri)) {
-      return { ok: false, page: `redirect_uri "${p.redirect_uri}" does not exactly match a URI registered for this client.` };
+      return {
+        ok: false,
+        page: `redirect_uri "${p.redirect_uri}" does not exactly match a URI registered for this client.`,
+      };
     }
     // From here on the redirect URI is trusted, so protocol errors go back to the app (§4.1.2.1).
     const back = (error: string) => {
@@ -71,15 +75,22 @@ export async function startFakeOAuthProvider(opts: FakeOAuthOptions): Promise<Fa
       if (p.state) to.searchParams.set("state", p.state);
       return { ok: false as const, redirectTo: to };
     };
-    if (!p.state) return { ok: false, page: "state is missing: the app must send one to protect sign-in against CSRF." };
+    if (!p.state)
+      return { ok: false, page: "state is missing: the app must send one to protect sign-in against CSRF." };
     if (p.response_type !== undefined && p.response_type !== "code") return back("unsupported_response_type");
     let method = p.code_challenge_method;
-    if (p.code_challenge) method ??= "plain"; // RFC 7636 §4.3 default
+    if (p.code_challenge)
+      method ??= "plain"; // RFC 7636 §4.3 default
     else if (method) return back("invalid_request");
     if (method !== undefined && method !== "S256" && method !== "plain") return back("invalid_request");
-    const fields: ConsentFields = { client_id: client.clientId, redirect_uri: p.redirect_uri, state: p.state };
+    const fields: ConsentFields = {
+      client_id: client.clientId,
+      redirect_uri: p.redirect_uri,
+      state: p.state,
+    };
     if (p.scope) fields.scope = p.scope;
-    if (p.code_challenge) Object.assign(fields, { code_challenge: p.code_challenge, code_challenge_method: method });
+    if (p.code_challenge)
+      Object.assign(fields, { code_challenge: p.code_challenge, code_challenge_method: method });
     return { ok: true, fields };
   }
 
@@ -132,22 +143,36 @@ export async function startFakeOAuthProvider(opts: FakeOAuthOptions): Promise<Fa
       const id = decoded.slice(0, colon);
       const secret = decoded.slice(colon + 1);
       const client = clientById(id) ?? clientById(safeDecode(id));
-      const ok = colon > 0 && client && (client.clientSecret === secret || client.clientSecret === safeDecode(secret));
+      const ok =
+        colon > 0 && client && (client.clientSecret === secret || client.clientSecret === safeDecode(secret));
       return { client: ok ? client : undefined, usedBasic: true };
     }
     const client = clientById(body.client_id);
-    return { client: client && client.clientSecret === body.client_secret ? client : undefined, usedBasic: false };
+    return {
+      client: client && client.clientSecret === body.client_secret ? client : undefined,
+      usedBasic: false,
+    };
   }
 
   async function accessToken(req: IncomingMessage, res: ServerResponse): Promise<void> {
     const body = await readParams(req);
     const { client, usedBasic } = authenticateClient(req, body);
     if (!client) {
-      const headers: Record<string, string> = usedBasic ? { "www-authenticate": 'Basic realm="fake-oauth"' } : {};
-      return sendJson(res, 401, { error: "invalid_client", error_description: "Unknown client or wrong secret." }, headers);
+      const headers: Record<string, string> = usedBasic
+        ? { "www-authenticate": 'Basic realm="fake-oauth"' }
+        : {};
+      return sendJson(
+        res,
+        401,
+        { error: "invalid_client", error_description: "Unknown client or wrong secret." },
+        headers,
+      );
     }
     if (body.grant_type !== "authorization_code") {
-      return sendJson(res, 400, { error: "unsupported_grant_type", error_description: "Only authorization_code is supported." });
+      return sendJson(res, 400, {
+        error: "unsupported_grant_type",
+        error_description: "Only authorization_code is supported.",
+      });
     }
     const grant = body.code ? codes.get(body.code) : undefined;
     const refuse = (why: string) => sendJson(res, 400, { error: "invalid_grant", error_description: why });
@@ -159,11 +184,15 @@ export async function startFakeOAuthProvider(opts: FakeOAuthOptions): Promise<Fa
     // Burn the code on the first attempt, even a failed one, so a verifier cannot be guessed.
     grant.used = true;
     if (now() >= grant.expiresAt) return refuse("Code expired.");
-    if (body.redirect_uri !== grant.redirectUri) return refuse("redirect_uri differs from the one used to authorize.");
+    if (body.redirect_uri !== grant.redirectUri)
+      return refuse("redirect_uri differs from the one used to authorize.");
     if (grant.challenge !== undefined) {
       const verifier = body.code_verifier ?? "";
       if (!VERIFIER_FORMAT.test(verifier)) return refuse("code_verifier missing or malformed.");
-      const computed = grant.challengeMethod === "S256" ? createHash("sha256").update(verifier).digest("base64url") : verifier;
+      const computed =
+        grant.challengeMethod === "S256"
+          ? createHash("sha256").update(verifier).digest("base64url")
+          : verifier;
       if (computed !== grant.challenge) return refuse("PKCE verification failed.");
     } else if (body.code_verifier !== undefined) {
       return refuse("code_verifier sent, but no code_challenge was sent to authorize.");
@@ -172,7 +201,10 @@ export async function startFakeOAuthProvider(opts: FakeOAuthOptions): Promise<Fa
     tokens.set(token, { login: grant.login, scope: grant.scope, clientId: client.clientId });
     grant.tokens.push(token);
     // GitHub reports granted scopes comma-separated; mirror it so the app handles the real format.
-    const scope = grant.scope.split(/[\s,]+/).filter(Boolean).join(",");
+    const scope = grant.scope
+      .split(/[\s,]+/)
+      .filter(Boolean)
+      .join(",");
     sendJson(res, 200, { access_token: token, token_type: "bearer", scope });
   }
 
@@ -202,7 +234,14 @@ export async function startFakeOAuthProvider(opts: FakeOAuthOptions): Promise<Fa
     if (route === "POST /login/oauth/access_token") return accessToken(req, res);
     if (route === "GET /user") {
       const u = userFor(req, res);
-      if (u) sendJson(res, 200, { id: u.githubId, login: u.login, name: u.name, email: u.email, avatar_url: `${base}/avatars/${u.login}.svg` });
+      if (u)
+        sendJson(res, 200, {
+          id: u.githubId,
+          login: u.login,
+          name: u.name,
+          email: u.email,
+          avatar_url: `${base}/avatars/${u.login}.svg`,
+        });
       return;
     }
     if (route === "GET /user/emails") {
@@ -234,7 +273,8 @@ export async function startFakeOAuthProvider(opts: FakeOAuthOptions): Promise<Fa
     for (const [k, v] of Object.entries(extra)) form.set(k, v);
     const res = await fetch(endpoints.authorize, { method: "POST", body: form, redirect: "manual" });
     const location = res.headers.get("location");
-    if (res.status !== 302 || !location) throw new Error(`fake provider refused (${res.status}): ${await res.text()}`);
+    if (res.status !== 302 || !location)
+      throw new Error(`fake provider refused (${res.status}): ${await res.text()}`);
     return new URL(location);
   }
 

@@ -67,7 +67,9 @@ export type PayPageSession = {
 
 export function formatMoney(minorUnits: number, currency: string): string {
   try {
-    return new Intl.NumberFormat("en-GB", { style: "currency", currency: currency.toUpperCase() }).format(minorUnits / 100);
+    return new Intl.NumberFormat("en-GB", { style: "currency", currency: currency.toUpperCase() }).format(
+      minorUnits / 100,
+    );
   } catch {
     return `${(minorUnits / 100).toFixed(2)} ${currency.toUpperCase()}`;
   }
@@ -76,9 +78,15 @@ export function formatMoney(minorUnits: number, currency: string): string {
 export function renderPayPage(res: ServerResponse, s: PayPageSession): void {
   const currency = s.currency ?? "gbp";
   const rows = s.items
-    .map((it) => `<li>${escapeHtml(it.name)} × ${it.quantity}: ${escapeHtml(formatMoney(it.unitAmount * it.quantity, currency))}</li>`)
+    .map(
+      (it) =>
+        `<li>${escapeHtml(it.name)} × ${it.quantity}: ${escapeHtml(formatMoney(it.unitAmount * it.quantity, currency))}</li>`,
+    )
     .join("\n");
-  const total = s.amount_total === null ? "" : `<p><strong>Total: ${escapeHtml(formatMoney(s.amount_total, currency))}</strong></p>`;
+  const total =
+    s.amount_total === null
+      ? ""
+      : `<p><strong>Total: ${escapeHtml(formatMoney(s.amount_total, currency))}</strong></p>`;
   const open = s.status === "open";
   const actions = open
     ? `<form method="post" action="/pay/${escapeHtml(s.id)}/pay"><button type="submit">Pay</button></form>

@@ -5,7 +5,14 @@
 import { randomBytes } from "node:crypto";
 import type { IncomingMessage, ServerResponse } from "node:http";
 import { listen, readBody, redirect, sendHtml, sendJson, sendText } from "./http-util";
-import { asRecord, asString, parseBracketForm, renderPayPage, signWebhook, PAY_PAGE_TITLE } from "./payments-wire";
+import {
+  asRecord,
+  asString,
+  parseBracketForm,
+  renderPayPage,
+  signWebhook,
+  PAY_PAGE_TITLE,
+} from "./payments-wire";
 import type { FormObject, PayPageSession } from "./payments-wire";
 
 export type FakePaymentsOptions = {
@@ -39,7 +46,14 @@ export type CheckoutSession = {
   livemode: false;
 };
 
-export type WebhookDelivery = { eventId: string; type: string; attempts: number; delivered: boolean; lastStatus: number | null; lastError: string | null };
+export type WebhookDelivery = {
+  eventId: string;
+  type: string;
+  attempts: number;
+  delivered: boolean;
+  lastStatus: number | null;
+  lastError: string | null;
+};
 
 export type FakePayments = {
   url: string;
@@ -52,20 +66,28 @@ export type FakePayments = {
 };
 
 const id = (prefix: string) => `${prefix}_${randomBytes(12).toString("hex")}`;
-const stripeError = (res: ServerResponse, status: number, message: string, extra: Record<string, string> = {}) =>
-  sendJson(res, status, { error: { type: "invalid_request_error", message, ...extra } });
+const stripeError = (
+  res: ServerResponse,
+  status: number,
+  message: string,
+  extra: Record<string, string> = {},
+) => sendJson(res, status, { error: { type: "invalid_request_error", message, ...extra } });
 
 export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise<FakePayments> {
   if (opts.webhookUrl && !opts.webhookSecret) throw new Error("webhookSecret is required with webhookUrl");
   const now = opts.now ?? Date.now;
-  const sessions = new Map<string, { session: CheckoutSession; page: PayPageSession; apiVersion: string | null }>();
+  const sessions = new Map<
+    string,
+    { session: CheckoutSession; page: PayPageSession; apiVersion: string | null }
+  >();
   const idempotent = new Map<string, CheckoutSession>();
   const deliveries: WebhookDelivery[] = [];
   let base = "";
 
   function createSession(form: FormObject, apiVersion: string | null): CheckoutSession | string {
     const mode = asString(form.mode);
-    if (mode !== "payment" && mode !== "subscription" && mode !== "setup") return "mode must be payment, subscription or setup";
+    if (mode !== "payment" && mode !== "subscription" && mode !== "setup")
+      return "mode must be payment, subscription or setup";
     const items: PayPageSession["items"] = [];
     let currency = asString(form.currency)?.toLowerCase() ?? null;
     const lineItems = Array.isArray(form.line_items) ? form.line_items : [];
@@ -82,11 +104,14 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
       currency = itemCurrency;
       items.push({ name: asString(asRecord(price.product_data).name) ?? "Item", quantity, unitAmount });
     }
-    if (mode !== "setup" && items.length === 0) return "line_items is required in payment and subscription mode";
+    if (mode !== "setup" && items.length === 0)
+      return "line_items is required in payment and subscription mode";
     const total = mode === "setup" ? null : items.reduce((sum, it) => sum + it.unitAmount * it.quantity, 0);
     const created = Math.floor(now() / 1000);
     const sessionId = `cs_test_${randomBytes(24).toString("hex")}`;
-    const metadata = Object.fromEntries(Object.entries(asRecord(form.metadata)).map(([k, v]) => [k, asString(v) ?? ""]));
+    const metadata = Object.fromEntries(
+      Object.entries(asRecord(form.metadata)).map(([k, v]) => [k, asString(v) ?? ""]),
+    );
     const session: CheckoutSession = {
       id: sessionId,
       object: "checkout.session",
@@ -111,7 +136,11 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
     return session;
   }
 
-  async function deliver(type: string, object: CheckoutSession, apiVersion: string | null): Promise<WebhookDelivery | null> {
+  async function deliver(
+    type: string,
+    object: CheckoutSession,
+    apiVersion: string | null,
+  ): Promise<WebhookDelivery | null> {
     if (!opts.webhookUrl || !opts.webhookSecret) return null;
     const event = {
       id: id("evt_test"),
@@ -125,7 +154,14 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
       type,
     };
     const body = JSON.stringify(event, null, 2);
-    const record: WebhookDelivery = { eventId: event.id, type, attempts: 0, delivered: false, lastStatus: null, lastError: null };
+    const record: WebhookDelivery = {
+      eventId: event.id,
+      type,
+      attempts: 0,
+      delivered: false,
+      lastStatus: null,
+      lastError: null,
+    };
     deliveries.push(record);
     const attempts = Math.max(1, opts.webhookAttempts ?? 3);
     let delay = opts.retryDelayMs ?? 200;
@@ -140,7 +176,11 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
         const signature = signWebhook(body, opts.webhookSecret, Math.floor(now() / 1000));
         const res = await fetch(opts.webhookUrl, {
           method: "POST",
-          headers: { "content-type": "application/json; charset=utf-8", "stripe-signature": signature, "user-agent": "Ramplight-fake-payments/1.0" },
+          headers: {
+            "content-type": "application/json; charset=utf-8",
+            "stripe-signature": signature,
+            "user-agent": "Ramplight-fake-payments/1.0",
+          },
           body,
           signal: AbortSignal.timeout(5000),
         });
@@ -160,7 +200,10 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
     const entry = sessions.get(sessionId);
     if (!entry) throw new Error(`No such checkout.session: '${sessionId}'`);
     if (entry.session.status !== "open") return null; // paying twice must not send a second event
-    Object.assign(entry.session, { status: "complete", payment_intent: entry.session.mode === "payment" ? id("pi_test") : null });
+    Object.assign(entry.session, {
+      status: "complete",
+      payment_intent: entry.session.mode === "payment" ? id("pi_test") : null,
+    });
     if (entry.session.payment_status === "unpaid") entry.session.payment_status = "paid";
     Object.assign(entry.page, { status: entry.session.status, payment_status: entry.session.payment_status });
     return deliver("checkout.session.completed", { ...entry.session }, entry.apiVersion);
@@ -170,12 +213,17 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
     const key = /^Bearer\s+(\S+)$/i.exec(req.headers.authorization ?? "")?.[1];
     if (!key) return stripeError(res, 401, "You did not provide an API key.");
     // A live key here means the app is misconfigured; refuse loudly instead of pretending.
-    if (!key.startsWith("sk_test_") && !key.startsWith("rk_test_")) return stripeError(res, 401, "The payments fake accepts test keys only.");
+    if (!key.startsWith("sk_test_") && !key.startsWith("rk_test_"))
+      return stripeError(res, 401, "The payments fake accepts test keys only.");
     res.setHeader("request-id", id("req"));
     const one = /^\/v1\/checkout\/sessions\/([^/]+)$/.exec(path);
     if (req.method === "GET" && one) {
       const entry = sessions.get(decodeURIComponent(one[1]!));
-      if (!entry) return stripeError(res, 404, `No such checkout.session: '${one[1]}'`, { code: "resource_missing", param: "id" });
+      if (!entry)
+        return stripeError(res, 404, `No such checkout.session: '${one[1]}'`, {
+          code: "resource_missing",
+          param: "id",
+        });
       return sendJson(res, 200, entry.session);
     }
     if (req.method === "POST" && path === "/v1/checkout/sessions") {
@@ -183,33 +231,50 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
       const previous = typeof idemKey === "string" ? idempotent.get(idemKey) : undefined;
       if (previous) return sendJson(res, 200, previous);
       const version = req.headers["stripe-version"];
-      const result = createSession(parseBracketForm(await readBody(req)), typeof version === "string" ? version : null);
+      const result = createSession(
+        parseBracketForm(await readBody(req)),
+        typeof version === "string" ? version : null,
+      );
       if (typeof result === "string") return stripeError(res, 400, result);
       if (typeof idemKey === "string") idempotent.set(idemKey, result);
       return sendJson(res, 200, result);
     }
-    stripeError(res, 404, `Unrecognized request URL (${req.method}: ${path}). The fake covers checkout sessions only.`);
+    stripeError(
+      res,
+      404,
+      `Unrecognized request URL (${req.method}: ${path}). The fake covers checkout sessions only.`,
+    );
   }
 
-  async function hosted(req: IncomingMessage, res: ServerResponse, sessionId: string, action: string | undefined) {
+  async function hosted(
+    req: IncomingMessage,
+    res: ServerResponse,
+    sessionId: string,
+    action: string | undefined,
+  ) {
     const entry = sessions.get(sessionId);
     if (!entry) return sendHtml(res, 404, PAY_PAGE_TITLE, "<h1>No such checkout</h1>");
     if (req.method === "GET" && action === undefined) return renderPayPage(res, entry.page);
-    if (req.method !== "POST" || (action !== "pay" && action !== "cancel")) return sendText(res, 405, "method not allowed");
+    if (req.method !== "POST" || (action !== "pay" && action !== "cancel"))
+      return sendText(res, 405, "method not allowed");
     if (action === "pay") await pay(sessionId);
     const target = action === "pay" ? entry.session.success_url : entry.session.cancel_url;
     if (target) return redirect(res, target.replace("{CHECKOUT_SESSION_ID}", sessionId));
     renderPayPage(res, entry.page);
   }
 
-  const server = await listen(async (req, res) => {
-    const path = new URL(req.url ?? "/", "http://fake").pathname;
-    if (path === "/__health") return sendText(res, 200, "ok");
-    if (path.startsWith("/v1/")) return api(req, res, path);
-    const page = /^\/pay\/([A-Za-z0-9_]+)(?:\/(pay|cancel))?$/.exec(path);
-    if (page) return hosted(req, res, page[1]!, page[2]);
-    sendText(res, 404, "not found");
-  }, opts.port, opts.host);
+  const server = await listen(
+    async (req, res) => {
+      const path = new URL(req.url ?? "/", "http://fake").pathname;
+      if (path === "/__health") return sendText(res, 200, "ok");
+      if (path.startsWith("/v1/")) return api(req, res, path);
+      const page = /^\/pay\/([A-Za-z0-9_]+)(?:\/(pay|cancel))?$/.exec(path);
+      if (page) return hosted(req, res, page[1]!, page[2]);
+      sendText(res, 404, "not found");
+    },
+    opts.port,
+    opts.host,
+  );
   base = server.url;
 
   return {

@@ -87,7 +87,8 @@ export async function startFakeSmtp(opts: FakeSmtpOptions = {}): Promise<FakeSmt
       stream.on("data", (chunk: Buffer) => chunks.push(chunk));
       stream.on("error", (err: Error) => callback(err));
       stream.on("end", () => {
-        if (stream.sizeExceeded) return callback(Object.assign(new Error("Message too large"), { responseCode: 552 }));
+        if (stream.sizeExceeded)
+          return callback(Object.assign(new Error("Message too large"), { responseCode: 552 }));
         const from = session.envelope.mailFrom ? session.envelope.mailFrom.address : null;
         const to = session.envelope.rcptTo.map((r) => r.address);
         keep(Buffer.concat(chunks).toString("utf8"), from, to).then(

@@ -16,7 +16,8 @@ function port(env: Env, name: string, fallback: number): number {
   const raw = env[name];
   if (raw === undefined || raw === "") return fallback;
   const value = Number(raw);
-  if (!Number.isInteger(value) || value < 0 || value > 65535) throw new Error(`${name} must be a port number, not "${raw}"`);
+  if (!Number.isInteger(value) || value < 0 || value > 65535)
+    throw new Error(`${name} must be a port number, not "${raw}"`);
   return value;
 }
 
@@ -24,13 +25,17 @@ function port(env: Env, name: string, fallback: number): number {
 // misconfiguration the demo should surface.
 function required(env: Env, names: string[]): void {
   const missing = names.filter((n) => !env[n]);
-  if (missing.length > 0) throw new Error(`tests/fakes/start.ts: set ${missing.join(", ")} (see docs/fakes.md)`);
+  if (missing.length > 0)
+    throw new Error(`tests/fakes/start.ts: set ${missing.join(", ")} (see docs/fakes.md)`);
 }
 
 export async function startAllFakes(env: Env): Promise<RunningFakes> {
   required(env, ["OAUTH_CLIENT_ID", "OAUTH_CLIENT_SECRET", "OAUTH_REDIRECT_URI"]);
   if (env.PAY_WEBHOOK_URL) required(env, ["PAY_WEBHOOK_SECRET"]);
-  const redirectUris = env.OAUTH_REDIRECT_URI!.split(",").map((s) => s.trim()).filter(Boolean);
+  const redirectUris = env
+    .OAUTH_REDIRECT_URI!.split(",")
+    .map((s) => s.trim())
+    .filter(Boolean);
   const started: { close(): Promise<void> }[] = [];
   const close = async () => {
     await Promise.allSettled(started.reverse().map((s) => s.close()));
@@ -42,7 +47,10 @@ export async function startAllFakes(env: Env): Promise<RunningFakes> {
       users: DEMO_PEOPLE,
     });
     started.push(oauth);
-    const smtp = await startFakeSmtp({ port: port(env, "FAKE_SMTP_PORT", 4102), dir: env.FAKE_MAIL_DIR || undefined });
+    const smtp = await startFakeSmtp({
+      port: port(env, "FAKE_SMTP_PORT", 4102),
+      dir: env.FAKE_MAIL_DIR || undefined,
+    });
     started.push(smtp);
     const pay = await startFakePayments({
       port: port(env, "FAKE_PAY_PORT", 4103),
@@ -50,7 +58,9 @@ export async function startAllFakes(env: Env): Promise<RunningFakes> {
       webhookSecret: env.PAY_WEBHOOK_SECRET || undefined,
     });
     started.push(pay);
-    const webhook = env.PAY_WEBHOOK_URL ? `webhooks to ${env.PAY_WEBHOOK_URL}` : "no webhooks (PAY_WEBHOOK_URL unset)";
+    const webhook = env.PAY_WEBHOOK_URL
+      ? `webhooks to ${env.PAY_WEBHOOK_URL}`
+      : "no webhooks (PAY_WEBHOOK_URL unset)";
     return {
       lines: [
         `fake-oauth    ${oauth.url}  (client ${env.OAUTH_CLIENT_ID}, ${DEMO_PEOPLE.length} demo people)`,

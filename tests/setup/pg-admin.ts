@@ -5,7 +5,8 @@ export const TEMPLATE_DB = "rl_template";
 
 export function adminUrl(database = "postgres") {
   const base = process.env.TEST_PG_URL;
-  if (!base) throw new Error("TEST_PG_URL is not set: run the tests with `npm test`, which starts the test cluster");
+  if (!base)
+    throw new Error("TEST_PG_URL is not set: run the tests with `npm test`, which starts the test cluster");
   const url = new URL(base);
   url.pathname = `/${database}`;
   return url.toString();

@@ -8,7 +8,10 @@ const CaseHistoryList = lazy(() => import("./case-history-list"));
 export function CaseHistory({ caseId }: { caseId: string }) {
   return (
     <section aria-labelledby="history" className="rounded-card border border-rule bg-card p-4">
-      <Fold summaryClassName="min-h-tap cursor-pointer content-center text-xl font-semibold" summary={<span id="history">History</span>}>
+      <Fold
+        summaryClassName="min-h-tap cursor-pointer content-center text-xl font-semibold"
+        summary={<span id="history">History</span>}
+      >
         <Suspense fallback={<p className="mt-2 text-sm text-graphite-600">Loading…</p>}>
           <CaseHistoryList caseId={caseId} />
         </Suspense>

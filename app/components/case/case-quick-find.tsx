@@ -7,7 +7,15 @@ import { QuickFind } from "../quick-find/quick-find";
  * Quick find on a case: a symptom becomes evidence (Enter present, Shift+Enter absent); anything
  * else — another case, a plate, a cause, a check — is a jump, as in the rest of the app.
  */
-export function CaseQuickFind({ recent, onAdd, cacheKey }: { recent: string[]; onAdd: (entry: Entry, present: boolean) => void; cacheKey?: string }) {
+export function CaseQuickFind({
+  recent,
+  onAdd,
+  cacheKey,
+}: {
+  recent: string[];
+  onAdd: (entry: Entry, present: boolean) => void;
+  cacheKey?: string;
+}) {
   const navigate = useNavigate();
   return (
     <QuickFind

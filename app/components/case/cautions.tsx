@@ -16,7 +16,9 @@ export function Cautions({ cautions }: { cautions: string[] }) {
           <li key={c}>{CAUTION_TEXT[c as keyof typeof CAUTION_TEXT] ?? c}</li>
         ))}
       </ul>
-      <p className="mt-1 text-sm text-graphite-600">Follow the vehicle maker's procedure and local regulations.</p>
+      <p className="mt-1 text-sm text-graphite-600">
+        Follow the vehicle maker's procedure and local regulations.
+      </p>
     </div>
   );
 }

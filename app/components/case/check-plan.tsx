@@ -18,7 +18,14 @@ const SHOWN = PLAN_SHOWN;
 const OPEN_FULL = PLAN_OPEN;
 const WORTH = 0.02; // below a 2% chance of finding the fault a check waits in the folded list
 
-const ACCESS_LABEL: Record<string, string> = { ramp: "ramp", road_test: "road test", scan_tool: "scan tool", wheels_off: "wheels off", bonnet_open: "bonnet open", cold_engine: "cold engine" };
+const ACCESS_LABEL: Record<string, string> = {
+  ramp: "ramp",
+  road_test: "road test",
+  scan_tool: "scan tool",
+  wheels_off: "wheels off",
+  bonnet_open: "bonnet open",
+  cold_engine: "cold engine",
+};
 const RESULT_WORDS: Record<Result, string> = { pass: "passed", fail: "found a fault" };
 
 /** Skill, access and tools in one line, each named once ("scan tool" is both an access and a tool). */
@@ -39,7 +46,15 @@ type Armed = { checkId: string; result: Result } | null;
  * asks for Enter before anything is recorded, and any other key lets go. Stray typing on the page
  * can therefore never record a result; the buttons record at once, and every recording can be undone.
  */
-function onPlanKey(e: React.KeyboardEvent<HTMLOListElement>, steps: Step[], armed: Armed, setArmed: (a: Armed) => void, record: RecordResult, isOpen: (checkId: string) => boolean, open: (checkId: string) => void) {
+function onPlanKey(
+  e: React.KeyboardEvent<HTMLOListElement>,
+  steps: Step[],
+  armed: Armed,
+  setArmed: (a: Armed) => void,
+  record: RecordResult,
+  isOpen: (checkId: string) => boolean,
+  open: (checkId: string) => void,
+) {
   if (e.ctrlKey || e.metaKey || e.altKey || e.key === "Shift") return;
   const items = [...e.currentTarget.querySelectorAll<HTMLElement>("[data-step]")];
   const at = items.indexOf(document.activeElement as HTMLElement);
@@ -89,7 +104,16 @@ type PlanProps = {
   single?: boolean;
 };
 
-export function CheckPlan({ plan, currency, units, record, busy, errorFor, error, single = false }: PlanProps) {
+export function CheckPlan({
+  plan,
+  currency,
+  units,
+  record,
+  busy,
+  errorFor,
+  error,
+  single = false,
+}: PlanProps) {
   const steps = plan.steps;
   // The plan orders every remaining check; the screen offers the few worth doing now.
   const worth = steps.filter((s, i) => i === 0 || s.pFind >= WORTH);
@@ -98,7 +122,8 @@ export function CheckPlan({ plan, currency, units, record, busy, errorFor, error
   const list = useRef<HTMLOListElement>(null);
   const [armed, setArmed] = useState<Armed>(null);
   const [opened, setOpened] = useState<ReadonlySet<string>>(new Set());
-  const isOpen = (checkId: string) => shown.findIndex((s) => s.checkId === checkId) < OPEN_FULL || opened.has(checkId);
+  const isOpen = (checkId: string) =>
+    shown.findIndex((s) => s.checkId === checkId) < OPEN_FULL || opened.has(checkId);
   const open = (checkId: string) => setOpened((o) => new Set(o).add(checkId));
   // Alt+N moves to the next check from anywhere on the page. It only moves the focus; a single
   // letter would be reached by ordinary typing.
@@ -113,28 +138,57 @@ export function CheckPlan({ plan, currency, units, record, busy, errorFor, error
   }, []);
   return (
     <section aria-labelledby="plan" className="card">
-      <h2 id="plan" className="text-xl font-semibold">{single ? "Your next check" : "Check plan"}</h2>
+      <h2 id="plan" className="text-xl font-semibold">
+        {single ? "Your next check" : "Check plan"}
+      </h2>
       {!single && steps.length ? (
         <p className="mt-1 text-sm text-graphite-700" data-testid="plan-saving">
-          Expected cost in this order <strong className="tabular">{formatMoney(plan.expectedCost, currency)}</strong>; cheapest-first would
-          expect <span className="tabular">{formatMoney(plan.cheapestFirstExpectedCost, currency)}</span>
-          {plan.saving > 0.005 ? <> — this order saves <strong className="tabular">{formatMoney(plan.saving, currency)}</strong> on average.</> : "."}
+          Expected cost in this order{" "}
+          <strong className="tabular">{formatMoney(plan.expectedCost, currency)}</strong>; cheapest-first
+          would expect{" "}
+          <span className="tabular">{formatMoney(plan.cheapestFirstExpectedCost, currency)}</span>
+          {plan.saving > 0.005 ? (
+            <>
+              {" "}
+              — this order saves <strong className="tabular">{formatMoney(plan.saving, currency)}</strong> on
+              average.
+            </>
+          ) : (
+            "."
+          )}
         </p>
       ) : null}
-      {steps.length === 0 ? <p className="mt-1 text-graphite-700">No checks left that bear on these causes{single ? " within your level" : ""}.</p> : null}
-      {error ? <p role="alert" className="mt-2 rounded-lg border-2 border-stop p-3">{error}</p> : null}
+      {steps.length === 0 ? (
+        <p className="mt-1 text-graphite-700">
+          No checks left that bear on these causes{single ? " within your level" : ""}.
+        </p>
+      ) : null}
+      {error ? (
+        <p role="alert" className="mt-2 rounded-lg border-2 border-stop p-3">
+          {error}
+        </p>
+      ) : null}
       {!single && plan.whatIf && steps[0] ? (
         <p className="mt-2 text-sm" data-testid="what-if">
-          Why {steps[0].name.toLowerCase()} first: if it fails, the top cause becomes <strong>{plan.whatIf.ifFail?.topCause ?? "—"}</strong>
-          {plan.whatIf.ifFail ? ` (${formatPercent(plan.whatIf.ifFail.probability)})` : ""}; if it passes, <strong>{plan.whatIf.ifPass?.topCause ?? "—"}</strong>
+          Why {steps[0].name.toLowerCase()} first: if it fails, the top cause becomes{" "}
+          <strong>{plan.whatIf.ifFail?.topCause ?? "—"}</strong>
+          {plan.whatIf.ifFail ? ` (${formatPercent(plan.whatIf.ifFail.probability)})` : ""}; if it passes,{" "}
+          <strong>{plan.whatIf.ifPass?.topCause ?? "—"}</strong>
           {plan.whatIf.ifPass ? ` (${formatPercent(plan.whatIf.ifPass.probability)})` : ""}.
         </p>
       ) : null}
       {/* Keyboard hints are for the desk; a phone or tablet has no keys to press. */}
       <p className="mt-2 hidden text-sm text-graphite-600 sm:pointer-fine:block">
-        <kbd>Alt</kbd>+<kbd>N</kbd> next check · <kbd>↑</kbd>/<kbd>↓</kbd> move · <kbd>P</kbd> or <kbd>F</kbd> then <kbd>Enter</kbd> records passed or a fault · <kbd>Enter</kbd> type a reading
+        <kbd>Alt</kbd>+<kbd>N</kbd> next check · <kbd>↑</kbd>/<kbd>↓</kbd> move · <kbd>P</kbd> or <kbd>F</kbd>{" "}
+        then <kbd>Enter</kbd> records passed or a fault · <kbd>Enter</kbd> type a reading
       </p>
-      <ol ref={list} className="mt-3 grid gap-3" aria-label="Checks, best value first" onKeyDown={(e) => onPlanKey(e, shown, armed, setArmed, record, isOpen, open)} onBlur={() => setArmed(null)}>
+      <ol
+        ref={list}
+        className="mt-3 grid gap-3"
+        aria-label="Checks, best value first"
+        onKeyDown={(e) => onPlanKey(e, shown, armed, setArmed, record, isOpen, open)}
+        onBlur={() => setArmed(null)}
+      >
         {shown.map((s, i) => (
           <PlanStep
             key={s.checkId}
@@ -152,23 +206,37 @@ export function CheckPlan({ plan, currency, units, record, busy, errorFor, error
         ))}
       </ol>
       {later.length ? (
-        <Fold className="mt-3" summaryClassName="min-h-tap cursor-pointer content-center text-graphite-700" summary={`${later.length + plan.moreSteps} more checks, unlikely to find it now`}>
+        <Fold
+          className="mt-3"
+          summaryClassName="min-h-tap cursor-pointer content-center text-graphite-700"
+          summary={`${later.length + plan.moreSteps} more checks, unlikely to find it now`}
+        >
           <ul className="mt-1 grid gap-1 text-sm text-graphite-700">
             {later.map((s) => (
               <li key={s.checkId} className="flex justify-between gap-2">
                 <span>{s.name}</span>
-                <span className="tabular">{formatPercent(s.pFind, 1)} · {formatMoney(s.cost, currency)}</span>
+                <span className="tabular">
+                  {formatPercent(s.pFind, 1)} · {formatMoney(s.cost, currency)}
+                </span>
               </li>
             ))}
-            {plan.moreSteps ? <li>… and {plan.moreSteps} more with almost no chance of finding it.</li> : null}
+            {plan.moreSteps ? (
+              <li>… and {plan.moreSteps} more with almost no chance of finding it.</li>
+            ) : null}
           </ul>
         </Fold>
       ) : null}
       {plan.aboveSkill.length ? (
-        <Fold className="mt-3 border-t border-rule pt-2" summaryClassName="min-h-tap cursor-pointer content-center font-medium text-graphite-700" summary={`${plan.aboveSkill.length} more checks need a technician or a senior: ask a senior`}>
+        <Fold
+          className="mt-3 border-t border-rule pt-2"
+          summaryClassName="min-h-tap cursor-pointer content-center font-medium text-graphite-700"
+          summary={`${plan.aboveSkill.length} more checks need a technician or a senior: ask a senior`}
+        >
           <ul className="mt-1 grid gap-1 text-sm text-graphite-700" aria-label="Checks beyond your level">
             {plan.aboveSkill.map((s) => (
-              <li key={s.checkId}>{s.name} — needs a {s.skill} ({formatPercent(s.pFind)} chance of finding it)</li>
+              <li key={s.checkId}>
+                {s.name} — needs a {s.skill} ({formatPercent(s.pFind)} chance of finding it)
+              </li>
             ))}
           </ul>
         </Fold>
@@ -177,7 +245,18 @@ export function CheckPlan({ plan, currency, units, record, busy, errorFor, error
   );
 }
 
-type StepProps = { step: Step; first: boolean; folded: boolean; onOpen: () => void; currency: string; units: UnitSystem; record: RecordResult; busy: boolean; error: string | null; armed: Result | null };
+type StepProps = {
+  step: Step;
+  first: boolean;
+  folded: boolean;
+  onOpen: () => void;
+  currency: string;
+  units: UnitSystem;
+  record: RecordResult;
+  busy: boolean;
+  error: string | null;
+  armed: Result | null;
+};
 
 function PlanStep({ step, first, folded, onOpen, currency, units, record, busy, error, armed }: StepProps) {
   const [reading, setReading] = useState("");
@@ -190,7 +269,12 @@ function PlanStep({ step, first, folded, onOpen, currency, units, record, busy, 
   // One <li> folded or open, so opening it from the keyboard keeps the focus where it was.
   if (folded) {
     return (
-      <li data-step={step.checkId} tabIndex={0} aria-label={step.name} className="flex flex-wrap items-center justify-between gap-2 rounded-lg border border-rule p-3 outline-offset-2">
+      <li
+        data-step={step.checkId}
+        tabIndex={0}
+        aria-label={step.name}
+        className="flex flex-wrap items-center justify-between gap-2 rounded-lg border border-rule p-3 outline-offset-2"
+      >
         <span>
           <span className="font-semibold">{step.name}</span>
           <span className="meta tabular block">{`${formatPercent(step.pFind)} to find it · ${step.minutes} min · ${formatMoney(step.cost, currency)}${step.cautions.length ? " · needs care" : ""}`}</span>
@@ -209,9 +293,13 @@ function PlanStep({ step, first, folded, onOpen, currency, units, record, busy, 
       className={`rounded-lg border p-3 outline-offset-2 ${first ? "border-uv-500 bg-uv-50" : "border-rule"}`}
     >
       <div className="flex flex-wrap items-baseline justify-between gap-2">
-        <h3 className="font-semibold">{first ? "Next: " : ""}{step.name}</h3>
+        <h3 className="font-semibold">
+          {first ? "Next: " : ""}
+          {step.name}
+        </h3>
         <span className="tabular text-sm">
-          <strong>{formatPercent(step.pFind)}</strong>{` to find it · ${step.minutes} min · ${formatMoney(step.cost, currency)}`}
+          <strong>{formatPercent(step.pFind)}</strong>
+          {` to find it · ${step.minutes} min · ${formatMoney(step.cost, currency)}`}
         </span>
       </div>
       <p className="meta">{needsLine(step)}</p>
@@ -219,9 +307,16 @@ function PlanStep({ step, first, folded, onOpen, currency, units, record, busy, 
           full; only the instructions fold. */}
       <Cautions cautions={step.cautions} />
       {instructions.length ? (
-        <Fold className="mt-1" open={first} summaryClassName="inline-flex min-h-tap cursor-pointer items-center font-medium" summary="How to do it">
+        <Fold
+          className="mt-1"
+          open={first}
+          summaryClassName="inline-flex min-h-tap cursor-pointer items-center font-medium"
+          summary="How to do it"
+        >
           <ol className="mt-1 list-decimal pl-6 text-sm">
-            {instructions.map((line, i) => <li key={i}>{line}</li>)}
+            {instructions.map((line, i) => (
+              <li key={i}>{line}</li>
+            ))}
           </ol>
         </Fold>
       ) : null}
@@ -243,26 +338,42 @@ function PlanStep({ step, first, folded, onOpen, currency, units, record, busy, 
             <input
               value={reading}
               onChange={(e) => setReading(e.target.value)}
-              placeholder={limit ? `limit: ${limit}` : step.unit ?? ""}
+              placeholder={limit ? `limit: ${limit}` : (step.unit ?? "")}
               aria-invalid={error ? true : undefined}
               aria-describedby={error ? errorId : undefined}
               className="field mt-1 w-64 max-w-full"
             />
           </label>
-          <button type="submit" disabled={busy} className="btn-primary">Record reading</button>
+          <button type="submit" disabled={busy} className="btn-primary">
+            Record reading
+          </button>
           {limit ? <p className="meta w-full">{`Passes when the reading is ${limit}.`}</p> : null}
         </form>
       ) : (
         <div className="mt-2 flex flex-wrap gap-2">
-          <button type="button" disabled={busy} onClick={() => record(step, { result: "pass" })} className="btn">
+          <button
+            type="button"
+            disabled={busy}
+            onClick={() => record(step, { result: "pass" })}
+            className="btn"
+          >
             Passed
           </button>
-          <button type="button" disabled={busy} onClick={() => record(step, { result: "fail" })} className="btn">
+          <button
+            type="button"
+            disabled={busy}
+            onClick={() => record(step, { result: "fail" })}
+            className="btn"
+          >
             Found a fault
           </button>
         </div>
       )}
-      {error ? <p id={errorId} role="alert" className="mt-2 rounded-lg border-2 border-stop p-2">{error}</p> : null}
+      {error ? (
+        <p id={errorId} role="alert" className="mt-2 rounded-lg border-2 border-stop p-2">
+          {error}
+        </p>
+      ) : null}
       {failMeans ? <p className="meta mt-1">{`A fail means: ${failMeans}`}</p> : null}
     </li>
   );

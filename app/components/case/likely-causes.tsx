@@ -12,7 +12,11 @@ const SHOWN = WHY_CAUSES;
 export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlisted: number }) {
   // Remember the last shares so a bar that moved can flash once: the user sees what changed.
   const last = useRef(new Map<string, number>());
-  const moved = new Set(causes.filter((c) => Math.abs((last.current.get(c.id) ?? c.probability) - c.probability) > 0.005).map((c) => c.id));
+  const moved = new Set(
+    causes
+      .filter((c) => Math.abs((last.current.get(c.id) ?? c.probability) - c.probability) > 0.005)
+      .map((c) => c.id),
+  );
   useEffect(() => {
     last.current = new Map(causes.map((c) => [c.id, c.probability]));
   });
@@ -20,14 +24,20 @@ export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlis
   const rest = causes.slice(SHOWN).filter((c) => c.probability >= 0.001);
   return (
     <section aria-labelledby="likely" className="card">
-      <h2 id="likely" className="text-xl font-semibold">Likely causes</h2>
+      <h2 id="likely" className="text-xl font-semibold">
+        Likely causes
+      </h2>
       <ol className="mt-3 grid gap-3" aria-label="Likely causes, most likely first">
         {top.map((c, i) => (
           <CauseRow key={c.id} cause={c} rank={i + 1} moved={moved.has(c.id)} open={i === 0} />
         ))}
       </ol>
       {rest.length ? (
-        <Fold className="mt-3" summaryClassName="min-h-tap cursor-pointer content-center text-graphite-700" summary={`${rest.length} less likely causes`}>
+        <Fold
+          className="mt-3"
+          summaryClassName="min-h-tap cursor-pointer content-center text-graphite-700"
+          summary={`${rest.length} less likely causes`}
+        >
           <ol className="mt-2 grid gap-1 text-graphite-700" start={SHOWN + 1}>
             {rest.map((c) => (
               <li key={c.id} className="flex justify-between gap-3">
@@ -40,27 +50,55 @@ export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlis
       ) : null}
       <div className="mt-4 border-t border-rule pt-3" data-testid="unlisted">
         <Bar label="Not in the knowledge base" value={unlisted} muted />
-        <p className="text-sm text-graphite-600">When this grows, the evidence fits none of the causes we know well: ask a senior.</p>
+        <p className="text-sm text-graphite-600">
+          When this grows, the evidence fits none of the causes we know well: ask a senior.
+        </p>
       </div>
     </section>
   );
 }
 
-function Bar({ label, value, muted = false, moved = false }: { label: string; value: number; muted?: boolean; moved?: boolean }) {
+function Bar({
+  label,
+  value,
+  muted = false,
+  moved = false,
+}: {
+  label: string;
+  value: number;
+  muted?: boolean;
+  moved?: boolean;
+}) {
   return (
     <div>
       <div className="flex items-baseline justify-between gap-3">
         <span className={muted ? "text-graphite-700" : "font-medium"}>{label}</span>
         <span className="tabular font-semibold">{formatPercent(value)}</span>
       </div>
-      <div className={`mt-1 h-3 rounded-full bg-data-soft ${moved ? "motion-safe:animate-pulse" : ""}`} aria-hidden="true">
-        <div className={`h-3 rounded-full ${muted ? "bg-graphite-500" : "bg-data"}`} style={{ width: `${Math.max(0.5, value * 100).toFixed(1)}%` }} />
+      <div
+        className={`mt-1 h-3 rounded-full bg-data-soft ${moved ? "motion-safe:animate-pulse" : ""}`}
+        aria-hidden="true"
+      >
+        <div
+          className={`h-3 rounded-full ${muted ? "bg-graphite-500" : "bg-data"}`}
+          style={{ width: `${Math.max(0.5, value * 100).toFixed(1)}%` }}
+        />
       </div>
     </div>
   );
 }
 
-function CauseRow({ cause, rank, moved, open }: { cause: ShownCause; rank: number; moved: boolean; open: boolean }) {
+function CauseRow({
+  cause,
+  rank,
+  moved,
+  open,
+}: {
+  cause: ShownCause;
+  rank: number;
+  moved: boolean;
+  open: boolean;
+}) {
   const max = Math.max(1, ...cause.why.map((w) => Math.abs(w.weight)));
   return (
     <li data-cause={cause.name} data-moved={moved || undefined}>
@@ -72,11 +110,17 @@ function CauseRow({ cause, rank, moved, open }: { cause: ShownCause; rank: numbe
         summary={<>Why {cause.priority ? <PriorityMark priority={cause.priority as "stop"} /> : null}</>}
       >
         {cause.why.length === 0 ? (
-          <p className="text-sm text-graphite-600">No evidence bears on it yet: its share is its usual frequency.</p>
+          <p className="text-sm text-graphite-600">
+            No evidence bears on it yet: its share is its usual frequency.
+          </p>
         ) : (
           <ul className="mt-1 grid gap-2 text-sm" aria-label="Evidence for and against it">
             {cause.why.map((w) => (
-              <li key={w.label} className="grid grid-cols-[1fr_6rem] items-center gap-2" data-why={w.weight > 0 ? "up" : "down"}>
+              <li
+                key={w.label}
+                className="grid grid-cols-[1fr_6rem] items-center gap-2"
+                data-why={w.weight > 0 ? "up" : "down"}
+              >
                 <span>
                   {w.label}
                   {w.recorded ? <span className="text-graphite-700">{`: ${w.recorded}`}</span> : null}

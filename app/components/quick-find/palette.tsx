@@ -4,10 +4,16 @@
 // is ours (app/quick-find), so cmdk's own filter is off.
 import { Command } from "cmdk";
 import { type RefObject, useCallback, useEffect, useMemo, useState } from "react";
-import { type Entry, type EntryKind, GROUP_HEADING, parseQuery, type ScoredEntry, search } from "~/quick-find";
+import {
+  type Entry,
+  type EntryKind,
+  GROUP_HEADING,
+  parseQuery,
+  type ScoredEntry,
+  search,
+} from "~/quick-find";
 import { itemValue, ResultRow } from "./result-row";
 import { type EntrySource, useQuickFindIndex } from "./use-index";
-
 
 /**
  * A symptom comes with present (as the query said it: "no grinding" is absent), and, when the
@@ -39,7 +45,8 @@ type PaletteProps = QuickFindProps & {
 };
 
 const KBD = "rounded border border-rule bg-paper px-1.5 font-sans text-base text-graphite-700";
-const GROUP = "[&_[cmdk-group-heading]]:px-3 [&_[cmdk-group-heading]]:pt-3 [&_[cmdk-group-heading]]:pb-1 [&_[cmdk-group-heading]]:text-base [&_[cmdk-group-heading]]:font-semibold [&_[cmdk-group-heading]]:text-graphite-600";
+const GROUP =
+  "[&_[cmdk-group-heading]]:px-3 [&_[cmdk-group-heading]]:pt-3 [&_[cmdk-group-heading]]:pb-1 [&_[cmdk-group-heading]]:text-base [&_[cmdk-group-heading]]:font-semibold [&_[cmdk-group-heading]]:text-graphite-600";
 
 export default function QuickFindPalette(props: PaletteProps) {
   const { entries, cacheKey, recentIds, kinds, limit, onPick, placeholder, open, inputRef } = props;
@@ -64,12 +71,17 @@ export default function QuickFindPalette(props: PaletteProps) {
 
   // Mounted only once wanted: the index is built from the first open on.
   const { index, loading, error } = useQuickFindIndex(entries, cacheKey, true);
-  const groups = useMemo(() => (index ? search(index, query, { recentIds, kinds, limit }) : []), [index, query, recentIds, kinds, limit]);
+  const groups = useMemo(
+    () => (index ? search(index, query, { recentIds, kinds, limit }) : []),
+    [index, query, recentIds, kinds, limit],
+  );
   const items = useMemo(() => groups.flatMap((g) => g.items), [groups]);
   const conditions = useMemo(() => (query.trim() ? parseQuery(query).conditions : []), [query]);
   // The highlight follows the user's arrows within one query and returns to the first real match
   // on a new one; a weak match is never highlighted by default, so Enter cannot record it unseen.
-  const moved = selection?.query === query && (arrowed === query || !items.find((i) => itemValue(i.entry) === selection.value)?.weak);
+  const moved =
+    selection?.query === query &&
+    (arrowed === query || !items.find((i) => itemValue(i.entry) === selection.value)?.weak);
   const picked = moved ? items.find((i) => itemValue(i.entry) === selection!.value) : undefined;
   const current: ScoredEntry | undefined = picked ?? items.find((i) => !i.weak);
   const onlyWeak = items.length > 0 && items.every((i) => i.weak);
@@ -126,22 +138,45 @@ export default function QuickFindPalette(props: PaletteProps) {
         <Command.List className="max-h-[60vh] overflow-y-auto p-2" aria-describedby="quick-find-keys">
           {loading ? <Command.Loading label="Loading Quick find">Loading…</Command.Loading> : null}
           {error ? <p className="px-3 py-2 text-stop">{error}</p> : null}
-          {index && query.trim() ? <Command.Empty className="px-3 py-2 text-graphite-600">Nothing found. Try another word, a registration or a case number.</Command.Empty> : null}
-          {onlyWeak ? <p className="px-3 py-2 text-graphite-700">No good match: note it, or propose a new symptom.</p> : null}
+          {index && query.trim() ? (
+            <Command.Empty className="px-3 py-2 text-graphite-600">
+              Nothing found. Try another word, a registration or a case number.
+            </Command.Empty>
+          ) : null}
+          {onlyWeak ? (
+            <p className="px-3 py-2 text-graphite-700">No good match: note it, or propose a new symptom.</p>
+          ) : null}
           {groups.map((g) => (
             <Command.Group key={g.kind} heading={GROUP_HEADING[g.kind]} className={GROUP}>
               {g.items.map((item) => (
-                <ResultRow key={itemValue(item.entry)} entry={item.entry} weak={item.weak} absent={item.present === false} onChoose={choose} />
+                <ResultRow
+                  key={itemValue(item.entry)}
+                  entry={item.entry}
+                  weak={item.weak}
+                  absent={item.present === false}
+                  onChoose={choose}
+                />
               ))}
             </Command.Group>
           ))}
         </Command.List>
-        <footer id="quick-find-keys" className="flex flex-wrap items-center gap-x-4 gap-y-1 border-t border-rule px-4 py-2 text-base text-graphite-600">
-          <span><kbd className={KBD}>Enter</kbd> add as present / open</span>
-          <span><kbd className={KBD}>Shift</kbd>+<kbd className={KBD}>Enter</kbd> add as absent</span>
-          <span><kbd className={KBD}>Esc</kbd> close</span>
+        <footer
+          id="quick-find-keys"
+          className="flex flex-wrap items-center gap-x-4 gap-y-1 border-t border-rule px-4 py-2 text-base text-graphite-600"
+        >
+          <span>
+            <kbd className={KBD}>Enter</kbd> add as present / open
+          </span>
+          <span>
+            <kbd className={KBD}>Shift</kbd>+<kbd className={KBD}>Enter</kbd> add as absent
+          </span>
+          <span>
+            <kbd className={KBD}>Esc</kbd> close
+          </span>
         </footer>
-        <p role="status" className="px-4 pb-2 text-base text-graphite-700 empty:hidden">{added}</p>
+        <p role="status" className="px-4 pb-2 text-base text-graphite-700 empty:hidden">
+          {added}
+        </p>
       </Command.Dialog>
     </>
   );

@@ -53,7 +53,14 @@ export function QuickFind(props: QuickFindProps) {
       </button>
       {wanted ? (
         <Suspense fallback={null}>
-          <Palette {...props} open={open} onOpenChange={setOpen} inputRef={input} typedAhead={typedAhead} onReady={() => setReady(true)} />
+          <Palette
+            {...props}
+            open={open}
+            onOpenChange={setOpen}
+            inputRef={input}
+            typedAhead={typedAhead}
+            onReady={() => setReady(true)}
+          />
         </Suspense>
       ) : null}
     </>

@@ -15,12 +15,28 @@ export const describedBy = (errors: FormErrors | undefined, name: string) =>
   firstError(errors, name) ? { "aria-invalid": true as const, "aria-describedby": `${name}-error` } : {};
 
 /** What concerns the whole form, and the notice when it worked. */
-export function FormMessages({ errors, notice, className = "" }: { errors?: FormErrors; notice?: string | null; className?: string }) {
+export function FormMessages({
+  errors,
+  notice,
+  className = "",
+}: {
+  errors?: FormErrors;
+  notice?: string | null;
+  className?: string;
+}) {
   const form = firstError(errors, "form");
   return (
     <>
-      {form ? <p role="alert" className={`rounded-lg border-2 border-stop bg-card p-3 ${className}`}>{form}</p> : null}
-      {notice ? <p role="status" className={`rounded-lg border border-sound bg-card p-3 ${className}`}>{notice}</p> : null}
+      {form ? (
+        <p role="alert" className={`rounded-lg border-2 border-stop bg-card p-3 ${className}`}>
+          {form}
+        </p>
+      ) : null}
+      {notice ? (
+        <p role="status" className={`rounded-lg border border-sound bg-card p-3 ${className}`}>
+          {notice}
+        </p>
+      ) : null}
     </>
   );
 }

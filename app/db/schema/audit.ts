@@ -16,7 +16,10 @@ export const auditLog = pgTable(
     after: jsonb("after"),
     at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("audit_workshop_at_idx").on(t.workshopId, t.at), index("audit_entity_idx").on(t.entity, t.entityId)],
+  (t) => [
+    index("audit_workshop_at_idx").on(t.workshopId, t.at),
+    index("audit_entity_idx").on(t.entity, t.entityId),
+  ],
 );
 
 export type AuditEntry = typeof auditLog.$inferSelect;

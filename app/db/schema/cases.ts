@@ -22,9 +22,13 @@ export const cases = pgTable(
   "cases",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
     number: integer("number").notNull(), // the workshop's own running number, shown on screens and paper
-    vehicleId: uuid("vehicle_id").notNull().references(() => vehicles.id, { onDelete: "restrict" }),
+    vehicleId: uuid("vehicle_id")
+      .notNull()
+      .references(() => vehicles.id, { onDelete: "restrict" }),
     complaint: text("complaint").notNull(), // in the owner's words
     mileageKm: integer("mileage_km"),
     state: caseStateEnum("state").notNull().default("open"),
@@ -47,10 +51,7 @@ export const cases = pgTable(
     index("cases_workshop_state_idx").on(t.workshopId, t.state),
     index("cases_vehicle_idx").on(t.vehicleId),
     check("cases_mileage_nonneg", sql`${t.mileageKm} is null or ${t.mileageKm} >= 0`),
-    check(
-      "cases_conclusion_has_cause",
-      sql`${t.state} in ('open') or ${t.conclusionCauseId} is not null`,
-    ),
+    check("cases_conclusion_has_cause", sql`${t.state} in ('open') or ${t.conclusionCauseId} is not null`),
   ],
 );
 
@@ -60,9 +61,15 @@ export const observations = pgTable(
   "observations",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
-    caseId: uuid("case_id").notNull().references(() => cases.id, { onDelete: "cascade" }),
-    symptomId: uuid("symptom_id").notNull().references(() => symptoms.id, { onDelete: "restrict" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    caseId: uuid("case_id")
+      .notNull()
+      .references(() => cases.id, { onDelete: "cascade" }),
+    symptomId: uuid("symptom_id")
+      .notNull()
+      .references(() => symptoms.id, { onDelete: "restrict" }),
     present: boolean("present").notNull(),
     source: observationSourceEnum("source").notNull().default("technician"),
     note: text("note"),
@@ -76,9 +83,15 @@ export const findings = pgTable(
   "findings",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
-    caseId: uuid("case_id").notNull().references(() => cases.id, { onDelete: "cascade" }),
-    checkId: uuid("check_id").notNull().references(() => checks.id, { onDelete: "restrict" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    caseId: uuid("case_id")
+      .notNull()
+      .references(() => cases.id, { onDelete: "cascade" }),
+    checkId: uuid("check_id")
+      .notNull()
+      .references(() => checks.id, { onDelete: "restrict" }),
     result: findingResultEnum("result").notNull(),
     reading: text("reading"), // as typed, e.g. "0.09 mm"
     value: doublePrecision("value"), // the reading in the check's own unit

@@ -15,7 +15,14 @@ import {
 } from "drizzle-orm/pg-core";
 import type { Applicability } from "../../domain/knowledge";
 import type { KnowledgeDocument } from "../../kb/document";
-import { causeLevelEnum, priorityEnum, resultKindEnum, skillEnum, symptomKindEnum, systemEnum } from "./enums";
+import {
+  causeLevelEnum,
+  priorityEnum,
+  resultKindEnum,
+  skillEnum,
+  symptomKindEnum,
+  systemEnum,
+} from "./enums";
 import { createdAt, id, updatedAt } from "./helpers";
 import { workshops } from "./workshops";
 
@@ -27,26 +34,39 @@ export const symptoms = pgTable(
   "symptoms",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
     key: text("key").notNull(),
     name: text("name").notNull(),
-    synonyms: text("synonyms").array().notNull().default(sql`'{}'::text[]`),
+    synonyms: text("synonyms")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     system: systemEnum("system").notNull(),
     kind: symptomKindEnum("kind").notNull(),
     code: text("code"), // the DTC itself ("P0420") for kind trouble_code, otherwise null
-    conditions: text("conditions").array().notNull().default(sql`'{}'::text[]`),
+    conditions: text("conditions")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     leak: doublePrecision("leak").notNull(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [unique("symptoms_workshop_key").on(t.workshopId, t.key), probability("symptoms_leak_range", t.leak)],
+  (t) => [
+    unique("symptoms_workshop_key").on(t.workshopId, t.key),
+    probability("symptoms_leak_range", t.leak),
+  ],
 );
 
 export const causes = pgTable(
   "causes",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
     key: text("key").notNull(),
     parentId: uuid("parent_id").references((): AnyPgColumn => causes.id, { onDelete: "restrict" }),
     level: causeLevelEnum("level").notNull(),
@@ -72,7 +92,10 @@ export const causes = pgTable(
       sql`(${t.level} = 'failure_mode') = (${t.baseRate} is not null and ${t.priority} is not null)`,
     ),
     check("causes_base_rate_pos", sql`${t.baseRate} is null or ${t.baseRate} > 0`),
-    check("causes_costs_nonneg", sql`coalesce(${t.repairMinutes}, 0) >= 0 and coalesce(${t.partsCost}, 0) >= 0`),
+    check(
+      "causes_costs_nonneg",
+      sql`coalesce(${t.repairMinutes}, 0) >= 0 and coalesce(${t.partsCost}, 0) >= 0`,
+    ),
   ],
 );
 
@@ -80,16 +103,32 @@ export const checks = pgTable(
   "checks",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
     key: text("key").notNull(),
     name: text("name").notNull(),
-    instructions: text("instructions").array().notNull().default(sql`'{}'::text[]`),
-    tools: text("tools").array().notNull().default(sql`'{}'::text[]`),
+    instructions: text("instructions")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
+    tools: text("tools")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     minutes: integer("minutes").notNull(),
-    consumablesCost: numeric("consumables_cost", { precision: 10, scale: 2, mode: "number" }).notNull().default(0),
-    access: text("access").array().notNull().default(sql`'{}'::text[]`),
+    consumablesCost: numeric("consumables_cost", { precision: 10, scale: 2, mode: "number" })
+      .notNull()
+      .default(0),
+    access: text("access")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     skill: skillEnum("skill").notNull(),
-    cautions: text("cautions").array().notNull().default(sql`'{}'::text[]`),
+    cautions: text("cautions")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     resultKind: resultKindEnum("result_kind").notNull(),
     quantity: text("quantity"),
     unit: text("unit"),
@@ -103,16 +142,25 @@ export const checks = pgTable(
     unique("checks_workshop_key").on(t.workshopId, t.key),
     probability("checks_false_alarm_range", t.falseAlarm),
     check("checks_costs_nonneg", sql`${t.minutes} >= 0 and ${t.consumablesCost} >= 0`),
-    check("checks_measurement_rule", sql`${t.resultKind} = 'pass_fail' or (${t.rule} is not null and ${t.unit} is not null)`),
+    check(
+      "checks_measurement_rule",
+      sql`${t.resultKind} = 'pass_fail' or (${t.rule} is not null and ${t.unit} is not null)`,
+    ),
   ],
 );
 
 export const symptomLinks = pgTable(
   "symptom_links",
   {
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
-    symptomId: uuid("symptom_id").notNull().references(() => symptoms.id, { onDelete: "cascade" }),
-    causeId: uuid("cause_id").notNull().references(() => causes.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    symptomId: uuid("symptom_id")
+      .notNull()
+      .references(() => symptoms.id, { onDelete: "cascade" }),
+    causeId: uuid("cause_id")
+      .notNull()
+      .references(() => causes.id, { onDelete: "cascade" }),
     p: doublePrecision("p").notNull(),
   },
   (t) => [
@@ -126,9 +174,15 @@ export const symptomLinks = pgTable(
 export const checkLinks = pgTable(
   "check_links",
   {
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
-    checkId: uuid("check_id").notNull().references(() => checks.id, { onDelete: "cascade" }),
-    causeId: uuid("cause_id").notNull().references(() => causes.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    checkId: uuid("check_id")
+      .notNull()
+      .references(() => checks.id, { onDelete: "cascade" }),
+    causeId: uuid("cause_id")
+      .notNull()
+      .references(() => causes.id, { onDelete: "cascade" }),
     pFail: doublePrecision("p_fail").notNull(),
   },
   (t) => [

@@ -18,21 +18,30 @@ export const identities = pgTable(
   "identities",
   {
     id: id(),
-    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
     provider: text("provider").notNull(),
     providerUserId: text("provider_user_id").notNull(),
     login: text("login").notNull(),
     createdAt: createdAt(),
   },
-  (t) => [unique("identities_provider_user").on(t.provider, t.providerUserId), index("identities_user_idx").on(t.userId)],
+  (t) => [
+    unique("identities_provider_user").on(t.provider, t.providerUserId),
+    index("identities_user_idx").on(t.userId),
+  ],
 );
 
 export const members = pgTable(
   "members",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
-    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
     role: roleEnum("role").notNull(),
     skill: skillEnum("skill").notNull().default("technician"),
     status: memberStatusEnum("status").notNull().default("active"),
@@ -47,7 +56,9 @@ export const invitations = pgTable(
   "invitations",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
     email: text("email"),
     githubLogin: text("github_login"),
     role: roleEnum("role").notNull(),
@@ -67,7 +78,9 @@ export const sessions = pgTable(
   "sessions",
   {
     tokenHash: text("token_hash").primaryKey(),
-    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
     createdAt: createdAt(),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     lastSeenAt: timestamp("last_seen_at", { withTimezone: true }).notNull().defaultNow(),

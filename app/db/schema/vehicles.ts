@@ -8,7 +8,9 @@ export const owners = pgTable(
   "owners",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
     name: text("name").notNull(),
     email: text("email"),
     phone: text("phone"),
@@ -23,8 +25,12 @@ export const vehicles = pgTable(
   "vehicles",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
-    ownerId: uuid("owner_id").notNull().references(() => owners.id, { onDelete: "restrict" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    ownerId: uuid("owner_id")
+      .notNull()
+      .references(() => owners.id, { onDelete: "restrict" }),
     vin: text("vin"), // ISO 3779: 17 characters, no I, O or Q
     registration: text("registration").notNull(),
     make: text("make").notNull(),
@@ -49,8 +55,12 @@ export const mileageReadings = pgTable(
   "mileage_readings",
   {
     id: id(),
-    workshopId: uuid("workshop_id").notNull().references(() => workshops.id, { onDelete: "cascade" }),
-    vehicleId: uuid("vehicle_id").notNull().references(() => vehicles.id, { onDelete: "cascade" }),
+    workshopId: uuid("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    vehicleId: uuid("vehicle_id")
+      .notNull()
+      .references(() => vehicles.id, { onDelete: "cascade" }),
     km: integer("km").notNull(),
     readAt: timestamp("read_at", { withTimezone: true }).notNull().defaultNow(),
   },

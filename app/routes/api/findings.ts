@@ -9,7 +9,11 @@ import type { Route } from "./+types/findings";
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const db = context.get(dbContext);
   return api(request, db, "case:read", async (member) => {
-    if (params.itemId) return Response.json({ error: "Read a case's findings with GET /api/cases/:caseId/findings." }, { status: 405 });
+    if (params.itemId)
+      return Response.json(
+        { error: "Read a case's findings with GET /api/cases/:caseId/findings." },
+        { status: 405 },
+      );
     return { findings: (await loadCaseForChange(db, member, params.caseId)).findings };
   });
 }

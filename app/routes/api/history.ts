@@ -8,7 +8,9 @@ import type { Route } from "./+types/history";
 // fetches them when History is opened instead of carrying them in every page.
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const db = context.get(dbContext);
-  return api(request, db, "case:read", async (member) => ({ history: await loadCaseHistory(db, member, params.caseId) }));
+  return api(request, db, "case:read", async (member) => ({
+    history: await loadCaseHistory(db, member, params.caseId),
+  }));
 }
 
 export const action = methodNotAllowed("GET", "This address is read with GET.");

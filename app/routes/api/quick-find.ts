@@ -8,7 +8,11 @@ import { fleetEntries, knowledgeEntries } from "~/kb/quick-find.server";
 import type { Route } from "./+types/quick-find";
 
 const Query = z.object({
-  kinds: z.string().optional().transform((s) => (s ? s.split(",") : [...ENTRY_KINDS])).pipe(z.array(z.enum(ENTRY_KINDS))),
+  kinds: z
+    .string()
+    .optional()
+    .transform((s) => (s ? s.split(",") : [...ENTRY_KINDS]))
+    .pipe(z.array(z.enum(ENTRY_KINDS))),
 });
 
 // GET /api/quick-find?kinds=symptom — the palette's entries, fetched the first time it opens, so
@@ -18,8 +22,12 @@ export async function loader({ request, context }: Route.LoaderArgs) {
   return api(request, db, "case:read", async (member) => {
     const { kinds } = Query.parse(Object.fromEntries(new URL(request.url).searchParams));
     const version = await kbVersion(db, member.workshopId);
-    const kb = kinds.some((k) => k === "symptom" || k === "cause" || k === "check") ? await knowledgeEntries(db, member.workshopId, version) : [];
-    const fleet = kinds.some((k) => k === "vehicle" || k === "case") ? await fleetEntries(db, member.workshopId) : [];
+    const kb = kinds.some((k) => k === "symptom" || k === "cause" || k === "check")
+      ? await knowledgeEntries(db, member.workshopId, version)
+      : [];
+    const fleet = kinds.some((k) => k === "vehicle" || k === "case")
+      ? await fleetEntries(db, member.workshopId)
+      : [];
     return { kbVersion: version, entries: [...kb, ...fleet].filter((e) => kinds.includes(e.kind)) };
   });
 }

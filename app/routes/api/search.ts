@@ -9,7 +9,11 @@ import type { Route } from "./+types/search";
 
 const Query = z.object({
   q: z.string().max(80, "Search at most 80 characters").default(""),
-  kinds: z.string().optional().transform((s) => (s ? s.split(",") : undefined)).pipe(z.array(z.enum(ENTRY_KINDS)).optional()),
+  kinds: z
+    .string()
+    .optional()
+    .transform((s) => (s ? s.split(",") : undefined))
+    .pipe(z.array(z.enum(ENTRY_KINDS)).optional()),
   limit: z.coerce.number().int().min(1).max(50).default(8),
 });
 

@@ -19,7 +19,13 @@ export async function action({ request, context }: Route.ActionArgs) {
     const { account, token } = session;
     if (parsed.data.scope === "everywhere") await revokeAllSessions(db, account.userId);
     else await revokeSession(db, token);
-    await audit(db, { workshopId: account.workshopId, actorUserId: account.userId, action: `auth.sign_out.${parsed.data.scope}`, entity: "user", entityId: account.userId });
+    await audit(db, {
+      workshopId: account.workshopId,
+      actorUserId: account.userId,
+      action: `auth.sign_out.${parsed.data.scope}`,
+      entity: "user",
+      entityId: account.userId,
+    });
   }
   return redirect(href("/"), { headers: { "Set-Cookie": sessionCookie(null, secure) } });
 }

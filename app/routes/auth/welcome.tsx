@@ -12,12 +12,24 @@ import { createWorkshop } from "~/workshop/create.server";
 import type { Route } from "./+types/welcome";
 
 const NewWorkshopSchema = z.object({
-  name: z.string().trim().min(2, "Give the workshop a name of at least 2 characters").max(80, "Keep the name under 80 characters"),
-  country: z.enum(COUNTRIES.map((c) => c.code) as [string, ...string[]], { message: "Choose a country from the list" }),
+  name: z
+    .string()
+    .trim()
+    .min(2, "Give the workshop a name of at least 2 characters")
+    .max(80, "Keep the name under 80 characters"),
+  country: z.enum(COUNTRIES.map((c) => c.code) as [string, ...string[]], {
+    message: "Choose a country from the list",
+  }),
   labourRatePerHour: z
     .string()
-    .transform((v, ctx) => parseDecimal(v) ?? (ctx.addIssue({ code: "custom", message: "The labour rate is a number, such as 84" }), z.NEVER))
-    .pipe(z.number().min(0, "The labour rate cannot be negative").max(10_000, "That labour rate looks too high")),
+    .transform(
+      (v, ctx) =>
+        parseDecimal(v) ??
+        (ctx.addIssue({ code: "custom", message: "The labour rate is a number, such as 84" }), z.NEVER),
+    )
+    .pipe(
+      z.number().min(0, "The labour rate cannot be negative").max(10_000, "That labour rate looks too high"),
+    ),
 });
 
 export async function loader({ request, context }: Route.LoaderArgs) {
@@ -53,8 +65,9 @@ export default function Welcome({ loaderData, actionData }: Route.ComponentProps
       <Wordmark />
       <h1 className="text-2xl font-semibold">Welcome, {loaderData.name}</h1>
       <p className="text-graphite-700">
-        No workshop has invited you yet. Set up your own and you become its admin; the starter knowledge base comes with it.
-        If you expected an invitation, ask your workshop admin to invite your GitHub login or e-mail.
+        No workshop has invited you yet. Set up your own and you become its admin; the starter knowledge base
+        comes with it. If you expected an invitation, ask your workshop admin to invite your GitHub login or
+        e-mail.
       </p>
       <FormMessages errors={errors} />
       <Form method="post" className="grid gap-4" noValidate>
@@ -76,10 +89,19 @@ export default function Welcome({ loaderData, actionData }: Route.ComponentProps
         </label>
         <label className="font-medium">
           Labour rate per hour
-          <input name="labourRatePerHour" inputMode="decimal" defaultValue="80" className={field} {...describedBy(errors, "labourRatePerHour")} />
+          <input
+            name="labourRatePerHour"
+            inputMode="decimal"
+            defaultValue="80"
+            className={field}
+            {...describedBy(errors, "labourRatePerHour")}
+          />
           <FieldError errors={errors} name="labourRatePerHour" />
         </label>
-        <button type="submit" className="min-h-tap rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700">
+        <button
+          type="submit"
+          className="min-h-tap rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700"
+        >
           Create the workshop
         </button>
       </Form>

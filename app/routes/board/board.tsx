@@ -10,8 +10,16 @@ export async function loader({ context }: Route.LoaderArgs) {
   const live = rows.filter((c) => c.state !== "closed");
   return {
     columns: [
-      { key: "bench", title: "On the bench", cases: live.filter((c) => c.state === "open" && !c.needsSenior) },
-      { key: "senior", title: "Needs a senior", cases: live.filter((c) => c.state === "awaiting_signoff" || (c.state === "open" && c.needsSenior)) },
+      {
+        key: "bench",
+        title: "On the bench",
+        cases: live.filter((c) => c.state === "open" && !c.needsSenior),
+      },
+      {
+        key: "senior",
+        title: "Needs a senior",
+        cases: live.filter((c) => c.state === "awaiting_signoff" || (c.state === "open" && c.needsSenior)),
+      },
       { key: "advisor", title: "Ready for the advisor", cases: live.filter((c) => c.state === "concluded") },
     ],
   };

@@ -10,7 +10,10 @@ import { dbContext } from "~/http/context";
 import type { Route } from "./+types/list";
 
 const FilterSchema = z.object({
-  state: z.enum(CASE_STATES).optional().or(z.literal("").transform(() => undefined)),
+  state: z
+    .enum(CASE_STATES)
+    .optional()
+    .or(z.literal("").transform(() => undefined)),
   q: z.string().trim().max(80, "Search at most 80 characters").optional(),
 });
 
@@ -18,7 +21,10 @@ export async function loader({ request, context }: Route.LoaderArgs) {
   const member = context.get(memberContext);
   const parsed = FilterSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
   if (!parsed.success) throw new Response(parsed.error.issues[0]?.message ?? "Bad filter", { status: 400 });
-  const cases = await listCases(context.get(dbContext), member.workshopId, { state: parsed.data.state, q: parsed.data.q || undefined });
+  const cases = await listCases(context.get(dbContext), member.workshopId, {
+    state: parsed.data.state,
+    q: parsed.data.q || undefined,
+  });
   return { cases, canOpen: can(member.role, "case:open") };
 }
 
@@ -33,7 +39,12 @@ export default function CaseList({ loaderData }: Route.ComponentProps) {
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h1 className="text-2xl font-semibold">Cases</h1>
         {loaderData.canOpen ? (
-          <Link to={href("/cases/new")} className="inline-flex min-h-tap items-center rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700">Open a case</Link>
+          <Link
+            to={href("/cases/new")}
+            className="inline-flex min-h-tap items-center rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700"
+          >
+            Open a case
+          </Link>
         ) : null}
       </div>
       <Form method="get" className="mt-4 flex flex-wrap items-end gap-3" role="search">
@@ -48,7 +59,11 @@ export default function CaseList({ loaderData }: Route.ComponentProps) {
         </label>
         <label className="flex flex-col text-sm font-medium">
           State
-          <select name="state" defaultValue={params.get("state") ?? ""} className="mt-1 min-h-tap rounded-lg border border-rule bg-card px-3 text-base">
+          <select
+            name="state"
+            defaultValue={params.get("state") ?? ""}
+            className="mt-1 min-h-tap rounded-lg border border-rule bg-card px-3 text-base"
+          >
             <option value="">Any</option>
             {CASE_STATES.map((s) => (
               <option key={s} value={s}>
@@ -57,7 +72,10 @@ export default function CaseList({ loaderData }: Route.ComponentProps) {
             ))}
           </select>
         </label>
-        <button type="submit" className="min-h-tap rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700">
+        <button
+          type="submit"
+          className="min-h-tap rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700"
+        >
           Show
         </button>
       </Form>

@@ -19,10 +19,19 @@ const Fresh = z.object({
   ownerName: z.string().trim().min(2, "The owner's name is needed"),
   ownerPhone: z.string().trim().max(40).optional(),
   registration: z.string().trim().toUpperCase().min(2, "The registration is needed").max(15),
-  vin: z.string().trim().toUpperCase().optional().transform((v) => v || undefined),
+  vin: z
+    .string()
+    .trim()
+    .toUpperCase()
+    .optional()
+    .transform((v) => v || undefined),
   make: z.string().trim().min(1, "Make is needed"),
   model: z.string().trim().min(1, "Model is needed"),
-  year: z.coerce.number().int().min(1950, "Year looks wrong").max(new Date().getFullYear() + 1, "Year looks wrong"),
+  year: z.coerce
+    .number()
+    .int()
+    .min(1950, "Year looks wrong")
+    .max(new Date().getFullYear() + 1, "Year looks wrong"),
   fuelType: z.enum(FUEL_TYPES),
   drivetrain: z.enum(DRIVETRAINS),
 });
@@ -35,12 +44,13 @@ const OpenSchema = z.intersection(
   }),
 );
 
-
-
 export async function loader({ context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "case:open");
   const db = context.get(dbContext);
-  const [list, workshop] = await Promise.all([listVehicles(db, member.workshopId), getWorkshop(db, member.workshopId)]);
+  const [list, workshop] = await Promise.all([
+    listVehicles(db, member.workshopId),
+    getWorkshop(db, member.workshopId),
+  ]);
   return { vehicles: list, units: workshop.units };
 }
 
@@ -76,7 +86,15 @@ export function meta() {
 
 const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base";
 
-const NEW_FIELDS = [["ownerName", "Owner's name"], ["ownerPhone", "Owner's phone"], ["registration", "Registration"], ["vin", "VIN (optional)"], ["make", "Make"], ["model", "Model"], ["year", "Year"]] as const;
+const NEW_FIELDS = [
+  ["ownerName", "Owner's name"],
+  ["ownerPhone", "Owner's phone"],
+  ["registration", "Registration"],
+  ["vin", "VIN (optional)"],
+  ["make", "Make"],
+  ["model", "Model"],
+  ["year", "Year"],
+] as const;
 
 export default function NewCase({ loaderData, actionData }: Route.ComponentProps) {
   const errors = actionData?.errors;
@@ -89,29 +107,72 @@ export default function NewCase({ loaderData, actionData }: Route.ComponentProps
       <Form method="post" className="mt-4 grid gap-4" noValidate>
         <fieldset className="grid gap-2 rounded-card border border-rule bg-card p-4">
           <legend className="px-1 font-semibold">Vehicle on file</legend>
-          <label className="flex min-h-tap items-center gap-2"><input type="radio" name="mode" value="known" defaultChecked /> Pick from the list</label>
+          <label className="flex min-h-tap items-center gap-2">
+            <input type="radio" name="mode" value="known" defaultChecked /> Pick from the list
+          </label>
           <select name="vehicleId" aria-label="Vehicle" className={field} {...described("vehicleId")}>
             {loaderData.vehicles.map((v) => (
-              <option key={v.id} value={v.id}>{v.registration} — {v.make} {v.model} ({v.owner})</option>
+              <option key={v.id} value={v.id}>
+                {v.registration} — {v.make} {v.model} ({v.owner})
+              </option>
             ))}
           </select>
           {err("vehicleId")}
-          <label className="mt-2 flex min-h-tap items-center gap-2"><input type="radio" name="mode" value="new" /> A new owner and vehicle</label>
+          <label className="mt-2 flex min-h-tap items-center gap-2">
+            <input type="radio" name="mode" value="new" /> A new owner and vehicle
+          </label>
           <div className="grid gap-2 sm:grid-cols-2">
             {NEW_FIELDS.map(([name, label]) => (
-              <label key={name} className="text-sm font-medium">{label}<input name={name} className={field} {...described(name)} />{err(name)}</label>
+              <label key={name} className="text-sm font-medium">
+                {label}
+                <input name={name} className={field} {...described(name)} />
+                {err(name)}
+              </label>
             ))}
-            <label className="text-sm font-medium">Fuel<select name="fuelType" className={field}>{FUEL_TYPES.map((f) => <option key={f} value={f}>{FUEL_LABEL[f]}</option>)}</select></label>
-            <label className="text-sm font-medium">Drive<select name="drivetrain" className={field}>{DRIVETRAINS.map((f) => <option key={f} value={f}>{DRIVETRAIN_LABEL[f]}</option>)}</select></label>
+            <label className="text-sm font-medium">
+              Fuel
+              <select name="fuelType" className={field}>
+                {FUEL_TYPES.map((f) => (
+                  <option key={f} value={f}>
+                    {FUEL_LABEL[f]}
+                  </option>
+                ))}
+              </select>
+            </label>
+            <label className="text-sm font-medium">
+              Drive
+              <select name="drivetrain" className={field}>
+                {DRIVETRAINS.map((f) => (
+                  <option key={f} value={f}>
+                    {DRIVETRAIN_LABEL[f]}
+                  </option>
+                ))}
+              </select>
+            </label>
           </div>
         </fieldset>
         <label className="font-medium">
           Mileage ({mileageUnit(loaderData.units)})
-          <input name="mileage" inputMode="numeric" placeholder={loaderData.units === "imperial" ? "e.g. 84,000" : "e.g. 135,000"} className={field} {...described("mileage")} />
+          <input
+            name="mileage"
+            inputMode="numeric"
+            placeholder={loaderData.units === "imperial" ? "e.g. 84,000" : "e.g. 135,000"}
+            className={field}
+            {...described("mileage")}
+          />
           {err("mileage")}
         </label>
-        <label className="font-medium">Complaint, in the owner's words<textarea name="complaint" rows={3} className={`${field} py-2`} {...described("complaint")} />{err("complaint")}</label>
-        <button type="submit" className="min-h-tap rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700">Open the case</button>
+        <label className="font-medium">
+          Complaint, in the owner's words
+          <textarea name="complaint" rows={3} className={`${field} py-2`} {...described("complaint")} />
+          {err("complaint")}
+        </label>
+        <button
+          type="submit"
+          className="min-h-tap rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700"
+        >
+          Open the case
+        </button>
       </Form>
     </div>
   );

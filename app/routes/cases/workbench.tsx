@@ -34,7 +34,11 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const bundle = await loadCase(db, member, params.caseId);
   const view: CaseView = await caseView(db, member, bundle);
   // The browser keeps one built index per knowledge-base version instead of rebuilding on every revalidation.
-  const quickFindCacheKey = quickFindKey(member.workshopId, `${bundle.workshop.kbVersion}-${bundle.id}`, "case");
+  const quickFindCacheKey = quickFindKey(
+    member.workshopId,
+    `${bundle.workshop.kbVersion}-${bundle.id}`,
+    "case",
+  );
   const canWork = bundle.state === "open" && mayWorkOn(member, bundle);
   return {
     // The shape the browser later fetches from /api/cases/:id, so the live copy starts from it.
@@ -93,9 +97,11 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
     setNotice(null);
     evidence.mutate(back);
   };
-  const record: RecordResult = (step, r) => change({ kind: "find", checkId: step.checkId, name: step.name, ...r });
+  const record: RecordResult = (step, r) =>
+    change({ kind: "find", checkId: step.checkId, name: step.name, ...r });
   const failed = evidence.isError ? evidence.variables : undefined;
-  const errorFor = (checkId: string) => (failed?.kind === "find" && failed.checkId === checkId ? evidence.error!.message : null);
+  const errorFor = (checkId: string) =>
+    failed?.kind === "find" && failed.checkId === checkId ? evidence.error!.message : null;
   const planError = evidence.isError && failed?.kind !== "find" ? evidence.error!.message : null;
   const concluded = c.state !== "open" && c.conclusionCause;
   const apprentice = me.role === "apprentice" && me.canWork;
@@ -104,7 +110,10 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
     <>
       <ConfirmedCause state={c.state} cause={c.conclusionCause!} notes={c.conclusionNotes} />
       <section className="rounded-card border border-rule bg-card p-4">
-        <Fold summaryClassName="min-h-tap cursor-pointer content-center font-semibold" summary="How the likely causes stood">
+        <Fold
+          summaryClassName="min-h-tap cursor-pointer content-center font-semibold"
+          summary="How the likely causes stood"
+        >
           <div className="mt-2">{causes}</div>
         </Fold>
       </section>
@@ -112,7 +121,9 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
   ) : (
     causes
   );
-  const evidenceList = <EvidenceList c={c} canWork={me.canWork} remove={(kind, itemId) => change({ kind, id: itemId })} />;
+  const evidenceList = (
+    <EvidenceList c={c} canWork={me.canWork} remove={(kind, itemId) => change({ kind, id: itemId })} />
+  );
   const conclusion = (
     <ConclusionPanel
       state={c.state}
@@ -133,7 +144,15 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
         c={c}
         mayEditComplaint={me.mayEditComplaint}
         errors={actionData?.errors}
-        quickFind={me.canWork ? <CaseQuickFind cacheKey={quickFindCacheKey} recent={c.observations.map((o) => o.symptomId)} onAdd={(e, present) => change({ kind: "observe", symptomId: e.id, name: e.title, present })} /> : null}
+        quickFind={
+          me.canWork ? (
+            <CaseQuickFind
+              cacheKey={quickFindCacheKey}
+              recent={c.observations.map((o) => o.symptomId)}
+              onAdd={(e, present) => change({ kind: "observe", symptomId: e.id, name: e.title, present })}
+            />
+          ) : null
+        }
       />
       <SeniorNotes question={c.question} seniorNote={c.seniorNote} needsSenior={c.needsSenior} />
       <FormMessages errors={actionData?.errors} notice={actionData?.notice} />
@@ -141,7 +160,17 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
         // Under a car on a phone: the next check, Ask a senior and the evidence come before the statistics.
         <div className="grid gap-4 lg:grid-cols-[1.1fr_1fr]">
           <div className="grid content-start gap-4">
-            <ApprenticeMode plan={d.plan} currency={c.workshop.currency} units={units} record={record} busy={evidence.isPending} error={planError} errorFor={errorFor} needsSenior={c.needsSenior} errors={actionData?.errors} />
+            <ApprenticeMode
+              plan={d.plan}
+              currency={c.workshop.currency}
+              units={units}
+              record={record}
+              busy={evidence.isPending}
+              error={planError}
+              errorFor={errorFor}
+              needsSenior={c.needsSenior}
+              errors={actionData?.errors}
+            />
             {evidenceList}
           </div>
           <div className="grid content-start gap-4">
@@ -157,13 +186,30 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
             {evidenceList}
           </div>
           <div className="grid content-start gap-4">
-            {me.canWork ? <CheckPlan plan={d.plan} currency={c.workshop.currency} units={units} record={record} busy={evidence.isPending} error={planError} errorFor={errorFor} /> : null}
+            {me.canWork ? (
+              <CheckPlan
+                plan={d.plan}
+                currency={c.workshop.currency}
+                units={units}
+                record={record}
+                busy={evidence.isPending}
+                error={planError}
+                errorFor={errorFor}
+              />
+            ) : null}
             {conclusion}
             <CaseHistory caseId={c.id} />
           </div>
         </div>
       )}
-      {notice ? <UndoNotice said={notice.said} busy={evidence.isPending} onDone={dismiss} onUndo={notice.undo ? () => undo(notice.undo!) : null} /> : null}
+      {notice ? (
+        <UndoNotice
+          said={notice.said}
+          busy={evidence.isPending}
+          onDone={dismiss}
+          onUndo={notice.undo ? () => undo(notice.undo!) : null}
+        />
+      ) : null}
     </div>
   );
 }

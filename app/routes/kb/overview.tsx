@@ -14,7 +14,6 @@ export function meta() {
   return [{ title: "Knowledge base — Ramplight" }];
 }
 
-
 export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
   const { counts, tree, symptoms } = loaderData;
   const systems = tree.filter((n) => n.level === "system");
@@ -38,17 +37,25 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
       </dl>
       <div className="mt-8 grid gap-8 lg:grid-cols-2">
         <section aria-labelledby="tree">
-          <h2 id="tree" className="text-xl font-semibold">Cause tree</h2>
+          <h2 id="tree" className="text-xl font-semibold">
+            Cause tree
+          </h2>
           {systems.map((sys) => (
             <details key={sys.id} className="mt-3 rounded-card border border-rule bg-card p-3">
-              <summary className="min-h-tap cursor-pointer content-center font-semibold">{SYSTEM_LABEL[sys.system as keyof typeof SYSTEM_LABEL] ?? sys.name}</summary>
+              <summary className="min-h-tap cursor-pointer content-center font-semibold">
+                {SYSTEM_LABEL[sys.system as keyof typeof SYSTEM_LABEL] ?? sys.name}
+              </summary>
               <ul className="mt-2 grid gap-2">
                 {childrenOf(sys.id).map((comp) => (
                   <li key={comp.id}>
                     <p className="font-medium">{comp.name}</p>
                     <ul className="ml-4 grid gap-1">
                       {childrenOf(comp.id).map((fm) => (
-                        <li key={fm.id} id={`cause-${fm.id}`} className="flex items-center justify-between gap-2 text-graphite-800">
+                        <li
+                          key={fm.id}
+                          id={`cause-${fm.id}`}
+                          className="flex items-center justify-between gap-2 text-graphite-800"
+                        >
                           <span>{fm.name}</span>
                           {fm.priority ? <PriorityMark priority={fm.priority} /> : null}
                         </li>
@@ -61,12 +68,16 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
           ))}
         </section>
         <section aria-labelledby="symptoms">
-          <h2 id="symptoms" className="text-xl font-semibold">Symptoms</h2>
+          <h2 id="symptoms" className="text-xl font-semibold">
+            Symptoms
+          </h2>
           <ul className="mt-3 grid gap-2">
             {symptoms.map((s) => (
               <li key={s.id} id={`symptom-${s.id}`} className="rounded-lg border border-rule bg-card p-3">
                 <p className="font-medium">{s.name}</p>
-                {s.synonyms.length ? <p className="text-sm text-graphite-600">Also: {s.synonyms.join(", ")}</p> : null}
+                {s.synonyms.length ? (
+                  <p className="text-sm text-graphite-600">Also: {s.synonyms.join(", ")}</p>
+                ) : null}
               </li>
             ))}
           </ul>

@@ -31,7 +31,11 @@ export default function AuditLog({ loaderData }: Route.ComponentProps) {
                 <strong>{e.actor ?? "Ramplight"}</strong> {d.text}
                 {d.href ? (
                   <>
-                    {" "}· <Link to={d.href} className="font-medium text-uv-700 underline">{d.linkText}</Link>
+                    {" "}
+                    ·{" "}
+                    <Link to={d.href} className="font-medium text-uv-700 underline">
+                      {d.linkText}
+                    </Link>
                   </>
                 ) : null}
               </p>

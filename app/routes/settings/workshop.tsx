@@ -12,19 +12,32 @@ import { getWorkshop, updateWorkshop } from "~/workshop/settings.server";
 import type { Route } from "./+types/workshop";
 
 // A number as people type it in a form: "1,250.50" is 1250.5 (thousands separators allowed).
-const decimal = (message: string) => z.string().transform((v, ctx) => parseDecimal(v) ?? (ctx.addIssue({ code: "custom", message }), z.NEVER));
+const decimal = (message: string) =>
+  z.string().transform((v, ctx) => parseDecimal(v) ?? (ctx.addIssue({ code: "custom", message }), z.NEVER));
 
 const SettingsSchema = z.object({
   name: z.string().trim().min(2, "The name needs at least 2 characters").max(80),
-  currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, "Currency is a three-letter ISO 4217 code, such as GBP or EUR"),
-  taxRatePercent: decimal("Tax rate is a number, such as 20").pipe(z.number().min(0, "Tax rate cannot be negative").max(99, "Tax rate must be under 100%")),
+  currency: z
+    .string()
+    .trim()
+    .toUpperCase()
+    .regex(/^[A-Z]{3}$/, "Currency is a three-letter ISO 4217 code, such as GBP or EUR"),
+  taxRatePercent: decimal("Tax rate is a number, such as 20").pipe(
+    z.number().min(0, "Tax rate cannot be negative").max(99, "Tax rate must be under 100%"),
+  ),
   units: z.enum(UNIT_SYSTEMS, { message: "Choose metric or imperial" }),
-  labourRatePerHour: decimal("Labour rate is a number, such as 84 or 1,250.50").pipe(z.number().min(0, "Labour rate cannot be negative").max(10_000, "Labour rate is at most 10,000 per hour")),
+  labourRatePerHour: decimal("Labour rate is a number, such as 84 or 1,250.50").pipe(
+    z.number().min(0, "Labour rate cannot be negative").max(10_000, "Labour rate is at most 10,000 per hour"),
+  ),
 });
 
 export async function loader({ context }: Route.LoaderArgs) {
   const member = context.get(memberContext);
-  return { workshop: await getWorkshop(context.get(dbContext), member.workshopId), canEdit: can(member.role, "settings:manage"), role: member.role };
+  return {
+    workshop: await getWorkshop(context.get(dbContext), member.workshopId),
+    canEdit: can(member.role, "settings:manage"),
+    role: member.role,
+  };
 }
 
 export async function action({ request, context }: Route.ActionArgs) {
@@ -33,7 +46,10 @@ export async function action({ request, context }: Route.ActionArgs) {
   if (!form.ok) return form.answer;
   const { taxRatePercent, ...rest } = form.value;
   return onForm(async () => {
-    await updateWorkshop(context.get(dbContext), member, { ...rest, taxRate: Math.round(taxRatePercent * 100) / 10_000 });
+    await updateWorkshop(context.get(dbContext), member, {
+      ...rest,
+      taxRate: Math.round(taxRatePercent * 100) / 10_000,
+    });
     return "Settings saved.";
   });
 }
@@ -50,11 +66,30 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
   const err = (k: string) => <FieldError errors={errors} name={k} />;
   const links = (
     <nav aria-label="Settings" className="mt-3 flex flex-wrap items-center gap-3">
-      {loaderData.canEdit ? <Link className="inline-flex min-h-tap items-center font-medium text-uv-700 underline" to={href("/settings/members")}>Members</Link> : null}
-      {loaderData.role === "admin" || loaderData.role === "senior" ? <Link className="inline-flex min-h-tap items-center font-medium text-uv-700 underline" to={href("/settings/audit")}>Audit log</Link> : null}
+      {loaderData.canEdit ? (
+        <Link
+          className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+          to={href("/settings/members")}
+        >
+          Members
+        </Link>
+      ) : null}
+      {loaderData.role === "admin" || loaderData.role === "senior" ? (
+        <Link
+          className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+          to={href("/settings/audit")}
+        >
+          Audit log
+        </Link>
+      ) : null}
       <Form method="post" action={href("/sign-out")} className="ml-auto">
         <input type="hidden" name="scope" value="everywhere" />
-        <button type="submit" className="min-h-tap rounded-lg border border-rule px-3 font-medium hover:bg-paper">Sign out on every device</button>
+        <button
+          type="submit"
+          className="min-h-tap rounded-lg border border-rule px-3 font-medium hover:bg-paper"
+        >
+          Sign out on every device
+        </button>
       </Form>
     </nav>
   );
@@ -88,19 +123,61 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
       {links}
       <FormMessages errors={errors} notice={actionData?.notice} className="mt-3" />
       <Form method="post" className="mt-4 grid max-w-xl gap-4" noValidate>
-        <label className="font-medium">Name<input name="name" defaultValue={w.name} className={field} {...describedBy(errors, "name")} />{err("name")}</label>
+        <label className="font-medium">
+          Name
+          <input name="name" defaultValue={w.name} className={field} {...describedBy(errors, "name")} />
+          {err("name")}
+        </label>
         <p className="text-graphite-600">Country: {w.country}</p>
-        <label className="font-medium">Currency<input name="currency" defaultValue={w.currency} className={field} {...describedBy(errors, "currency")} />{err("currency")}</label>
-        <label className="font-medium">Tax rate (%)<input name="taxRatePercent" inputMode="decimal" defaultValue={String(Math.round(w.taxRate * 10_000) / 100)} className={field} {...describedBy(errors, "taxRatePercent")} />{err("taxRatePercent")}</label>
+        <label className="font-medium">
+          Currency
+          <input
+            name="currency"
+            defaultValue={w.currency}
+            className={field}
+            {...describedBy(errors, "currency")}
+          />
+          {err("currency")}
+        </label>
+        <label className="font-medium">
+          Tax rate (%)
+          <input
+            name="taxRatePercent"
+            inputMode="decimal"
+            defaultValue={String(Math.round(w.taxRate * 10_000) / 100)}
+            className={field}
+            {...describedBy(errors, "taxRatePercent")}
+          />
+          {err("taxRatePercent")}
+        </label>
         <label className="font-medium">
           Units
           <select name="units" defaultValue={w.units} className={field}>
-            {UNIT_SYSTEMS.map((u) => <option key={u} value={u}>{UNIT_SYSTEM_LABEL[u]}</option>)}
+            {UNIT_SYSTEMS.map((u) => (
+              <option key={u} value={u}>
+                {UNIT_SYSTEM_LABEL[u]}
+              </option>
+            ))}
           </select>
           {err("units")}
         </label>
-        <label className="font-medium">Labour rate per hour<input name="labourRatePerHour" inputMode="decimal" defaultValue={String(w.labourRatePerHour)} className={field} {...describedBy(errors, "labourRatePerHour")} />{err("labourRatePerHour")}</label>
-        <button type="submit" className="min-h-tap rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700">Save settings</button>
+        <label className="font-medium">
+          Labour rate per hour
+          <input
+            name="labourRatePerHour"
+            inputMode="decimal"
+            defaultValue={String(w.labourRatePerHour)}
+            className={field}
+            {...describedBy(errors, "labourRatePerHour")}
+          />
+          {err("labourRatePerHour")}
+        </label>
+        <button
+          type="submit"
+          className="min-h-tap rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700"
+        >
+          Save settings
+        </button>
       </Form>
     </div>
   );

@@ -5,5 +5,10 @@ import { chassisCases } from "./cases-chassis";
 import { missingCauseCases } from "./cases-missing";
 import { powertrainCases } from "./cases-powertrain";
 
-export const benchCases: BenchCase[] = [...chassisCases, ...powertrainCases, ...bodySystemCases, ...missingCauseCases];
+export const benchCases: BenchCase[] = [
+  ...chassisCases,
+  ...powertrainCases,
+  ...bodySystemCases,
+  ...missingCauseCases,
+];
 export type { BenchCase } from "./case-types";

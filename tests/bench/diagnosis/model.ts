@@ -14,9 +14,31 @@ export const LABOUR_RATE = 60;
 export function knowledgeFromSeed(): Knowledge {
   return {
     kbVersion: 1,
-    symptoms: kb.symptoms.map((s) => ({ id: s.key, name: s.name, leak: s.leak, synonyms: s.synonyms, conditions: s.conditions, system: s.system })),
-    causes: kb.causes.map((c) => ({ id: c.key, parentId: c.parentKey, level: c.level, name: c.name, baseRate: c.baseRate ?? null, applicability: c.applicability ?? {} })),
-    checks: kb.checks.map((k) => ({ id: k.key, name: k.name, minutes: k.minutes, consumablesCost: k.consumablesCost, access: k.access, skill: k.skill, falseAlarm: k.falseAlarm })),
+    symptoms: kb.symptoms.map((s) => ({
+      id: s.key,
+      name: s.name,
+      leak: s.leak,
+      synonyms: s.synonyms,
+      conditions: s.conditions,
+      system: s.system,
+    })),
+    causes: kb.causes.map((c) => ({
+      id: c.key,
+      parentId: c.parentKey,
+      level: c.level,
+      name: c.name,
+      baseRate: c.baseRate ?? null,
+      applicability: c.applicability ?? {},
+    })),
+    checks: kb.checks.map((k) => ({
+      id: k.key,
+      name: k.name,
+      minutes: k.minutes,
+      consumablesCost: k.consumablesCost,
+      access: k.access,
+      skill: k.skill,
+      falseAlarm: k.falseAlarm,
+    })),
     symptomLinks: kb.symptomLinks.map((l) => ({ symptomId: l.symptom, causeId: l.cause, p: l.p })),
     checkLinks: kb.checkLinks.map((l) => ({ checkId: l.check, causeId: l.cause, pFail: l.pFail })),
   };
@@ -27,11 +49,11 @@ const symptomExtra = new Map<string, Extra>();
 for (const s of kb.symptoms) if (s.unlisted !== undefined) symptomExtra.set(s.key, { unlisted: s.unlisted });
 const linkExtra = new Map<string, Extra>();
 const bearExtra = new Map<string, Extra>();
-for (const l of kb.symptomLinks as (typeof kb.symptomLinks[number] & Extra)[]) {
+for (const l of kb.symptomLinks as ((typeof kb.symptomLinks)[number] & Extra)[]) {
   const { symptom, cause, p: _p, ...rest } = l;
   if (Object.keys(rest).length) linkExtra.set(`${symptom}|${cause}`, rest);
 }
-for (const l of kb.checkLinks as (typeof kb.checkLinks[number] & Extra)[]) {
+for (const l of kb.checkLinks as ((typeof kb.checkLinks)[number] & Extra)[]) {
   const { check, cause, pFail: _p, ...rest } = l;
   if (Object.keys(rest).length) bearExtra.set(`${check}|${cause}`, rest);
 }
@@ -39,12 +61,19 @@ for (const l of kb.checkLinks as (typeof kb.checkLinks[number] & Extra)[]) {
 const knowledge = knowledgeFromSeed();
 
 export function modelFor(vehicle: Vehicle): Model {
-  const model = buildModel(knowledge, { fuel: vehicle.fuel, drivetrain: vehicle.drivetrain, ageYears: vehicle.ageYears, km: vehicle.km }, LABOUR_RATE);
+  const model = buildModel(
+    knowledge,
+    { fuel: vehicle.fuel, drivetrain: vehicle.drivetrain, ageYears: vehicle.ageYears, km: vehicle.km },
+    LABOUR_RATE,
+  );
   if (linkExtra.size === 0 && bearExtra.size === 0 && symptomExtra.size === 0) return model;
   return {
     ...model,
     symptoms: model.symptoms.map((s) => ({ ...s, ...symptomExtra.get(s.id) })),
     links: model.links.map((l) => ({ ...l, ...linkExtra.get(`${l.symptomId}|${l.causeId}`) })),
-    checks: model.checks.map((k) => ({ ...k, bears: k.bears.map((b) => ({ ...b, ...bearExtra.get(`${k.id}|${b.causeId}`) })) })),
+    checks: model.checks.map((k) => ({
+      ...k,
+      bears: k.bears.map((b) => ({ ...b, ...bearExtra.get(`${k.id}|${b.causeId}`) })),
+    })),
   };
 }

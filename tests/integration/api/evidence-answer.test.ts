@@ -12,19 +12,31 @@ async function read(id: string, cookie: string) {
 }
 
 // Dates come back as ISO strings either way; compare the JSON.
-const same = (a: unknown, b: unknown) => expect(JSON.parse(JSON.stringify(a))).toEqual(JSON.parse(JSON.stringify(b)));
+const same = (a: unknown, b: unknown) =>
+  expect(JSON.parse(JSON.stringify(a))).toEqual(JSON.parse(JSON.stringify(b)));
 
 describe("the answer to a change is the case as it now stands", () => {
   it("after an observation, a changed observation, a finding, a reading and two removals", async () => {
     const cookie = await cookieFor(testDb(), "priya-hale");
     const id = await freshCase(testDb());
     const post = (kind: "observations" | "findings", json: unknown) =>
-      run(kind === "findings" ? findingsAction : observationsAction, testDb(), request(`/api/cases/${id}/${kind}`, { cookie, json }), { caseId: id });
+      run(
+        kind === "findings" ? findingsAction : observationsAction,
+        testDb(),
+        request(`/api/cases/${id}/${kind}`, { cookie, json }),
+        { caseId: id },
+      );
     const del = (kind: "observations" | "findings", itemId: string) =>
-      run(kind === "findings" ? findingsAction : observationsAction, testDb(), request(`/api/cases/${id}/${kind}/${itemId}`, { cookie, method: "DELETE" }), { caseId: id, itemId });
+      run(
+        kind === "findings" ? findingsAction : observationsAction,
+        testDb(),
+        request(`/api/cases/${id}/${kind}/${itemId}`, { cookie, method: "DELETE" }),
+        { caseId: id, itemId },
+      );
 
     const steps = [
-      () => post("observations", { symptomId: symptomId("vibration_braking"), present: true, source: "owner" }),
+      () =>
+        post("observations", { symptomId: symptomId("vibration_braking"), present: true, source: "owner" }),
       () => post("observations", { symptomId: symptomId("vibration_braking"), present: false }), // the same symptom, answered again
       () => post("observations", { symptomId: symptomId("squeal_braking"), present: true }),
       () => post("findings", { checkId: checkId("brake_road_test"), result: "fail" }),

@@ -9,14 +9,27 @@ import { action as findingsAction } from "~/routes/api/findings";
 import { action as observationsAction } from "~/routes/api/observations";
 import { seedId } from "../../../seeds/ids";
 import { testDb } from "../../setup/integration-worker";
-import { caseId, checkId, cookieFor, isCleanError, request, run, snapshot, symptomId, type Send } from "./helpers";
+import {
+  caseId,
+  checkId,
+  cookieFor,
+  isCleanError,
+  request,
+  run,
+  snapshot,
+  symptomId,
+  type Send,
+} from "./helpers";
 
 type Kind = "observations" | "findings";
 const handler = (kind: Kind) => (kind === "findings" ? findingsAction : observationsAction);
 
 async function as(login: string, kind: Kind, id: string, send: Send, itemId?: string) {
   const path = `/api/cases/${id}/${kind}${itemId ? `/${itemId}` : ""}`;
-  return run(handler(kind), testDb(), request(path, { cookie: await cookieFor(testDb(), login), ...send }), { caseId: id, itemId });
+  return run(handler(kind), testDb(), request(path, { cookie: await cookieFor(testDb(), login), ...send }), {
+    caseId: id,
+    itemId,
+  });
 }
 
 async function refused(login: string, kind: Kind, id: string, send: Send, status: number, itemId?: string) {
@@ -42,7 +55,9 @@ describe("an apprentice (Ollie Mbeki; seeds/demo/people.ts)", () => {
     const o = await as("ollie-mbeki", "observations", caseId("b2"), obs("grinding_braking"));
     const f = await as("ollie-mbeki", "findings", caseId("b2"), pass("disc_surface_visual"));
     // pad_thickness is apprentice level with rule `value >= 3 mm`: 4 mm ≥ 3 mm passes.
-    const m = await as("ollie-mbeki", "findings", caseId("b2"), { json: { checkId: checkId("pad_thickness"), reading: "4 mm" } });
+    const m = await as("ollie-mbeki", "findings", caseId("b2"), {
+      json: { checkId: checkId("pad_thickness"), reading: "4 mm" },
+    });
     expect([o.status, f.status, m.status]).toEqual([201, 201, 201]);
     expect(m.body.result).toBe("pass");
     const after = await snapshot(testDb(), caseId("b2"));
@@ -53,7 +68,13 @@ describe("an apprentice (Ollie Mbeki; seeds/demo/people.ts)", () => {
 
   it("is refused a check above his skill on his own case", async () => {
     // disc_runout_dial_gauge needs a technician, brake_bleed_judgement a senior (seeds/kb/brakes.ts).
-    const a = await refused("ollie-mbeki", "findings", caseId("b2"), { json: { checkId: checkId("disc_runout_dial_gauge"), reading: "0.03 mm" } }, 403);
+    const a = await refused(
+      "ollie-mbeki",
+      "findings",
+      caseId("b2"),
+      { json: { checkId: checkId("disc_runout_dial_gauge"), reading: "0.03 mm" } },
+      403,
+    );
     expect(a.body.error).toMatch(/technician/);
     await refused("ollie-mbeki", "findings", caseId("b2"), pass("brake_bleed_judgement"), 403);
   });
@@ -68,7 +89,13 @@ describe("roles that never record evidence", () => {
   });
 
   it("refuses the role before validating the body: an advisor's invalid finding is 403, not 400", async () => {
-    await refused("dana-reyes", "findings", caseId("b1"), { json: { checkId: "not-an-id", result: "maybe" } }, 403);
+    await refused(
+      "dana-reyes",
+      "findings",
+      caseId("b1"),
+      { json: { checkId: "not-an-id", result: "maybe" } },
+      403,
+    );
   });
 
   it("refuses a body that is not JSON at all with 400 for anyone, before any role is looked at", async () => {
@@ -93,7 +120,10 @@ describe("removing evidence", () => {
     expect(await testDb().select().from(observations).where(eq(observations.id, id))).toEqual([]);
     const after = await snapshot(testDb(), caseId("b1"));
     expect(after.observations).toBe(before.observations - 1);
-    const rows = await testDb().select().from(auditLog).where(and(eq(auditLog.entityId, caseId("b1")), eq(auditLog.action, "case.observation_remove")));
+    const rows = await testDb()
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.entityId, caseId("b1")), eq(auditLog.action, "case.observation_remove")));
     expect(rows).toHaveLength(1);
   });
 
@@ -103,7 +133,12 @@ describe("removing evidence", () => {
     const a = await as("priya-hale", "findings", caseId("b1"), { method: "DELETE" }, added.body.id as string);
     expect(a.status).toBe(200);
     expect(JSON.stringify(a.body.view)).not.toContain(added.body.id as string);
-    expect(await testDb().select().from(findings).where(eq(findings.id, added.body.id as string))).toEqual([]);
+    expect(
+      await testDb()
+        .select()
+        .from(findings)
+        .where(eq(findings.id, added.body.id as string)),
+    ).toEqual([]);
     // Gone, so the same check may be recorded again.
     expect((await as("priya-hale", "findings", caseId("b1"), pass("brake_road_test"))).status).toBe(201);
   });
@@ -116,7 +151,9 @@ describe("removing evidence", () => {
   it("DELETE of another case's item through this case answers 404 and leaves it", async () => {
     const b2Squeal = seedId("obs:b2:squeal_braking"); // the seed's id scheme (seeds/demo.ts)
     await refused("priya-hale", "observations", caseId("b1"), { method: "DELETE" }, 404, b2Squeal);
-    expect(await testDb().select({ id: observations.id }).from(observations).where(eq(observations.id, b2Squeal))).toHaveLength(1);
+    expect(
+      await testDb().select({ id: observations.id }).from(observations).where(eq(observations.id, b2Squeal)),
+    ).toHaveLength(1);
   });
 
   it("DELETE with an item id that is not a uuid answers 404, like an unknown one", async () => {

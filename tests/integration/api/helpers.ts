@@ -46,7 +46,14 @@ export async function memberFor(db: Db, login: string): Promise<CurrentMember> {
   return asMember(account);
 }
 
-export type Send = { method?: string; cookie?: string | null; json?: unknown; raw?: string; origin?: string | null; headers?: Record<string, string> };
+export type Send = {
+  method?: string;
+  cookie?: string | null;
+  json?: unknown;
+  raw?: string;
+  origin?: string | null;
+  headers?: Record<string, string>;
+};
 
 /** A request as the browser's own fetch sends it: cookie, same origin on writes, JSON body. */
 export function request(path: string, send: Send = {}): Request {
@@ -63,13 +70,22 @@ export function request(path: string, send: Send = {}): Request {
 }
 
 type Handler = (args: never) => unknown;
-export type Answer = { status: number; body: Record<string, unknown> & { error?: string }; contentType: string | null };
+export type Answer = {
+  status: number;
+  body: Record<string, unknown> & { error?: string };
+  contentType: string | null;
+};
 
 /**
  * Runs a loader or action with the given params and reads its JSON answer. The request first
  * passes the root middleware's guard, as every request to the server does.
  */
-export async function run(handler: Handler, db: Db, req: Request, params: Record<string, string | undefined>): Promise<Answer> {
+export async function run(
+  handler: Handler,
+  db: Db,
+  req: Request,
+  params: Record<string, string | undefined>,
+): Promise<Answer> {
   let res: Response;
   try {
     await guardRequest(req, APP);
@@ -79,13 +95,22 @@ export async function run(handler: Handler, db: Db, req: Request, params: Record
     res = refused;
   }
   const text = await res.text();
-  return { status: res.status, body: text ? (JSON.parse(text) as Answer["body"]) : {}, contentType: res.headers.get("content-type") };
+  return {
+    status: res.status,
+    body: text ? (JSON.parse(text) as Answer["body"]) : {},
+    contentType: res.headers.get("content-type"),
+  };
 }
 
 /** Every refusal is `{ error: string }` in JSON, with no stack trace (app/http.server.ts). */
 export function isCleanError(a: Answer): boolean {
   const raw = JSON.stringify(a.body);
-  return Boolean(a.contentType?.includes("application/json")) && typeof a.body.error === "string" && a.body.error.length > 0 && !/\n\s+at |\.ts:\d+|node_modules/.test(raw);
+  return (
+    Boolean(a.contentType?.includes("application/json")) &&
+    typeof a.body.error === "string" &&
+    a.body.error.length > 0 &&
+    !/\n\s+at |\.ts:\d+|node_modules/.test(raw)
+  );
 }
 
 /** Rows a refused request must leave alone: the case's evidence and the whole audit log. */
@@ -102,22 +127,32 @@ export async function snapshot(db: Db, caseIdValue: string) {
 }
 
 export async function findingRow(db: Db, caseIdValue: string, check: string) {
-  const [row] = await db.select().from(findings).where(and(eq(findings.caseId, caseIdValue), eq(findings.checkId, check)));
+  const [row] = await db
+    .select()
+    .from(findings)
+    .where(and(eq(findings.caseId, caseIdValue), eq(findings.checkId, check)));
   return row;
 }
 
 /** A fresh open case on a demo vehicle, assigned to whoever opens it (workflow.server's openCase). */
 export async function freshCase(db: Db, login = "priya-hale", vehicle = "orlan-brisk") {
-  const created = await openCase(db, await memberFor(db, login), { vehicleId: seedId(`vehicle:${vehicle}`), mileageKm: 70_000, complaint: "Test case: judder under braking." });
+  const created = await openCase(db, await memberFor(db, login), {
+    vehicleId: seedId(`vehicle:${vehicle}`),
+    mileageKm: 70_000,
+    complaint: "Test case: judder under braking.",
+  });
   return created.id;
 }
 
 /** The refusal a server module threw (app/http.server.ts's refuse), as status and JSON body. */
-export async function refusal(work: Promise<unknown>): Promise<{ status: number; body: Record<string, unknown> }> {
+export async function refusal(
+  work: Promise<unknown>,
+): Promise<{ status: number; body: Record<string, unknown> }> {
   try {
     await work;
   } catch (error) {
-    if (error instanceof Response) return { status: error.status, body: (await error.json()) as Record<string, unknown> };
+    if (error instanceof Response)
+      return { status: error.status, body: (await error.json()) as Record<string, unknown> };
     throw error;
   }
   throw new Error("expected a refusal, but the call succeeded");

@@ -13,7 +13,12 @@ beforeAll(async () => {
 
 async function record(reading: string) {
   const id = await freshCase(testDb());
-  const a = await run(findingsAction, testDb(), request(`/api/cases/${id}/findings`, { cookie: priya, json: { checkId: runout, reading } }), { caseId: id });
+  const a = await run(
+    findingsAction,
+    testDb(),
+    request(`/api/cases/${id}/findings`, { cookie: priya, json: { checkId: runout, reading } }),
+    { caseId: id },
+  );
   return { a, row: await findingRow(testDb(), id, runout) };
 }
 
@@ -50,7 +55,15 @@ describe("run-out readings against `value <= 0.05 mm`", () => {
 
   it("ignores a result sent alongside a reading: the rule decides", async () => {
     const id = await freshCase(testDb());
-    const a = await run(findingsAction, testDb(), request(`/api/cases/${id}/findings`, { cookie: priya, json: { checkId: runout, reading: "0.11 mm", result: "pass" } }), { caseId: id });
+    const a = await run(
+      findingsAction,
+      testDb(),
+      request(`/api/cases/${id}/findings`, {
+        cookie: priya,
+        json: { checkId: runout, reading: "0.11 mm", result: "pass" },
+      }),
+      { caseId: id },
+    );
     // 0.11 mm > 0.05 mm: the demo's closed case b5 records this very reading as a fail (seeds/demo/cases.ts).
     expect(a.body.result).toBe("fail");
   });
@@ -60,9 +73,17 @@ describe("readings as gauges show them", () => {
   const tread = checkId("tread_depth"); // value >= 1.6 mm (Road Vehicles (Construction and Use) Regulations 1986 reg. 27, secondary)
 
   it("takes tread in 32nds of an inch: 2/32 in = 1.5875 mm fails, 3/32 in = 2.38125 mm passes", async () => {
-    for (const [reading, result, mm] of [["2/32 in", "fail", 1.5875], ["3/32 in", "pass", 2.38125]] as const) {
+    for (const [reading, result, mm] of [
+      ["2/32 in", "fail", 1.5875],
+      ["3/32 in", "pass", 2.38125],
+    ] as const) {
       const id = await freshCase(testDb());
-      const a = await run(findingsAction, testDb(), request(`/api/cases/${id}/findings`, { cookie: priya, json: { checkId: tread, reading } }), { caseId: id });
+      const a = await run(
+        findingsAction,
+        testDb(),
+        request(`/api/cases/${id}/findings`, { cookie: priya, json: { checkId: tread, reading } }),
+        { caseId: id },
+      );
       expect(a.status, reading).toBe(201);
       expect(a.body.result, reading).toBe(result);
       const row = await findingRow(testDb(), id, tread);

@@ -7,7 +7,12 @@ import { cookieFor, isCleanError, request, run, symptomId } from "./helpers";
 type Groups = { kind: string; items: { entry: { id: string; kind: string; title: string } }[] }[];
 
 async function search(query: string, login = "priya-hale") {
-  return run(loader, testDb(), request(`/api/search?${query}`, { cookie: await cookieFor(testDb(), login) }), {});
+  return run(
+    loader,
+    testDb(),
+    request(`/api/search?${query}`, { cookie: await cookieFor(testDb(), login) }),
+    {},
+  );
 }
 
 describe("GET /api/search", () => {

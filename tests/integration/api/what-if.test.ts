@@ -17,7 +17,8 @@ import { testDb } from "../../setup/integration-worker";
 import { cookieFor, isCleanError, request, run, snapshot, caseId, type Answer } from "./helpers";
 
 type Ranked = { id: string; probability: number }[];
-const prob = (a: Answer, id: string) => ((a.body.ranking as { causes: Ranked }).causes.find((c) => c.id === id)?.probability ?? NaN);
+const prob = (a: Answer, id: string) =>
+  (a.body.ranking as { causes: Ranked }).causes.find((c) => c.id === id)?.probability ?? NaN;
 
 const causes = [
   { id: "cavity", parentId: null, prior: 0.2 },
@@ -36,11 +37,19 @@ const links = [
   { symptomId: "catch", causeId: "no_cavity", p: 0.2 },
 ];
 const dentist = { causes, symptoms, links, checks: [] as unknown[] };
-const seen = (...ids: string[]) => ({ observations: ids.map((id) => ({ symptomId: id, present: true, source: "technician" })), findings: [] });
+const seen = (...ids: string[]) => ({
+  observations: ids.map((id) => ({ symptomId: id, present: true, source: "technician" })),
+  findings: [],
+});
 const exact = { unlistedPrior: 0 };
 
 async function whatIf(body: unknown, login = "priya-hale") {
-  return run(action, testDb(), request("/api/what-if", { cookie: await cookieFor(testDb(), login), json: body }), {});
+  return run(
+    action,
+    testDb(),
+    request("/api/what-if", { cookie: await cookieFor(testDb(), login), json: body }),
+    {},
+  );
 }
 
 describe("POST /api/what-if on the dentist model (Russell & Norvig ch. 13)", () => {
@@ -62,7 +71,11 @@ describe("POST /api/what-if on the dentist model (Russell & Norvig ch. 13)", () 
 
   it("P(cavity | ¬toothache) = .08 / .8 = 0.1", async () => {
     // .2·(1 − .6) = .08 and .8·(1 − .1) = .72; .08 / .8 = 0.1 (the book's .072 + .008 over .8).
-    const a = await whatIf({ model: dentist, evidence: { observations: [{ symptomId: "toothache", present: false }], findings: [] }, options: exact });
+    const a = await whatIf({
+      model: dentist,
+      evidence: { observations: [{ symptomId: "toothache", present: false }], findings: [] },
+      options: exact,
+    });
     expect(prob(a, "cavity")).toBeCloseTo(0.1, 12);
   });
 
@@ -72,10 +85,19 @@ describe("POST /api/what-if on the dentist model (Russell & Norvig ch. 13)", () 
     //   P(cavity | t, catch) = .54 / .62 = .108 / .124            → cavity on top
     //   P(no_cavity | t, ¬catch) = (.4·.8) / (1 − .62) = .32 / .38 = .064 / .076 → no_cavity on top
     //   the plan's pFind, P(the probe catches because of a cavity | t) = .6·.9 = .54
-    const model = { causes, symptoms: [symptoms[0]], links: links.slice(0, 2), checks: [{ id: "probe", cost: 1, falseAlarm: 0.2, bears: [{ causeId: "cavity", pFail: 0.9 }] }] };
+    const model = {
+      causes,
+      symptoms: [symptoms[0]],
+      links: links.slice(0, 2),
+      checks: [{ id: "probe", cost: 1, falseAlarm: 0.2, bears: [{ causeId: "cavity", pFail: 0.9 }] }],
+    };
     const a = await whatIf({ model, evidence: seen("toothache"), checkId: "probe", options: exact });
     expect(a.status).toBe(200);
-    const w = a.body.whatIf as { pFail: number; ifFail: { topCauseId: string; probability: number }; ifPass: { topCauseId: string; probability: number } };
+    const w = a.body.whatIf as {
+      pFail: number;
+      ifFail: { topCauseId: string; probability: number };
+      ifPass: { topCauseId: string; probability: number };
+    };
     expect(w.pFail).toBeCloseTo(0.62, 12);
     expect(w.ifFail.topCauseId).toBe("cavity");
     expect(w.ifFail.probability).toBeCloseTo(0.108 / 0.124, 12);
@@ -134,7 +156,9 @@ describe("POST /api/what-if refuses invalid models with 400", () => {
 
   it("evidence naming an unknown symptom, and a what-if for a check not in the model", async () => {
     expect((await refused({ model: dentist, evidence: seen("earache") })).body.code).toBe("UNKNOWN_ID");
-    expect((await refused({ model: dentist, evidence: seen("toothache"), checkId: "x-ray" })).body.code).toBe("UNKNOWN_ID");
+    expect((await refused({ model: dentist, evidence: seen("toothache"), checkId: "x-ray" })).body.code).toBe(
+      "UNKNOWN_ID",
+    );
   });
 
   it("an unlistedPrior of 1 or more", async () => {
@@ -147,7 +171,16 @@ describe("POST /api/what-if access", () => {
     const body = { model: dentist, evidence: seen("toothache") };
     const anon = await run(action, testDb(), request("/api/what-if", { json: body }), {});
     expect(anon.status).toBe(401);
-    const foreign = await run(action, testDb(), request("/api/what-if", { cookie: await cookieFor(testDb(), "priya-hale"), json: body, origin: "http://evil.example" }), {});
+    const foreign = await run(
+      action,
+      testDb(),
+      request("/api/what-if", {
+        cookie: await cookieFor(testDb(), "priya-hale"),
+        json: body,
+        origin: "http://evil.example",
+      }),
+      {},
+    );
     expect(foreign.status).toBe(403);
     expect(isCleanError(foreign)).toBe(true);
   });

@@ -32,7 +32,9 @@ afterAll(async () => {
 async function send(method: string, path: string) {
   const headers: Record<string, string> = { cookie, "content-type": "application/json" };
   if (method !== "GET") headers.origin = APP;
-  const res = await handle(new Request(`${APP}${path}`, { method, headers, body: method === "GET" ? undefined : "{}" }));
+  const res = await handle(
+    new Request(`${APP}${path}`, { method, headers, body: method === "GET" ? undefined : "{}" }),
+  );
   const text = await res.text();
   let body: unknown = null;
   try {

@@ -7,13 +7,23 @@ import { testDb } from "../../setup/integration-worker";
 
 describe("sign-in accounts", () => {
   it("recognises a seeded demo member by provider id", async () => {
-    const userId = await signInFromProfile(testDb(), { providerUserId: "910003", login: "priya-hale", name: "Priya Hale", email: null });
+    const userId = await signInFromProfile(testDb(), {
+      providerUserId: "910003",
+      login: "priya-hale",
+      name: "Priya Hale",
+      email: null,
+    });
     const account = await loadAccount(testDb(), userId);
     expect(account).toMatchObject({ role: "technician", workshopName: "Bramblegate Motor Works" });
   });
 
   it("creates a user without a workshop for a newcomer, once", async () => {
-    const profile = { providerUserId: "777001", login: "new-person", name: "New Person", email: "new@person.example" };
+    const profile = {
+      providerUserId: "777001",
+      login: "new-person",
+      name: "New Person",
+      email: "new@person.example",
+    };
     const a = await signInFromProfile(testDb(), profile);
     const b = await signInFromProfile(testDb(), profile);
     expect(a).toBe(b);
@@ -23,21 +33,57 @@ describe("sign-in accounts", () => {
   });
 
   it("accepts a pending invitation by login and records it in the audit log", async () => {
-    const [w] = await testDb().select({ id: workshops.id }).from(workshops).where(eq(workshops.slug, "bramblegate"));
-    await testDb().insert(invitations).values({ workshopId: w.id, githubLogin: "Invited-Tech", role: "senior", expiresAt: new Date(Date.now() + 86_400_000) });
-    const userId = await signInFromProfile(testDb(), { providerUserId: "777002", login: "invited-tech", name: "Invited Tech", email: null });
+    const [w] = await testDb()
+      .select({ id: workshops.id })
+      .from(workshops)
+      .where(eq(workshops.slug, "bramblegate"));
+    await testDb()
+      .insert(invitations)
+      .values({
+        workshopId: w.id,
+        githubLogin: "Invited-Tech",
+        role: "senior",
+        expiresAt: new Date(Date.now() + 86_400_000),
+      });
+    const userId = await signInFromProfile(testDb(), {
+      providerUserId: "777002",
+      login: "invited-tech",
+      name: "Invited Tech",
+      email: null,
+    });
     const [m] = await testDb().select().from(members).where(eq(members.userId, userId));
     expect(m).toMatchObject({ workshopId: w.id, role: "senior", skill: "senior" });
-    const [inv] = await testDb().select().from(invitations).where(eq(invitations.githubLogin, "Invited-Tech"));
+    const [inv] = await testDb()
+      .select()
+      .from(invitations)
+      .where(eq(invitations.githubLogin, "Invited-Tech"));
     expect(inv.acceptedAt).not.toBeNull();
-    const entries = await testDb().select().from(auditLog).where(and(eq(auditLog.action, "member.join"), eq(auditLog.actorUserId, userId)));
+    const entries = await testDb()
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.action, "member.join"), eq(auditLog.actorUserId, userId)));
     expect(entries).toHaveLength(1);
   });
 
   it("ignores an expired invitation", async () => {
-    const [w] = await testDb().select({ id: workshops.id }).from(workshops).where(eq(workshops.slug, "saltmarsh"));
-    await testDb().insert(invitations).values({ workshopId: w.id, email: "late@person.example", role: "technician", expiresAt: new Date(Date.now() - 1000) });
-    const userId = await signInFromProfile(testDb(), { providerUserId: "777003", login: "late", name: "Late", email: "late@person.example" });
+    const [w] = await testDb()
+      .select({ id: workshops.id })
+      .from(workshops)
+      .where(eq(workshops.slug, "saltmarsh"));
+    await testDb()
+      .insert(invitations)
+      .values({
+        workshopId: w.id,
+        email: "late@person.example",
+        role: "technician",
+        expiresAt: new Date(Date.now() - 1000),
+      });
+    const userId = await signInFromProfile(testDb(), {
+      providerUserId: "777003",
+      login: "late",
+      name: "Late",
+      email: "late@person.example",
+    });
     expect((await loadAccount(testDb(), userId))?.role).toBeNull();
   });
 });
@@ -52,6 +98,8 @@ describe("sign-in rate limit (OWASP ASVS 5.0 V6.3.1)", () => {
     expect((refused as Response).headers.get("Retry-After")).toBe("60");
     // Another bucket is unaffected, and the window moves on.
     await expect(limitSignIn(testDb(), "ip:198.51.100.8", 5, 60, now)).resolves.toBeUndefined();
-    await expect(limitSignIn(testDb(), "ip:198.51.100.7", 5, 60, new Date(now.getTime() + 61_000))).resolves.toBeUndefined();
+    await expect(
+      limitSignIn(testDb(), "ip:198.51.100.7", 5, 60, new Date(now.getTime() + 61_000)),
+    ).resolves.toBeUndefined();
   });
 });

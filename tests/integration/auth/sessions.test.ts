@@ -1,7 +1,14 @@
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { accountForSession } from "~/auth/accounts.server";
-import { createSession, findSessionUser, hashToken, revokeAllSessions, revokeSession, SESSION_TTL_MS } from "~/auth/session.server";
+import {
+  createSession,
+  findSessionUser,
+  hashToken,
+  revokeAllSessions,
+  revokeSession,
+  SESSION_TTL_MS,
+} from "~/auth/session.server";
 import { sessions, users } from "~/db/schema";
 import { seedId } from "../../../seeds/ids";
 import { testDb } from "../../setup/integration-worker";
@@ -33,13 +40,21 @@ describe("server-side sessions", () => {
     const userId = await aUser();
     const start = new Date("2026-12-01T08:00:00Z");
     const token = await createSession(testDb(), userId, null, start);
-    expect(await findSessionUser(testDb(), token, new Date(start.getTime() + SESSION_TTL_MS - 1000))).not.toBeNull();
-    expect(await findSessionUser(testDb(), token, new Date(start.getTime() + SESSION_TTL_MS + 1000))).toBeNull();
+    expect(
+      await findSessionUser(testDb(), token, new Date(start.getTime() + SESSION_TTL_MS - 1000)),
+    ).not.toBeNull();
+    expect(
+      await findSessionUser(testDb(), token, new Date(start.getTime() + SESSION_TTL_MS + 1000)),
+    ).toBeNull();
   });
 
   it("revokes one session, or all of a user's", async () => {
     const userId = await aUser();
-    const [a, b, c] = [await createSession(testDb(), userId, null), await createSession(testDb(), userId, null), await createSession(testDb(), userId, null)];
+    const [a, b, c] = [
+      await createSession(testDb(), userId, null),
+      await createSession(testDb(), userId, null),
+      await createSession(testDb(), userId, null),
+    ];
     await revokeSession(testDb(), a);
     expect(await findSessionUser(testDb(), a)).toBeNull();
     expect(await findSessionUser(testDb(), b)).not.toBeNull();
@@ -57,7 +72,12 @@ describe("server-side sessions", () => {
 describe("the per-request session lookup (accountForSession)", () => {
   it("returns the person and their membership for a live session", async () => {
     const token = await createSession(testDb(), seedId("user:priya-hale"), null);
-    expect(await accountForSession(testDb(), token)).toMatchObject({ userId: seedId("user:priya-hale"), role: "technician", workshopName: "Bramblegate Motor Works", status: "active" });
+    expect(await accountForSession(testDb(), token)).toMatchObject({
+      userId: seedId("user:priya-hale"),
+      role: "technician",
+      workshopName: "Bramblegate Motor Works",
+      status: "active",
+    });
   });
 
   it("returns an account without membership for someone who has none yet", async () => {
@@ -70,8 +90,12 @@ describe("the per-request session lookup (accountForSession)", () => {
     const userId = await aUser();
     const start = new Date("2026-12-01T08:00:00Z");
     const token = await createSession(testDb(), userId, null, start);
-    expect(await accountForSession(testDb(), token, new Date(start.getTime() + SESSION_TTL_MS - 1000))).not.toBeNull();
-    expect(await accountForSession(testDb(), token, new Date(start.getTime() + SESSION_TTL_MS + 1000))).toBeNull();
+    expect(
+      await accountForSession(testDb(), token, new Date(start.getTime() + SESSION_TTL_MS - 1000)),
+    ).not.toBeNull();
+    expect(
+      await accountForSession(testDb(), token, new Date(start.getTime() + SESSION_TTL_MS + 1000)),
+    ).toBeNull();
   });
 
   it("refuses a revoked session and an unknown token", async () => {

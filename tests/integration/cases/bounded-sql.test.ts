@@ -23,17 +23,43 @@ beforeAll(async () => {
   const member = await memberFor(testDb(), "priya-hale");
   // Passed checks only: a pass is possible under every hypothesis with a false-alarm rate below 1,
   // so any 30 checks make evidence the ranking accepts.
-  const kbChecks = await testDb().select({ id: checks.id }).from(checks).where(eq(checks.workshopId, BRAMBLEGATE)).orderBy(checks.id).limit(30);
-  const kbSymptoms = await testDb().select({ id: symptoms.id }).from(symptoms).where(eq(symptoms.workshopId, BRAMBLEGATE)).orderBy(symptoms.id).limit(10);
+  const kbChecks = await testDb()
+    .select({ id: checks.id })
+    .from(checks)
+    .where(eq(checks.workshopId, BRAMBLEGATE))
+    .orderBy(checks.id)
+    .limit(30);
+  const kbSymptoms = await testDb()
+    .select({ id: symptoms.id })
+    .from(symptoms)
+    .where(eq(symptoms.workshopId, BRAMBLEGATE))
+    .orderBy(symptoms.id)
+    .limit(10);
   expect(kbChecks).toHaveLength(30);
   small = await freshCase(testDb());
   large = await freshCase(testDb());
-  const finding = (caseId: string, checkId: string) => ({ workshopId: BRAMBLEGATE, caseId, checkId, result: "pass" as const, recordedById: member.memberId });
+  const finding = (caseId: string, checkId: string) => ({
+    workshopId: BRAMBLEGATE,
+    caseId,
+    checkId,
+    result: "pass" as const,
+    recordedById: member.memberId,
+  });
   await testDb().insert(findings).values(finding(small, kbChecks[0].id));
-  await testDb().insert(findings).values(kbChecks.map((k) => finding(large, k.id)));
+  await testDb()
+    .insert(findings)
+    .values(kbChecks.map((k) => finding(large, k.id)));
   await testDb()
     .insert(observations)
-    .values(kbSymptoms.map((s, i) => ({ workshopId: BRAMBLEGATE, caseId: large, symptomId: s.id, present: i % 2 === 0, recordedById: member.memberId })));
+    .values(
+      kbSymptoms.map((s, i) => ({
+        workshopId: BRAMBLEGATE,
+        caseId: large,
+        symptomId: s.id,
+        present: i % 2 === 0,
+        recordedById: member.memberId,
+      })),
+    );
 });
 
 afterAll(async () => {
@@ -58,8 +84,12 @@ describe("GET /api/cases/:caseId issues a fixed number of SQL statements", () =>
   it("the same for 1 finding as for 30 findings and 10 observations", async () => {
     const one = await statements(get(small));
     const thirty = await statements(get(large));
-    console.log(`GET /api/cases/:id SQL statements: ${one} with 1 finding, ${thirty} with 30 findings + 10 observations`);
-    expect((await get(large)()).body.case).toMatchObject({ findings: expect.arrayContaining([expect.objectContaining({ result: "pass" })]) });
+    console.log(
+      `GET /api/cases/:id SQL statements: ${one} with 1 finding, ${thirty} with 30 findings + 10 observations`,
+    );
+    expect((await get(large)()).body.case).toMatchObject({
+      findings: expect.arrayContaining([expect.objectContaining({ result: "pass" })]),
+    });
     expect(thirty).toBe(one);
     // Counted by hand from the code, with the knowledge base cached: the session with its account
     // (1, app/auth/accounts.server.ts) and the case with its observations, findings, history and
@@ -70,7 +100,10 @@ describe("GET /api/cases/:caseId issues a fixed number of SQL statements", () =>
   it("a cold knowledge-base cache adds a fixed number too (five tables, app/cases/knowledge.server.ts)", async () => {
     // A new kb_version forces a reload; the count over the warm one is the tables it reads.
     const warm = await statements(get(small));
-    await testDb().update(workshops).set({ kbVersion: sql`${workshops.kbVersion} + 1` }).where(eq(workshops.id, BRAMBLEGATE));
+    await testDb()
+      .update(workshops)
+      .set({ kbVersion: sql`${workshops.kbVersion} + 1` })
+      .where(eq(workshops.id, BRAMBLEGATE));
     n = 0;
     await get(large)();
     const cold = n;
@@ -85,7 +118,11 @@ describe("the case page's loader issues a fixed number of SQL statements", () =>
     const page = (id: string) => async () => {
       const context = contextFor(counted.db);
       context.set(memberContext, member);
-      return workbenchLoader({ request: request(`/cases/${id}`, { cookie }), params: { caseId: id }, context } as never);
+      return workbenchLoader({
+        request: request(`/cases/${id}`, { cookie }),
+        params: { caseId: id },
+        context,
+      } as never);
     };
     const one = await statements(page(small));
     const thirty = await statements(page(large));

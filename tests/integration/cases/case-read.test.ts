@@ -12,14 +12,29 @@ describe("reading a case", () => {
   it("gives a screen this case's history only, newest first, and the outcome counts the knowledge module computes", async () => {
     const member = await memberFor(testDb(), "priya-hale");
     const id = caseId("b1");
-    const row = (action: string, at: string, entityId = id, workshopId: string | null = member.workshopId) => ({ workshopId, actorUserId: member.userId, action, entity: "case", entityId, after: {}, at: new Date(at) });
-    await testDb().insert(auditLog).values([
-      row("case.open", "2026-11-30T08:00:00Z"),
-      row("case.finding", "2026-11-30T09:30:00Z"),
-      row("case.observation", "2026-11-30T09:00:00Z"),
-      row("case.finding", "2026-11-30T10:00:00Z", caseId("b2")), // another case
-      row("case.finding", "2026-11-30T10:00:00Z", id, null), // no workshop: not this workshop's trail
-    ]);
+    const row = (
+      action: string,
+      at: string,
+      entityId = id,
+      workshopId: string | null = member.workshopId,
+    ) => ({
+      workshopId,
+      actorUserId: member.userId,
+      action,
+      entity: "case",
+      entityId,
+      after: {},
+      at: new Date(at),
+    });
+    await testDb()
+      .insert(auditLog)
+      .values([
+        row("case.open", "2026-11-30T08:00:00Z"),
+        row("case.finding", "2026-11-30T09:30:00Z"),
+        row("case.observation", "2026-11-30T09:00:00Z"),
+        row("case.finding", "2026-11-30T10:00:00Z", caseId("b2")), // another case
+        row("case.finding", "2026-11-30T10:00:00Z", id, null), // no workshop: not this workshop's trail
+      ]);
     const c = await loadCaseWithHistory(testDb(), member, id);
     expect(c.history.map((h) => h.action)).toEqual(["case.finding", "case.observation", "case.open"]);
     expect(c.history.map((h) => h.actor)).toEqual(["Priya Hale", "Priya Hale", "Priya Hale"]);
@@ -31,7 +46,10 @@ describe("reading a case", () => {
 
   it("gives a change the same case and evidence, without history or outcome counts", async () => {
     const member = await memberFor(testDb(), "priya-hale");
-    const [screen, change] = [await loadCaseWithHistory(testDb(), member, caseId("b1")), await loadCaseForChange(testDb(), member, caseId("b1"))];
+    const [screen, change] = [
+      await loadCaseWithHistory(testDb(), member, caseId("b1")),
+      await loadCaseForChange(testDb(), member, caseId("b1")),
+    ];
     expect(change).not.toHaveProperty("history");
     expect(change).not.toHaveProperty("outcomes");
     const { history: _h, outcomes: _o, ...fields } = screen;

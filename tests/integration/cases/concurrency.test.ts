@@ -11,7 +11,17 @@ import { auditLog, cases, findings, observations } from "~/db/schema";
 import { action as findingsAction } from "~/routes/api/findings";
 import { action as observationsAction } from "~/routes/api/observations";
 import { testDb } from "../../setup/integration-worker";
-import { causeId, checkId, cookieFor, freshCase, memberFor, refusal, request, run, symptomId } from "../api/helpers";
+import {
+  causeId,
+  checkId,
+  cookieFor,
+  freshCase,
+  memberFor,
+  refusal,
+  request,
+  run,
+  symptomId,
+} from "../api/helpers";
 
 // A pool of its own, wide enough that the concurrent calls really run side by side.
 let wide: { db: Db; end: () => Promise<void> };
@@ -25,11 +35,21 @@ afterAll(async () => {
 
 async function post(login: string, kind: "observations" | "findings", id: string, json: unknown) {
   const handler = kind === "findings" ? findingsAction : observationsAction;
-  return run(handler, wide.db, request(`/api/cases/${id}/${kind}`, { cookie: await cookieFor(testDb(), login), json }), { caseId: id });
+  return run(
+    handler,
+    wide.db,
+    request(`/api/cases/${id}/${kind}`, { cookie: await cookieFor(testDb(), login), json }),
+    { caseId: id },
+  );
 }
 
 const auditRows = async (id: string, action: string) =>
-  (await testDb().select({ n: count() }).from(auditLog).where(and(eq(auditLog.entityId, id), eq(auditLog.action, action))))[0].n;
+  (
+    await testDb()
+      .select({ n: count() })
+      .from(auditLog)
+      .where(and(eq(auditLog.entityId, id), eq(auditLog.action, action)))
+  )[0].n;
 
 describe("two members adding evidence at once", () => {
   it("keeps every observation and finding both of them sent", async () => {
@@ -43,10 +63,20 @@ describe("two members adding evidence at once", () => {
       post("tomas-varga", "findings", id, { checkId: checkId("wheel_drag_spin"), result: "pass" }),
     ]);
     expect(answers.map((a) => a.status)).toEqual([201, 201, 201, 201, 201, 201]);
-    const obs = await testDb().select({ symptomId: observations.symptomId }).from(observations).where(eq(observations.caseId, id));
-    const fnd = await testDb().select({ checkId: findings.checkId }).from(findings).where(eq(findings.caseId, id));
-    expect(obs.map((o) => o.symptomId).sort()).toEqual([symptomId("vibration_braking"), symptomId("squeal_braking"), symptomId("pedal_pulsing")].sort());
-    expect(fnd.map((f) => f.checkId).sort()).toEqual([checkId("brake_road_test"), checkId("disc_runout_dial_gauge"), checkId("wheel_drag_spin")].sort());
+    const obs = await testDb()
+      .select({ symptomId: observations.symptomId })
+      .from(observations)
+      .where(eq(observations.caseId, id));
+    const fnd = await testDb()
+      .select({ checkId: findings.checkId })
+      .from(findings)
+      .where(eq(findings.caseId, id));
+    expect(obs.map((o) => o.symptomId).sort()).toEqual(
+      [symptomId("vibration_braking"), symptomId("squeal_braking"), symptomId("pedal_pulsing")].sort(),
+    );
+    expect(fnd.map((f) => f.checkId).sort()).toEqual(
+      [checkId("brake_road_test"), checkId("disc_runout_dial_gauge"), checkId("wheel_drag_spin")].sort(),
+    );
     expect((await auditRows(id, "case.observation")) + (await auditRows(id, "case.finding"))).toBe(6);
   });
 });
@@ -62,7 +92,10 @@ describe("the same check recorded by two members at once", () => {
       expect([a.status, b.status].sort()).toEqual([201, 409]);
       const loser = a.status === 409 ? a : b;
       expect(typeof loser.body.error).toBe("string");
-      const rows = await testDb().select({ result: findings.result }).from(findings).where(eq(findings.caseId, id));
+      const rows = await testDb()
+        .select({ result: findings.result })
+        .from(findings)
+        .where(eq(findings.caseId, id));
       expect(rows).toHaveLength(1);
       // The stored result is the winner's.
       expect(rows[0].result).toBe(a.status === 201 ? "fail" : "pass");
@@ -77,7 +110,10 @@ describe("the same check recorded by two members at once", () => {
     // Both snapshots have no findings, so the in-memory duplicate check passes for both.
     const [p, t] = await Promise.all([loadCase(wide.db, priya, id), loadCase(wide.db, tomas, id)]);
     const input = { checkId: checkId("wheel_drag_spin"), result: "pass" as const };
-    const results = await Promise.allSettled([recordFinding(wide.db, priya, p, input), recordFinding(wide.db, tomas, t, input)]);
+    const results = await Promise.allSettled([
+      recordFinding(wide.db, priya, p, input),
+      recordFinding(wide.db, tomas, t, input),
+    ]);
     expect(results.map((r) => r.status).sort()).toEqual(["fulfilled", "rejected"]);
     const lost = results.find((r): r is PromiseRejectedResult => r.status === "rejected")!;
     expect((await refusal(Promise.reject(lost.reason))).status).toBe(409);
@@ -93,11 +129,22 @@ describe("two conclusions from the same version (workflow.server's conclude)", (
     for (let round = 0; round < 5; round++) {
       const id = await freshCase(testDb());
       // Both loaded the case before either wrote: same version in hand.
-      const [seenByPriya, seenByTomas] = await Promise.all([loadCase(wide.db, priya, id), loadCase(wide.db, tomas, id)]);
+      const [seenByPriya, seenByTomas] = await Promise.all([
+        loadCase(wide.db, priya, id),
+        loadCase(wide.db, tomas, id),
+      ]);
       expect(seenByPriya.version).toBe(seenByTomas.version);
       const results = await Promise.allSettled([
-        conclude(wide.db, priya, seenByPriya, { causeId: causeId("brake_disc_runout_dtv"), notes: "Disc run-out 0.09 mm.", version: seenByPriya.version }),
-        conclude(wide.db, tomas, seenByTomas, { causeId: causeId("brake_pad_deposits"), notes: "Pad transfer on the disc face.", version: seenByTomas.version }),
+        conclude(wide.db, priya, seenByPriya, {
+          causeId: causeId("brake_disc_runout_dtv"),
+          notes: "Disc run-out 0.09 mm.",
+          version: seenByPriya.version,
+        }),
+        conclude(wide.db, tomas, seenByTomas, {
+          causeId: causeId("brake_pad_deposits"),
+          notes: "Pad transfer on the disc face.",
+          version: seenByTomas.version,
+        }),
       ]);
       const won = results.findIndex((r) => r.status === "fulfilled");
       const lost = results.findIndex((r) => r.status === "rejected");
@@ -107,7 +154,10 @@ describe("two conclusions from the same version (workflow.server's conclude)", (
       expect(status).toBe(409);
       const current = body.current as { state: string; version: number; conclusionNotes: string };
       expect(current).toMatchObject({ state: "concluded", version: seenByPriya.version + 1 });
-      const [row] = await testDb().select({ causeId: cases.conclusionCauseId, notes: cases.conclusionNotes }).from(cases).where(eq(cases.id, id));
+      const [row] = await testDb()
+        .select({ causeId: cases.conclusionCauseId, notes: cases.conclusionNotes })
+        .from(cases)
+        .where(eq(cases.id, id));
       expect(row.causeId).toBe(won === 0 ? causeId("brake_disc_runout_dtv") : causeId("brake_pad_deposits"));
       expect(current.conclusionNotes).toBe(row.notes);
       expect(await auditRows(id, "case.conclude")).toBe(1);

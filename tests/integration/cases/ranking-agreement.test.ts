@@ -16,7 +16,10 @@ import { testDb } from "../../setup/integration-worker";
 import { caseId, causeId, checkId, cookieFor, memberFor, request, run, symptomId } from "../api/helpers";
 
 type ApiCase = {
-  case: { observations: { symptomId: string; present: boolean; source: "owner" | "technician" }[]; findings: { checkId: string; result: "pass" | "fail" }[] };
+  case: {
+    observations: { symptomId: string; present: boolean; source: "owner" | "technician" }[];
+    findings: { checkId: string; result: "pass" | "fail" }[];
+  };
   diagnosis: { causes: { id: string; probability: number }[]; unlisted: number };
 };
 
@@ -24,23 +27,35 @@ const b1 = caseId("b1");
 let priya: string;
 
 async function apiCase(login: string): Promise<ApiCase> {
-  const a = await run(caseLoader, testDb(), request(`/api/cases/${b1}`, { cookie: await cookieFor(testDb(), login) }), { caseId: b1 });
+  const a = await run(
+    caseLoader,
+    testDb(),
+    request(`/api/cases/${b1}`, { cookie: await cookieFor(testDb(), login) }),
+    { caseId: b1 },
+  );
   expect(a.status).toBe(200);
   return a.body as unknown as ApiCase;
 }
 
 /** The evidence exactly as the API response lists it (not the server's own evidenceOf). */
 const evidenceFrom = (c: ApiCase): Evidence => ({
-  observations: c.case.observations.map((o) => ({ symptomId: o.symptomId, present: o.present, source: o.source })),
+  observations: c.case.observations.map((o) => ({
+    symptomId: o.symptomId,
+    present: o.present,
+    source: o.source,
+  })),
   findings: c.case.findings.map((f) => ({ checkId: f.checkId, result: f.result })),
 });
 
 function expectSameRanking(shown: ApiCase["diagnosis"], ranking: ReturnType<typeof rankCauses>) {
   // The API sends the SENT_CAUSES most likely causes (the screen shows five); they are the same, in the same order.
   expect(shown.causes.length).toBe(Math.min(SENT_CAUSES, ranking.causes.length));
-  expect(shown.causes.map((c) => c.id)).toEqual(ranking.causes.slice(0, shown.causes.length).map((c) => c.id));
+  expect(shown.causes.map((c) => c.id)).toEqual(
+    ranking.causes.slice(0, shown.causes.length).map((c) => c.id),
+  );
   const mine = new Map(ranking.causes.map((c) => [c.id, c.probability]));
-  for (const c of shown.causes) expect(Math.abs(c.probability - mine.get(c.id)!), c.id).toBeLessThanOrEqual(1e-12);
+  for (const c of shown.causes)
+    expect(Math.abs(c.probability - mine.get(c.id)!), c.id).toBeLessThanOrEqual(1e-12);
   expect(Math.abs(shown.unlisted - ranking.unlisted)).toBeLessThanOrEqual(1e-12);
 }
 
@@ -49,7 +64,12 @@ beforeAll(async () => {
   // On top of the owner's judder report (seeds/demo/cases.ts): a technician's pedal and squeal
   // observations, a failed road test and a run-out of 0.0035 in (= 0.0889 mm > 0.05 mm: fail).
   const post = async (kind: "observations" | "findings", json: unknown) => {
-    const a = await run(kind === "findings" ? findingsAction : observationsAction, testDb(), request(`/api/cases/${b1}/${kind}`, { cookie: priya, json }), { caseId: b1 });
+    const a = await run(
+      kind === "findings" ? findingsAction : observationsAction,
+      testDb(),
+      request(`/api/cases/${b1}/${kind}`, { cookie: priya, json }),
+      { caseId: b1 },
+    );
     expect(a.status, JSON.stringify(a.body)).toBe(201);
   };
   await post("observations", { symptomId: symptomId("pedal_pulsing"), present: true });
@@ -78,7 +98,12 @@ describe("the ranking shown for a case", () => {
     const bundle = await loadCase(testDb(), member, b1);
     const kb = await loadKnowledge(testDb(), bundle.workshop.id, bundle.workshop.kbVersion);
     const outcomes = await outcomeCounts(testDb(), bundle.workshop.id, bundle.vehicle.fuelType);
-    const model = buildModel(kb, vehicleFacts({ ...bundle.vehicle, mileageKm: bundle.mileageKm }), bundle.workshop.labourRatePerHour, outcomes);
+    const model = buildModel(
+      kb,
+      vehicleFacts({ ...bundle.vehicle, mileageKm: bundle.mileageKm }),
+      bundle.workshop.labourRatePerHour,
+      outcomes,
+    );
     expectSameRanking(shown.diagnosis, rankCauses(model, evidenceFrom(shown)));
   });
 

@@ -12,7 +12,10 @@ import { caseId, causeId, freshCase, memberFor, refusal } from "../api/helpers";
 const db = () => testDb();
 const state = async (id: string) => (await db().select().from(cases).where(eq(cases.id, id)))[0];
 const auditCount = async () => (await db().select({ n: count() }).from(auditLog))[0].n;
-const lastAudit = async (id: string) => (await db().select().from(auditLog).where(eq(auditLog.entityId, id)).orderBy(desc(auditLog.id)).limit(1))[0];
+const lastAudit = async (id: string) =>
+  (
+    await db().select().from(auditLog).where(eq(auditLog.entityId, id)).orderBy(desc(auditLog.id)).limit(1)
+  )[0];
 
 async function bundle(login: string, id: string) {
   const member = await memberFor(db(), login);
@@ -31,40 +34,76 @@ async function refusedWithoutChange(id: string, work: () => Promise<unknown>, st
 
 describe("an apprentice's conclusion and a senior's sign-off (demo case b2, assigned to Ollie)", () => {
   const b2 = caseId("b2");
-  const noise = { causeId: causeId("brake_pad_noise"), notes: "Anti-squeal shims missing on the front pads." };
+  const noise = {
+    causeId: causeId("brake_pad_noise"),
+    notes: "Anti-squeal shims missing on the front pads.",
+  };
 
   it("the apprentice's conclusion waits for a senior: awaiting_signoff, needs a senior, one audit row", async () => {
     const { member, c } = await bundle("ollie-mbeki", b2);
     const audits = await auditCount();
     expect(await conclude(db(), member, c, { ...noise, version: c.version })).toBe("awaiting_signoff");
     const row = await state(b2);
-    expect(row).toMatchObject({ state: "awaiting_signoff", needsSenior: true, conclusionCauseId: noise.causeId, concludedById: seedId("member:ollie-mbeki"), version: c.version + 1 });
+    expect(row).toMatchObject({
+      state: "awaiting_signoff",
+      needsSenior: true,
+      conclusionCauseId: noise.causeId,
+      concludedById: seedId("member:ollie-mbeki"),
+      version: c.version + 1,
+    });
     expect(await auditCount()).toBe(audits + 1);
-    expect(await lastAudit(b2)).toMatchObject({ action: "case.conclude", actorUserId: seedId("user:ollie-mbeki"), before: { state: "open" }, after: { state: "awaiting_signoff" } });
+    expect(await lastAudit(b2)).toMatchObject({
+      action: "case.conclude",
+      actorUserId: seedId("user:ollie-mbeki"),
+      before: { state: "open" },
+      after: { state: "awaiting_signoff" },
+    });
   });
 
   it("a technician cannot sign it off (403), and nothing changes", async () => {
     const { member, c } = await bundle("priya-hale", b2);
-    await refusedWithoutChange(b2, () => signOff(db(), member, c, { accept: true, note: "Looks right.", version: c.version }), 403);
+    await refusedWithoutChange(
+      b2,
+      () => signOff(db(), member, c, { accept: true, note: "Looks right.", version: c.version }),
+      403,
+    );
   });
 
   it("an apprentice cannot sign off his own conclusion (403)", async () => {
     const { member, c } = await bundle("ollie-mbeki", b2);
-    await refusedWithoutChange(b2, () => signOff(db(), member, c, { accept: true, note: "", version: c.version }), 403);
+    await refusedWithoutChange(
+      b2,
+      () => signOff(db(), member, c, { accept: true, note: "", version: c.version }),
+      403,
+    );
   });
 
   it("a senior's sign-off concludes it, records who signed, and writes an audit row", async () => {
     const { member, c } = await bundle("tomas-varga", b2);
     const audits = await auditCount();
     await signOff(db(), member, c, { accept: true, note: "Agreed: shims missing.", version: c.version });
-    expect(await state(b2)).toMatchObject({ state: "concluded", needsSenior: false, signedOffById: seedId("member:tomas-varga"), conclusionCauseId: noise.causeId });
+    expect(await state(b2)).toMatchObject({
+      state: "concluded",
+      needsSenior: false,
+      signedOffById: seedId("member:tomas-varga"),
+      conclusionCauseId: noise.causeId,
+    });
     expect(await auditCount()).toBe(audits + 1);
-    expect(await lastAudit(b2)).toMatchObject({ action: "case.signoff", actorUserId: seedId("user:tomas-varga"), before: { state: "awaiting_signoff" }, after: { state: "concluded" } });
+    expect(await lastAudit(b2)).toMatchObject({
+      action: "case.signoff",
+      actorUserId: seedId("user:tomas-varga"),
+      before: { state: "awaiting_signoff" },
+      after: { state: "concluded" },
+    });
   });
 
   it("signing off again answers 409: it is no longer waiting", async () => {
     const { member, c } = await bundle("tomas-varga", b2);
-    await refusedWithoutChange(b2, () => signOff(db(), member, c, { accept: true, note: "", version: c.version }), 409);
+    await refusedWithoutChange(
+      b2,
+      () => signOff(db(), member, c, { accept: true, note: "", version: c.version }),
+      409,
+    );
   });
 });
 
@@ -73,9 +112,21 @@ describe("sending a conclusion back (demo case b3 is awaiting sign-off)", () => 
     const b3 = caseId("b3");
     const { member, c } = await bundle("tomas-varga", b3);
     expect(c.state).toBe("awaiting_signoff");
-    await signOff(db(), member, c, { accept: false, note: "Check the other side first.", version: c.version });
-    expect(await state(b3)).toMatchObject({ state: "open", conclusionCauseId: null, concludedById: null, needsSenior: false });
-    expect(await lastAudit(b3)).toMatchObject({ action: "case.send_back", after: { state: "open", note: "Check the other side first." } });
+    await signOff(db(), member, c, {
+      accept: false,
+      note: "Check the other side first.",
+      version: c.version,
+    });
+    expect(await state(b3)).toMatchObject({
+      state: "open",
+      conclusionCauseId: null,
+      concludedById: null,
+      needsSenior: false,
+    });
+    expect(await lastAudit(b3)).toMatchObject({
+      action: "case.send_back",
+      after: { state: "open", note: "Check the other side first." },
+    });
   });
 });
 
@@ -87,22 +138,41 @@ describe("who may conclude", () => {
     const { member, c } = await bundle("priya-hale", id);
     expect(await conclude(db(), member, c, { ...dtv, version: c.version })).toBe("concluded");
     expect(await state(id)).toMatchObject({ state: "concluded", needsSenior: false, signedOffById: null });
-    expect((await db().select({ n: count() }).from(auditLog).where(and(eq(auditLog.entityId, id), eq(auditLog.action, "case.conclude"))))[0].n).toBe(1);
+    expect(
+      (
+        await db()
+          .select({ n: count() })
+          .from(auditLog)
+          .where(and(eq(auditLog.entityId, id), eq(auditLog.action, "case.conclude")))
+      )[0].n,
+    ).toBe(1);
   });
 
   it("an apprentice cannot conclude a case that is not his (b1 is Priya's): 403", async () => {
     const { member, c } = await bundle("ollie-mbeki", caseId("b1"));
-    await refusedWithoutChange(caseId("b1"), () => conclude(db(), member, c, { ...dtv, version: c.version }), 403);
+    await refusedWithoutChange(
+      caseId("b1"),
+      () => conclude(db(), member, c, { ...dtv, version: c.version }),
+      403,
+    );
   });
 
   it("an advisor cannot conclude: 403", async () => {
     const { member, c } = await bundle("dana-reyes", caseId("b1"));
-    await refusedWithoutChange(caseId("b1"), () => conclude(db(), member, c, { ...dtv, version: c.version }), 403);
+    await refusedWithoutChange(
+      caseId("b1"),
+      () => conclude(db(), member, c, { ...dtv, version: c.version }),
+      403,
+    );
   });
 
   it("a conclusion must name a failure mode, not a component: 400", async () => {
     const { member, c } = await bundle("priya-hale", caseId("b1"));
-    await refusedWithoutChange(caseId("b1"), () => conclude(db(), member, c, { causeId: causeId("brakes_friction"), notes: "", version: c.version }), 400);
+    await refusedWithoutChange(
+      caseId("b1"),
+      () => conclude(db(), member, c, { causeId: causeId("brakes_friction"), notes: "", version: c.version }),
+      400,
+    );
   });
 
   it("a conclusion from a stale version answers 409 with the case as it is now", async () => {
@@ -114,6 +184,10 @@ describe("who may conclude", () => {
 
   it("a closed case cannot be concluded again: 409", async () => {
     const { member, c } = await bundle("tomas-varga", caseId("b5"));
-    await refusedWithoutChange(caseId("b5"), () => conclude(db(), member, c, { ...dtv, version: c.version }), 409);
+    await refusedWithoutChange(
+      caseId("b5"),
+      () => conclude(db(), member, c, { ...dtv, version: c.version }),
+      409,
+    );
   });
 });

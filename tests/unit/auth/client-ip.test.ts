@@ -4,7 +4,8 @@
 import { afterEach, describe, expect, it } from "vitest";
 import { addressBucket, clientIp } from "~/auth/rate-limit.server";
 
-const req = (headers: Record<string, string> = {}) => new Request("http://127.0.0.1/auth/github", { headers });
+const req = (headers: Record<string, string> = {}) =>
+  new Request("http://127.0.0.1/auth/github", { headers });
 
 describe("clientIp", () => {
   afterEach(() => {
@@ -22,13 +23,17 @@ describe("clientIp", () => {
   it("behind one proxy, takes the address that proxy appended (the rightmost), not what the client sent", () => {
     process.env.TRUST_PROXY = "1";
     // The client sent "198.51.100.66" itself; the proxy appended the address it saw.
-    expect(clientIp(req({ "x-forwarded-for": "198.51.100.66, 203.0.113.9" }), "10.0.0.2")).toBe("203.0.113.9");
+    expect(clientIp(req({ "x-forwarded-for": "198.51.100.66, 203.0.113.9" }), "10.0.0.2")).toBe(
+      "203.0.113.9",
+    );
     expect(clientIp(req({ "x-forwarded-for": "203.0.113.9" }), "10.0.0.2")).toBe("203.0.113.9");
   });
 
   it("behind two proxies, counts two from the right; without the header, falls back to the socket", () => {
     process.env.TRUST_PROXY = "2";
-    expect(clientIp(req({ "x-forwarded-for": "198.51.100.66, 203.0.113.9, 10.0.0.7" }), "10.0.0.2")).toBe("203.0.113.9");
+    expect(clientIp(req({ "x-forwarded-for": "198.51.100.66, 203.0.113.9, 10.0.0.7" }), "10.0.0.2")).toBe(
+      "203.0.113.9",
+    );
     expect(clientIp(req(), "10.0.0.2")).toBe("10.0.0.2");
     expect(clientIp(req(), null)).toBe("unknown");
   });

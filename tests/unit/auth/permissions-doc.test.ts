@@ -11,7 +11,10 @@ function docMatrix() {
   const mentioned = new Set<string>();
   for (const line of doc.split("\n")) {
     if (!line.startsWith("| `")) continue;
-    const cells = line.split("|").slice(1, -1).map((c) => c.trim());
+    const cells = line
+      .split("|")
+      .slice(1, -1)
+      .map((c) => c.trim());
     if (cells.length !== 6) continue;
     const perms = [...cells[0].matchAll(/`([a-z-]+:[a-z-]+)`/g)].map((m) => m[1]);
     perms.forEach((p) => mentioned.add(p));
@@ -29,6 +32,7 @@ describe("docs/permissions.md", () => {
 
   it("grants each role exactly what the server grants", () => {
     const { granted } = docMatrix();
-    for (const role of ROLE_COLUMNS) expect([...granted.get(role)!].sort(), role).toEqual([...ROLE_PERMISSIONS[role]].sort());
+    for (const role of ROLE_COLUMNS)
+      expect([...granted.get(role)!].sort(), role).toEqual([...ROLE_PERMISSIONS[role]].sort());
   });
 });

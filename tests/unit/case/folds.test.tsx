@@ -12,15 +12,43 @@ import { Fold } from "~/components/fold";
 import type { Diagnosis } from "~/cases/present-diagnosis";
 
 /** Components that read through React Query need its client, as the app's root gives them. */
-const renderWithQuery = (ui: React.ReactElement) => render(<QueryClientProvider client={new QueryClient()}>{ui}</QueryClientProvider>);
+const renderWithQuery = (ui: React.ReactElement) =>
+  render(<QueryClientProvider client={new QueryClient()}>{ui}</QueryClientProvider>);
 
 type Step = Diagnosis["plan"]["steps"][number];
-const cause = (n: number, probability: number) => ({ id: `c${n}`, name: `Cause ${n}`, probability, priority: null, why: [{ label: `Evidence for ${n}`, recorded: "present", weight: 1.5 }] });
-const step = (n: number, cautions: string[] = []): Step => ({
-  checkId: `k${n}`, name: `Check ${n}`, pFind: 0.5 / n, cost: 10 * n, skill: "technician", minutes: 10,
-  tools: [], access: [], cautions, instructions: [`Do step ${n}`], resultKind: "pass_fail", unit: null, limit: null, detailed: true, failMeans: `Fault ${n}`,
+const cause = (n: number, probability: number) => ({
+  id: `c${n}`,
+  name: `Cause ${n}`,
+  probability,
+  priority: null,
+  why: [{ label: `Evidence for ${n}`, recorded: "present", weight: 1.5 }],
 });
-const plan = (steps: Step[]): Diagnosis["plan"] => ({ steps, moreSteps: 0, aboveSkill: [], expectedCost: 20, cheapestFirstExpectedCost: 25, saving: 5, whatIf: null });
+const step = (n: number, cautions: string[] = []): Step => ({
+  checkId: `k${n}`,
+  name: `Check ${n}`,
+  pFind: 0.5 / n,
+  cost: 10 * n,
+  skill: "technician",
+  minutes: 10,
+  tools: [],
+  access: [],
+  cautions,
+  instructions: [`Do step ${n}`],
+  resultKind: "pass_fail",
+  unit: null,
+  limit: null,
+  detailed: true,
+  failMeans: `Fault ${n}`,
+});
+const plan = (steps: Step[]): Diagnosis["plan"] => ({
+  steps,
+  moreSteps: 0,
+  aboveSkill: [],
+  expectedCost: 20,
+  cheapestFirstExpectedCost: 25,
+  saving: 5,
+  whatIf: null,
+});
 
 describe("likely causes", () => {
   it("shows the why of the top cause and renders another's only when it is opened", () => {
@@ -37,11 +65,23 @@ describe("likely causes", () => {
 
 describe("check plan", () => {
   it("shows every offered check's cautions in full and folds only the later checks' instructions", () => {
-    renderWithQuery(<CheckPlan plan={plan([step(1, ["lifting"]), step(2, ["hot_parts"])])} currency="GBP" units="metric" record={vi.fn()} busy={false} error={null} errorFor={() => null} />);
+    renderWithQuery(
+      <CheckPlan
+        plan={plan([step(1, ["lifting"]), step(2, ["hot_parts"])])}
+        currency="GBP"
+        units="metric"
+        record={vi.fn()}
+        busy={false}
+        error={null}
+        errorFor={() => null}
+      />,
+    );
     const [first, second] = screen.getAllByRole("listitem").filter((li) => li.hasAttribute("data-step"));
     expect(within(first).getByText(/never work under a car held only by a jack/)).toBeTruthy();
     expect(within(first).getByText("Do step 1")).toBeTruthy();
-    expect(within(second).getByRole("note", { name: "Cautions" }).textContent).toMatch(/exhaust, engine and brakes stay hot/);
+    expect(within(second).getByRole("note", { name: "Cautions" }).textContent).toMatch(
+      /exhaust, engine and brakes stay hot/,
+    );
     expect(within(second).getByText(/A fail means: Fault 2/)).toBeTruthy();
     expect(within(second).queryByText("Do step 2")).toBeNull();
     const details = second.querySelector("details")!;
@@ -52,19 +92,43 @@ describe("check plan", () => {
 
   it("shows the cautions of a check that has no instructions", () => {
     const bare = { ...step(2, ["high_voltage"]), instructions: [] };
-    renderWithQuery(<CheckPlan plan={plan([step(1), bare])} currency="GBP" units="metric" record={vi.fn()} busy={false} error={null} errorFor={() => null} />);
+    renderWithQuery(
+      <CheckPlan
+        plan={plan([step(1), bare])}
+        currency="GBP"
+        units="metric"
+        record={vi.fn()}
+        busy={false}
+        error={null}
+        errorFor={() => null}
+      />,
+    );
     const second = screen.getAllByRole("listitem").filter((li) => li.hasAttribute("data-step"))[1];
-    expect(within(second).getByRole("note", { name: "Cautions" }).textContent).toMatch(/only trained and authorised people/);
+    expect(within(second).getByRole("note", { name: "Cautions" }).textContent).toMatch(
+      /only trained and authorised people/,
+    );
   });
 });
 
 describe("Fold", () => {
   it("renders its contents at once when told to open, and keeps them", () => {
-    const { rerender } = render(<Fold summary="More" open={false}>inside</Fold>);
+    const { rerender } = render(
+      <Fold summary="More" open={false}>
+        inside
+      </Fold>,
+    );
     expect(screen.queryByText("inside")).toBeNull();
-    rerender(<Fold summary="More" open>inside</Fold>);
+    rerender(
+      <Fold summary="More" open>
+        inside
+      </Fold>,
+    );
     expect(screen.getByText("inside")).toBeTruthy();
-    rerender(<Fold summary="More" open={false}>inside</Fold>);
+    rerender(
+      <Fold summary="More" open={false}>
+        inside
+      </Fold>,
+    );
     expect(screen.getByText("inside")).toBeTruthy();
   });
 

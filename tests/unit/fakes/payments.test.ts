@@ -36,7 +36,13 @@ const cleanups: (() => Promise<void>)[] = [];
 
 async function start(statuses: number[] = [], extra: Partial<FakePaymentsOptions> = {}) {
   receiver = await startReceiver(statuses);
-  fake = await startFakePayments({ port: 0, webhookUrl: receiver.url, webhookSecret: SECRET, retryDelayMs: 5, ...extra });
+  fake = await startFakePayments({
+    port: 0,
+    webhookUrl: receiver.url,
+    webhookSecret: SECRET,
+    retryDelayMs: 5,
+    ...extra,
+  });
   cleanups.push(receiver.close, fake.close);
 }
 afterEach(async () => {
@@ -44,7 +50,13 @@ afterEach(async () => {
 });
 
 const sdk = (key = "sk_test_ramplight_fake") =>
-  new Stripe(key, { host: "127.0.0.1", port: fake.port, protocol: "http", maxNetworkRetries: 0, telemetry: false });
+  new Stripe(key, {
+    host: "127.0.0.1",
+    port: fake.port,
+    protocol: "http",
+    maxNetworkRetries: 0,
+    telemetry: false,
+  });
 
 const sessionParams = (): Stripe.Checkout.SessionCreateParams => ({
   mode: "payment",
@@ -53,8 +65,14 @@ const sessionParams = (): Stripe.Checkout.SessionCreateParams => ({
   client_reference_id: "job_42",
   metadata: { workshop: "bramblegate", jobId: "42" },
   line_items: [
-    { quantity: 1, price_data: { currency: "gbp", unit_amount: 8400, product_data: { name: "Labour, 1 h" } } },
-    { quantity: 2, price_data: { currency: "gbp", unit_amount: 1250, product_data: { name: "Wiper blade" } } },
+    {
+      quantity: 1,
+      price_data: { currency: "gbp", unit_amount: 8400, product_data: { name: "Labour, 1 h" } },
+    },
+    {
+      quantity: 2,
+      price_data: { currency: "gbp", unit_amount: 1250, product_data: { name: "Wiper blade" } },
+    },
   ],
 });
 
@@ -100,7 +118,12 @@ describe("fake payments with the stripe SDK", () => {
     const event = stripe.webhooks.constructEvent(body, headers["stripe-signature"] as string, SECRET);
     expect(event.type).toBe("checkout.session.completed");
     const paid = event.data.object as Stripe.Checkout.Session;
-    expect(paid).toMatchObject({ id: session.id, payment_status: "paid", status: "complete", client_reference_id: "job_42" });
+    expect(paid).toMatchObject({
+      id: session.id,
+      payment_status: "paid",
+      status: "complete",
+      client_reference_id: "job_42",
+    });
     expect((await stripe.checkout.sessions.retrieve(session.id)).payment_status).toBe("paid");
   });
 
@@ -112,8 +135,12 @@ describe("fake payments with the stripe SDK", () => {
     const signature = headers["stripe-signature"] as string;
     const tampered = body.replace('"amount_total": 10900', '"amount_total": 1');
     expect(tampered).not.toBe(body);
-    expect(() => stripe.webhooks.constructEvent(tampered, signature, SECRET)).toThrow(Stripe.errors.StripeSignatureVerificationError);
-    expect(() => stripe.webhooks.constructEvent(body, signature, "whsec_other")).toThrow(Stripe.errors.StripeSignatureVerificationError);
+    expect(() => stripe.webhooks.constructEvent(tampered, signature, SECRET)).toThrow(
+      Stripe.errors.StripeSignatureVerificationError,
+    );
+    expect(() => stripe.webhooks.constructEvent(body, signature, "whsec_other")).toThrow(
+      Stripe.errors.StripeSignatureVerificationError,
+    );
   });
 
   it("paying twice sends one event; cancelling leaves the session open", async () => {
@@ -129,9 +156,15 @@ describe("fake payments with the stripe SDK", () => {
   });
 
   it("answers like the real API for unknown sessions, bad params and live keys", async () => {
-    await expect(sdk().checkout.sessions.retrieve("cs_test_missing")).rejects.toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
-    await expect(sdk().checkout.sessions.create({ ...sessionParams(), mode: undefined })).rejects.toThrow(/mode must be/);
-    await expect(sdk("sk_live_nope").checkout.sessions.create(sessionParams())).rejects.toBeInstanceOf(Stripe.errors.StripeAuthenticationError);
+    await expect(sdk().checkout.sessions.retrieve("cs_test_missing")).rejects.toBeInstanceOf(
+      Stripe.errors.StripeInvalidRequestError,
+    );
+    await expect(sdk().checkout.sessions.create({ ...sessionParams(), mode: undefined })).rejects.toThrow(
+      /mode must be/,
+    );
+    await expect(sdk("sk_live_nope").checkout.sessions.create(sessionParams())).rejects.toBeInstanceOf(
+      Stripe.errors.StripeAuthenticationError,
+    );
   });
 });
 
@@ -140,10 +173,17 @@ describe("fake payments webhook retries", () => {
     await start([500, 503]);
     const session = await sdk().checkout.sessions.create(sessionParams());
     const delivery = await fake.pay(session.id);
-    expect(delivery).toMatchObject({ type: "checkout.session.completed", attempts: 3, delivered: true, lastStatus: 200 });
+    expect(delivery).toMatchObject({
+      type: "checkout.session.completed",
+      attempts: 3,
+      delivered: true,
+      lastStatus: 200,
+    });
     expect(receiver.received).toHaveLength(3);
     // Every attempt carries a valid signature over the same event.
-    const ids = receiver.received.map((r) => sdk().webhooks.constructEvent(r.body, r.headers["stripe-signature"] as string, SECRET).id);
+    const ids = receiver.received.map(
+      (r) => sdk().webhooks.constructEvent(r.body, r.headers["stripe-signature"] as string, SECRET).id,
+    );
     expect(new Set(ids).size).toBe(1);
   });
 
@@ -163,14 +203,23 @@ describe("fake payments webhook retries", () => {
 
 describe("payments wire format", () => {
   it("parses the SDK's bracketed form encoding into nested objects and arrays", () => {
-    const form = parseBracketForm("mode=payment&line_items[0][quantity]=2&line_items[0][price_data][currency]=gbp&metadata[jobId]=42&expand[]=a&__proto__[x]=1");
-    expect(form).toEqual({ mode: "payment", line_items: [{ quantity: "2", price_data: { currency: "gbp" } }], metadata: { jobId: "42" }, expand: ["a"] });
+    const form = parseBracketForm(
+      "mode=payment&line_items[0][quantity]=2&line_items[0][price_data][currency]=gbp&metadata[jobId]=42&expand[]=a&__proto__[x]=1",
+    );
+    expect(form).toEqual({
+      mode: "payment",
+      line_items: [{ quantity: "2", price_data: { currency: "gbp" } }],
+      metadata: { jobId: "42" },
+      expand: ["a"],
+    });
     expect(({} as Record<string, unknown>).x).toBeUndefined();
   });
 
   it("signs exactly like the SDK's own test helper", () => {
     const payload = JSON.stringify({ id: "evt_test_1", object: "event" });
     const timestamp = 1_760_000_000;
-    expect(signWebhook(payload, SECRET, timestamp)).toBe(Stripe.webhooks.generateTestHeaderString({ payload, secret: SECRET, timestamp }));
+    expect(signWebhook(payload, SECRET, timestamp)).toBe(
+      Stripe.webhooks.generateTestHeaderString({ payload, secret: SECRET, timestamp }),
+    );
   });
 });

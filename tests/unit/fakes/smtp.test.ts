@@ -37,7 +37,10 @@ describe("fake SMTP", () => {
     const [message, ...rest] = await smtp.messages();
     expect(rest).toHaveLength(0);
     expect(message).toMatchObject({
-      envelope: { from: "bookings@bramblegate.example", to: ["priya@bramblegate.example", "dana@bramblegate.example"] },
+      envelope: {
+        from: "bookings@bramblegate.example",
+        to: ["priya@bramblegate.example", "dana@bramblegate.example"],
+      },
       from: "Bramblegate Motor Works <bookings@bramblegate.example>",
       to: "Priya Hale <priya@bramblegate.example>",
       subject: "Grüße: MOT booked for Thursday ✔",
@@ -50,7 +53,12 @@ describe("fake SMTP", () => {
 
   it("keeps a long text-only message intact through quoted-printable", async () => {
     const text = `${"Brake pads and discs replaced on both axles; ".repeat(6)}total £212.40`;
-    await transport().sendMail({ from: "a@saltmarsh.example", to: "kit@saltmarsh.example", subject: "Invoice", text });
+    await transport().sendMail({
+      from: "a@saltmarsh.example",
+      to: "kit@saltmarsh.example",
+      subject: "Invoice",
+      text,
+    });
     const [message] = await smtp.waitForMessages(1);
     expect(message!.raw).toMatch(/Content-Transfer-Encoding: quoted-printable/i);
     expect(message!.text).toBe(text);
@@ -59,8 +67,18 @@ describe("fake SMTP", () => {
 
   it("writes each message as JSON that readInbox returns in arrival order", async () => {
     const t = transport();
-    await t.sendMail({ from: "a@bramblegate.example", to: "ines@bramblegate.example", subject: "first", text: "1" });
-    await t.sendMail({ from: "a@bramblegate.example", to: "ines@bramblegate.example", subject: "second", text: "2" });
+    await t.sendMail({
+      from: "a@bramblegate.example",
+      to: "ines@bramblegate.example",
+      subject: "first",
+      text: "1",
+    });
+    await t.sendMail({
+      from: "a@bramblegate.example",
+      to: "ines@bramblegate.example",
+      subject: "second",
+      text: "2",
+    });
     const inbox = await readInbox(dir);
     expect(inbox.map((m) => m.subject)).toEqual(["first", "second"]);
     expect(inbox).toEqual(await smtp.messages());
@@ -68,7 +86,12 @@ describe("fake SMTP", () => {
 
   it("clear() empties memory and its own files, and leaves other files alone", async () => {
     await writeFile(join(dir, "notes.json"), "{}");
-    await transport().sendMail({ from: "a@bramblegate.example", to: "ines@bramblegate.example", subject: "gone soon", text: "x" });
+    await transport().sendMail({
+      from: "a@bramblegate.example",
+      to: "ines@bramblegate.example",
+      subject: "gone soon",
+      text: "x",
+    });
     expect(await readInbox(dir)).toHaveLength(1);
     await smtp.clear();
     expect(await smtp.messages()).toEqual([]);

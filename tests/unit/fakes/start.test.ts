@@ -8,7 +8,8 @@ import { startAllFakes } from "../../fakes/start";
 const ENV = {
   OAUTH_CLIENT_ID: "ramplight-demo",
   OAUTH_CLIENT_SECRET: "demo-secret-1234",
-  OAUTH_REDIRECT_URI: "http://127.0.0.1:3999/auth/github/callback, http://localhost:3999/auth/github/callback",
+  OAUTH_REDIRECT_URI:
+    "http://127.0.0.1:3999/auth/github/callback, http://localhost:3999/auth/github/callback",
   FAKE_OAUTH_PORT: "0",
   FAKE_SMTP_PORT: "0",
   FAKE_PAY_PORT: "0",
@@ -28,7 +29,11 @@ describe("tests/fakes/start.ts", () => {
       expect(await (await fetch(`${oauthUrl}/__health`)).text()).toBe("ok");
       expect(await (await fetch(`${payUrl}/__health`)).text()).toBe("ok");
       const authorize = new URL("/login/oauth/authorize", oauthUrl);
-      authorize.search = new URLSearchParams({ client_id: "ramplight-demo", redirect_uri: "http://localhost:3999/auth/github/callback", state: "s" }).toString();
+      authorize.search = new URLSearchParams({
+        client_id: "ramplight-demo",
+        redirect_uri: "http://localhost:3999/auth/github/callback",
+        state: "s",
+      }).toString();
       expect((await fetch(authorize)).status).toBe(200);
     } finally {
       await fakes.close();
@@ -36,9 +41,15 @@ describe("tests/fakes/start.ts", () => {
   });
 
   it("refuses to start without the OAuth client variables", async () => {
-    await expect(startAllFakes({ FAKE_OAUTH_PORT: "0" })).rejects.toThrow(/OAUTH_CLIENT_ID, OAUTH_CLIENT_SECRET, OAUTH_REDIRECT_URI/);
-    await expect(startAllFakes({ ...ENV, PAY_WEBHOOK_URL: "http://127.0.0.1:3999/webhooks" })).rejects.toThrow(/PAY_WEBHOOK_SECRET/);
-    await expect(startAllFakes({ ...ENV, FAKE_SMTP_PORT: "lots" })).rejects.toThrow(/FAKE_SMTP_PORT must be a port/);
+    await expect(startAllFakes({ FAKE_OAUTH_PORT: "0" })).rejects.toThrow(
+      /OAUTH_CLIENT_ID, OAUTH_CLIENT_SECRET, OAUTH_REDIRECT_URI/,
+    );
+    await expect(
+      startAllFakes({ ...ENV, PAY_WEBHOOK_URL: "http://127.0.0.1:3999/webhooks" }),
+    ).rejects.toThrow(/PAY_WEBHOOK_SECRET/);
+    await expect(startAllFakes({ ...ENV, FAKE_SMTP_PORT: "lots" })).rejects.toThrow(
+      /FAKE_SMTP_PORT must be a port/,
+    );
   });
 
   it("runs as a CLI: prints one line per service, writes its pid, stops cleanly on SIGTERM", async () => {

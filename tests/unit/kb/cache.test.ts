@@ -24,7 +24,9 @@ describe("the knowledge-base cache", () => {
 
   it("forgets a failed build and stays within its bound", async () => {
     const cache = kbCache<number>("t", 3);
-    await expect(cache.get("w", 1, "x", () => Promise.reject(new Error("db down")))).rejects.toThrow("db down");
+    await expect(cache.get("w", 1, "x", () => Promise.reject(new Error("db down")))).rejects.toThrow(
+      "db down",
+    );
     await new Promise((r) => setTimeout(r, 0));
     expect(await cache.get("w", 1, "x", () => 7)).toBe(7);
     for (let i = 0; i < 5; i++) await cache.get("w", 1, `p${i}`, () => i);

@@ -19,7 +19,11 @@ describe("diagnostic benchmark cases", () => {
   it("has at least 80 cases over every system, at least 10 of them with a cause the base lacks", () => {
     expect(benchCases.length).toBeGreaterThanOrEqual(80);
     expect(benchCases.filter((c) => "missing" in c.answer).length).toBeGreaterThanOrEqual(10);
-    for (const system of SYSTEMS) expect(benchCases.some((c) => c.system === system), system).toBe(true);
+    for (const system of SYSTEMS)
+      expect(
+        benchCases.some((c) => c.system === system),
+        system,
+      ).toBe(true);
     expect(new Set(benchCases.map((c) => c.id)).size).toBe(benchCases.length);
   });
 
@@ -30,12 +34,15 @@ describe("diagnostic benchmark cases", () => {
     }
     expect(benchCases.filter((c) => c.said.some((p) => !p.present)).length).toBeGreaterThanOrEqual(10);
     expect(benchCases.filter((c) => c.findings.some((f) => f.reading)).length).toBeGreaterThanOrEqual(20);
-    expect(benchCases.filter((c) => c.findings.length > 0).length).toBeGreaterThanOrEqual(benchCases.length - 2);
+    expect(benchCases.filter((c) => c.findings.length > 0).length).toBeGreaterThanOrEqual(
+      benchCases.length - 2,
+    );
   });
 
   it("writes phrases in people's words: none equals a knowledge-base name or synonym (a bare trouble code is the standard's own name)", () => {
     const kbText = new Set<string>();
-    for (const s of kb.symptoms) for (const t of [s.name, ...s.synonyms, ...s.conditions]) kbText.add(normaliseText(t));
+    for (const s of kb.symptoms)
+      for (const t of [s.name, ...s.synonyms, ...s.conditions]) kbText.add(normaliseText(t));
     for (const c of [...kb.causes, ...kb.checks]) kbText.add(normaliseText(c.name));
     for (const c of benchCases) {
       for (const p of c.said) {
@@ -47,17 +54,22 @@ describe("diagnostic benchmark cases", () => {
 
   it("names only symptoms, failure modes and checks that exist, and readings that parse against their rule", () => {
     for (const c of benchCases) {
-      for (const p of c.said) if (p.means !== null) expect(symptomKeys.has(p.means), `${c.id}: ${p.means}`).toBe(true);
+      for (const p of c.said)
+        if (p.means !== null) expect(symptomKeys.has(p.means), `${c.id}: ${p.means}`).toBe(true);
       if ("cause" in c.answer) expect(leafKeys.has(c.answer.cause), `${c.id}: ${c.answer.cause}`).toBe(true);
       else expect(c.answer.missing.length, c.id).toBeGreaterThan(5);
       for (const f of c.findings) {
         const check = checkByKey.get(f.check);
         expect(check, `${c.id}: ${f.check}`).toBeDefined();
-        expect(Boolean(f.result) !== Boolean(f.reading), `${c.id}: ${f.check} has a result or a reading`).toBe(true);
+        expect(
+          Boolean(f.result) !== Boolean(f.reading),
+          `${c.id}: ${f.check} has a result or a reading`,
+        ).toBe(true);
         if (f.reading) {
           const result = check!.result;
           expect(result.kind, `${c.id}: ${f.check}`).toBe("measurement");
-          if (result.kind === "measurement") expect(() => evaluateRule(result.rule, f.reading!), `${c.id}: ${f.reading}`).not.toThrow();
+          if (result.kind === "measurement")
+            expect(() => evaluateRule(result.rule, f.reading!), `${c.id}: ${f.reading}`).not.toThrow();
         }
       }
     }

@@ -31,6 +31,8 @@ describe("the knowledge-base document", () => {
   });
 
   it("refuses a document of another format", () => {
-    expect(KnowledgeDocumentSchema.safeParse({ ...starter, format: "something-else" }).error!.issues[0].message).toMatch(/not a Ramplight knowledge base/);
+    expect(
+      KnowledgeDocumentSchema.safeParse({ ...starter, format: "something-else" }).error!.issues[0].message,
+    ).toMatch(/not a Ramplight knowledge base/);
   });
 });

@@ -28,7 +28,8 @@ describe("graded figures", () => {
   });
 
   it("say the backing plate reads far beyond more often than pads near the limit, and the reverse just beyond", () => {
-    const g = (cause: string) => graded.find((l) => l.check === "pad_thickness" && l.cause === cause)!.graded!;
+    const g = (cause: string) =>
+      graded.find((l) => l.check === "pad_thickness" && l.cause === cause)!.graded!;
     expect(g("brake_pads_metal").far_beyond).toBeGreaterThan(g("brake_pads_worn").far_beyond);
     expect(g("brake_pads_worn").beyond).toBeGreaterThan(g("brake_pads_metal").beyond);
   });
@@ -56,7 +57,9 @@ describe("link conditions", () => {
       expect(links.has(key), key).toBe(true);
       for (const c of when) expect(CONDITIONS as readonly string[], key).toContain(c);
     }
-    const lifter = kb.symptomLinks.find((l) => l.symptom === "tick_top_end" && l.cause === "hydraulic_lifter_noisy");
+    const lifter = kb.symptomLinks.find(
+      (l) => l.symptom === "tick_top_end" && l.cause === "hydraulic_lifter_noisy",
+    );
     expect(lifter?.when).toEqual(["cold", "at_idle"]);
   });
 });

@@ -47,7 +47,9 @@ const linksOf = (symptom: string) => kb.symptomLinks.filter((l) => l.symptom ===
 const text = (c: CheckSeed) => [c.name, ...c.instructions, c.result.failMeans].join(" ");
 const measurementChecks = kb.checks.filter((c) => c.result.kind === "measurement");
 /** Trouble-code symptoms named by their code; the one generic "trouble code stored" symptom has none. */
-const troubleCodeSymptoms = kb.symptoms.filter((s) => s.kind === "trouble_code" && s.key !== "trouble_code_stored");
+const troubleCodeSymptoms = kb.symptoms.filter(
+  (s) => s.kind === "trouble_code" && s.key !== "trouble_code_stored",
+);
 /** What the technician reads and does: the name and the steps (not the fail text, which may name other parts). */
 const doing = (c: CheckSeed) => [c.name, ...c.instructions].join(" ");
 const kbSources = () =>
@@ -110,19 +112,49 @@ describe("starter knowledge base: shape and counts", () => {
   });
 
   it("uses exactly the symptom kinds and the ten systems of the lists", () => {
-    expect([...SYMPTOM_KINDS]).toEqual(["noise", "vibration", "pull", "warning_lamp", "trouble_code", "smell", "leak", "consumption", "electrical", "performance", "visible"]);
-    for (const sys of ["brakes", "suspension_steering", "wheels_tyres", "driveline", "engine_fuel_emissions", "engine_mechanical", "cooling", "electrical", "exhaust", "body"]) {
+    expect([...SYMPTOM_KINDS]).toEqual([
+      "noise",
+      "vibration",
+      "pull",
+      "warning_lamp",
+      "trouble_code",
+      "smell",
+      "leak",
+      "consumption",
+      "electrical",
+      "performance",
+      "visible",
+    ]);
+    for (const sys of [
+      "brakes",
+      "suspension_steering",
+      "wheels_tyres",
+      "driveline",
+      "engine_fuel_emissions",
+      "engine_mechanical",
+      "cooling",
+      "electrical",
+      "exhaust",
+      "body",
+    ]) {
       expect(SYSTEMS).toContain(sys);
     }
     expect(SYSTEMS).toHaveLength(10);
-    for (const kind of SYMPTOM_KINDS) expect(kb.symptoms.some((s) => s.kind === kind), kind).toBe(true);
+    for (const kind of SYMPTOM_KINDS)
+      expect(
+        kb.symptoms.some((s) => s.kind === kind),
+        kind,
+      ).toBe(true);
   });
 
   it("covers every system with a root, components, failure modes, symptoms and checks", () => {
     for (const system of SYSTEMS) {
       const roots = kb.causes.filter((c) => c.system === system && c.level === "system");
       expect(roots, system).toHaveLength(1);
-      expect(kb.causes.filter((c) => c.system === system && c.level === "component").length, system).toBeGreaterThanOrEqual(2);
+      expect(
+        kb.causes.filter((c) => c.system === system && c.level === "component").length,
+        system,
+      ).toBeGreaterThanOrEqual(2);
       const sysLeaves = leaves.filter((c) => c.system === system);
       expect(sysLeaves.length, system).toBeGreaterThanOrEqual(5);
       expect(kb.symptoms.filter((s) => s.system === system).length, system).toBeGreaterThanOrEqual(4);
@@ -188,7 +220,10 @@ describe("cause tree", () => {
 
   it("gives every component at least one failure mode", () => {
     for (const c of kb.causes.filter((x) => x.level === "component")) {
-      expect(leaves.some((l) => l.parentKey === c.key), c.key).toBe(true);
+      expect(
+        leaves.some((l) => l.parentKey === c.key),
+        c.key,
+      ).toBe(true);
     }
   });
 
@@ -196,13 +231,19 @@ describe("cause tree", () => {
     for (const c of kb.causes) {
       const figures = [c.baseRate, c.priority, c.repairMinutes, c.partsCost];
       if (c.level === "failure_mode") {
-        expect(figures.every((f) => f !== undefined), c.key).toBe(true);
+        expect(
+          figures.every((f) => f !== undefined),
+          c.key,
+        ).toBe(true);
         expect(c.baseRate!, c.key).toBeGreaterThan(0);
         expect(PRIORITIES).toContain(c.priority);
         expect(c.repairMinutes!, c.key).toBeGreaterThan(0);
         expect(c.partsCost!, c.key).toBeGreaterThanOrEqual(0);
       } else {
-        expect(figures.every((f) => f === undefined), c.key).toBe(true);
+        expect(
+          figures.every((f) => f === undefined),
+          c.key,
+        ).toBe(true);
         expect(c.applicability, c.key).toBeUndefined();
       }
       expect(c.description.length, c.key).toBeGreaterThan(20);
@@ -227,14 +268,21 @@ describe("cause tree", () => {
   });
 
   it("keeps exhaust and fuelling faults off electric cars, and diesel/petrol/drivetrain faults where they belong", () => {
-    for (const c of leaves.filter((l) => ["exhaust", "engine_fuel_emissions", "engine_mechanical"].includes(l.system))) {
+    for (const c of leaves.filter((l) =>
+      ["exhaust", "engine_fuel_emissions", "engine_mechanical"].includes(l.system),
+    )) {
       expect(c.applicability?.fuel, c.key).toBeDefined();
       expect(c.applicability!.fuel, c.key).not.toContain("electric");
     }
     for (const k of ["glow_plugs_failed", "egr_valve_sticking", "dpf_blocked"]) {
       expect(causeByKey.get(k)!.applicability?.fuel).toEqual(["diesel"]);
     }
-    for (const k of ["spark_plugs_worn", "ignition_coil_failed", "lambda_sensor_slow", "catalyst_inefficient"]) {
+    for (const k of [
+      "spark_plugs_worn",
+      "ignition_coil_failed",
+      "lambda_sensor_slow",
+      "catalyst_inefficient",
+    ]) {
       expect(causeByKey.get(k)!.applicability?.fuel).not.toContain("diesel");
     }
     for (const k of ["propshaft_uj_worn", "propshaft_centre_bearing"]) {
@@ -247,15 +295,32 @@ describe("cause tree", () => {
 
   it("marks the unsafe-to-drive faults Stop", () => {
     for (const k of [
-      "brake_fluid_leak", "brake_pads_metal", "tyre_tread_worn", "tyre_sidewall_damage", "ball_joint_worn", "wheel_nuts_loose", "fuel_leak",
-      "caliper_bolt_loose", "brake_pipe_corroded", "brake_servo_vacuum", "wheel_stud_damaged", "spring_seat_corroded", "thermostat_stuck_closed",
-      "head_gasket_failed", "oil_pump_pickup_blocked", "engine_bearings_worn", "subframe_mount_corrosion", "sill_corrosion",
+      "brake_fluid_leak",
+      "brake_pads_metal",
+      "tyre_tread_worn",
+      "tyre_sidewall_damage",
+      "ball_joint_worn",
+      "wheel_nuts_loose",
+      "fuel_leak",
+      "caliper_bolt_loose",
+      "brake_pipe_corroded",
+      "brake_servo_vacuum",
+      "wheel_stud_damaged",
+      "spring_seat_corroded",
+      "thermostat_stuck_closed",
+      "head_gasket_failed",
+      "oil_pump_pickup_blocked",
+      "engine_bearings_worn",
+      "subframe_mount_corrosion",
+      "sill_corrosion",
     ]) {
       expect(causeByKey.get(k)!.priority, k).toBe("stop");
     }
     // nothing broken: a switch left on is shown to the owner, not charged as a repair
     for (const k of ["window_lock_on", "child_lock_on"]) expect(causeByKey.get(k)!.priority, k).toBe("sound");
-    expect(causeByKey.get("brake_pads_worn")!.baseRate!).toBeGreaterThan(causeByKey.get("brake_caliper_sticking")!.baseRate!);
+    expect(causeByKey.get("brake_pads_worn")!.baseRate!).toBeGreaterThan(
+      causeByKey.get("brake_caliper_sticking")!.baseRate!,
+    );
   });
 });
 
@@ -298,7 +363,10 @@ describe("symptoms and checks", () => {
       expect(s.code, s.key).toBe(s.code!.toUpperCase());
       expect(s.name.startsWith(`${s.code} stored: `), s.name).toBe(true);
       expect(s.synonyms, s.key).toContain(s.code);
-      expect(s.synonyms.map((x) => x.toLowerCase()), s.key).toContain(s.code!.toLowerCase());
+      expect(
+        s.synonyms.map((x) => x.toLowerCase()),
+        s.key,
+      ).toContain(s.code!.toLowerCase());
     }
     const codes = troubleCodeSymptoms.map((s) => s.code);
     expect(new Set(codes).size).toBe(codes.length);
@@ -313,10 +381,40 @@ describe("symptoms and checks", () => {
       expect(isGeneric(s.code!), s.code).toBe(true);
     }
     // the brief: at least 35 of the codes are of the plainest generic form, second character 0
-    expect(troubleCodeSymptoms.filter((s) => parseDtc(s.code!).valid && s.code![1] === "0").length).toBeGreaterThanOrEqual(35);
+    expect(
+      troubleCodeSymptoms.filter((s) => parseDtc(s.code!).valid && s.code![1] === "0").length,
+    ).toBeGreaterThanOrEqual(35);
     // the usual ones are all there
-    for (const c of ["P0171", "P0172", "P0300", "P0301", "P0302", "P0303", "P0304", "P0420", "P0117", "P0118", "P0128", "P0101", "P0130", "P0135", "P0136", "P0141", "P0401", "P0441", "P0455", "P0505", "P0562", "P0563", "P0700", "P2002"]) {
-      expect(troubleCodeSymptoms.some((s) => s.code === c), c).toBe(true);
+    for (const c of [
+      "P0171",
+      "P0172",
+      "P0300",
+      "P0301",
+      "P0302",
+      "P0303",
+      "P0304",
+      "P0420",
+      "P0117",
+      "P0118",
+      "P0128",
+      "P0101",
+      "P0130",
+      "P0135",
+      "P0136",
+      "P0141",
+      "P0401",
+      "P0441",
+      "P0455",
+      "P0505",
+      "P0562",
+      "P0563",
+      "P0700",
+      "P2002",
+    ]) {
+      expect(
+        troubleCodeSymptoms.some((s) => s.code === c),
+        c,
+      ).toBe(true);
     }
   });
 
@@ -344,17 +442,32 @@ describe("symptoms and checks", () => {
 
   it("names the warning lamps, each as a warning_lamp with lamp or light among its words", () => {
     const lamps = [
-      "check_engine_light", "oil_pressure_lamp", "charge_light", "airbag_lamp", "abs_light", "red_brake_lamp", "coolant_temp_lamp",
-      "glow_plug_lamp", "dpf_light", "tyre_pressure_light", "pas_lamp", "esc_lamp",
+      "check_engine_light",
+      "oil_pressure_lamp",
+      "charge_light",
+      "airbag_lamp",
+      "abs_light",
+      "red_brake_lamp",
+      "coolant_temp_lamp",
+      "glow_plug_lamp",
+      "dpf_light",
+      "tyre_pressure_light",
+      "pas_lamp",
+      "esc_lamp",
     ];
     for (const k of lamps) {
       const s = symptomByKey.get(k);
       expect(s, k).toBeDefined();
       expect(s!.kind, k).toBe("warning_lamp");
       expect(/lamp/i.test(s!.name), k).toBe(true);
-      expect(s!.synonyms.some((x) => /\blight\b/i.test(x)), `${k}: owners say "light"`).toBe(true);
+      expect(
+        s!.synonyms.some((x) => /\blight\b/i.test(x)),
+        `${k}: owners say "light"`,
+      ).toBe(true);
     }
-    expect(symptomByKey.get("check_engine_light")!.name).toMatch(/MIL|malfunction indicator|engine management/i);
+    expect(symptomByKey.get("check_engine_light")!.name).toMatch(
+      /MIL|malfunction indicator|engine management/i,
+    );
   });
 
   it("re-kinds fuel and oil use as consumption", () => {
@@ -391,7 +504,6 @@ describe("symptoms and checks", () => {
     expect(has("no_crank", "no crank")).toBe(true);
     expect(has("rear_windows_dead", "back windows won't go down")).toBe(true);
   });
-
 });
 
 describe("safety cautions", () => {
@@ -405,8 +517,14 @@ describe("safety cautions", () => {
   const HAZARD_WORDS: [Caution, RegExp][] = [
     ["lifting", /\bramp\b|\bjack(ed)?\b|axle stands?|lifting points?/i],
     ["brake_hydraulics", /bleed|brake fluid|brake pipe|brake line/i],
-    ["fuel", /fuel (line|pipe|rail|pump|filter|pressure|system|work|tank)|(unplug|remove|disconnect|open|fit)[^.]{0,40}injector|injector (pipe|seal|return|coil)|back-leak|water trap/i],
-    ["hot_parts", /\bhot\b|warm engine|fully warm|working temperature|exhaust (manifold|pipe|system|joint|parts)|tailpipe|\bcatalyst\b|\bturbo\b/i],
+    [
+      "fuel",
+      /fuel (line|pipe|rail|pump|filter|pressure|system|work|tank)|(unplug|remove|disconnect|open|fit)[^.]{0,40}injector|injector (pipe|seal|return|coil)|back-leak|water trap/i,
+    ],
+    [
+      "hot_parts",
+      /\bhot\b|warm engine|fully warm|working temperature|exhaust (manifold|pipe|system|joint|parts)|tailpipe|\bcatalyst\b|\bturbo\b/i,
+    ],
     ["airbag", /airbag|clock.spring|yellow plugs?|belt.tensioner/i],
     ["high_voltage", /high.voltage|hybrid|orange cable|gas-discharge/i],
     ["battery_acid", /battery (post|terminal|clamp|lead)s?|battery work/i],
@@ -420,15 +538,21 @@ describe("safety cautions", () => {
   }
 
   it("puts 'exhaust_fumes' on every check that runs the engine in the workshop", () => {
-    const runsEngine = /engine (running|idling)|at (warm |hot )?idle|start the engine|run the engine|engine warm and idling|while cranking|crank or idle|idle the engine/i;
-    for (const c of kb.checks.filter((x) => runsEngine.test(x.instructions.join(" ")) && !x.access.includes("road_test"))) {
+    const runsEngine =
+      /engine (running|idling)|at (warm |hot )?idle|start the engine|run the engine|engine warm and idling|while cranking|crank or idle|idle the engine/i;
+    for (const c of kb.checks.filter(
+      (x) => runsEngine.test(x.instructions.join(" ")) && !x.access.includes("road_test"),
+    )) {
       expect(c.cautions, c.key).toContain("exhaust_fumes");
     }
   });
 
   it("puts 'rotating_parts' on every check that works under the bonnet with the engine running", () => {
-    const running = /engine (running|idling)|at (warm |hot )?idle|idle the engine|run the engine|while cranking/i;
-    for (const c of kb.checks.filter((x) => x.access.includes("bonnet_open") && running.test(x.instructions.join(" ")))) {
+    const running =
+      /engine (running|idling)|at (warm |hot )?idle|idle the engine|run the engine|while cranking/i;
+    for (const c of kb.checks.filter(
+      (x) => x.access.includes("bonnet_open") && running.test(x.instructions.join(" ")),
+    )) {
       expect(c.cautions, c.key).toContain("rotating_parts");
     }
   });
@@ -439,7 +563,9 @@ describe("safety cautions", () => {
       expect(c.cautions, c.key).not.toContain("airbag");
       expect(doing(c), c.key).not.toMatch(/bleed|hybrid/i);
     }
-    const airbagParts = kb.checks.filter((x) => x.cautions.includes("airbag") && /clock spring|seat/i.test(x.name));
+    const airbagParts = kb.checks.filter(
+      (x) => x.cautions.includes("airbag") && /clock spring|seat/i.test(x.name),
+    );
     expect(airbagParts.length).toBeGreaterThanOrEqual(2);
     for (const c of airbagParts) expect(c.skill, c.key).toBe("senior");
   });
@@ -460,7 +586,8 @@ describe("safety cautions", () => {
   });
 
   it("never opens a hot cooling system without the 'pressurised_cooling' caution", () => {
-    const opensCooling = (words: string) => /coolant|cooling/i.test(words) && /\bcap\b|filler|tank/i.test(words);
+    const opensCooling = (words: string) =>
+      /coolant|cooling/i.test(words) && /\bcap\b|filler|tank/i.test(words);
     for (const c of kb.checks.filter((x) => opensCooling(x.instructions.join(" ")))) {
       expect(c.cautions, c.key).toContain("pressurised_cooling");
     }
@@ -473,7 +600,8 @@ describe("safety cautions", () => {
   });
 
   it("keeps scan-tool work above apprentice level", () => {
-    for (const c of kb.checks.filter((x) => x.access.includes("scan_tool"))) expect(c.skill, c.key).not.toBe("apprentice");
+    for (const c of kb.checks.filter((x) => x.access.includes("scan_tool")))
+      expect(c.skill, c.key).not.toBe("apprentice");
   });
 });
 
@@ -516,11 +644,14 @@ describe("links", () => {
     for (const s of troubleCodeSymptoms) {
       const causes = linksOf(s.key).map((l) => causeByKey.get(l.cause)!);
       expect(causes.length, s.code).toBeGreaterThanOrEqual(1);
-      for (const c of causes) expect(c.applicability?.fuel ?? ["petrol"], `${s.code} → ${c.key}`).not.toEqual(["electric"]);
+      for (const c of causes)
+        expect(c.applicability?.fuel ?? ["petrol"], `${s.code} → ${c.key}`).not.toEqual(["electric"]);
     }
     const cause = (code: string) => linksOf(`dtc_${code.toLowerCase()}`).map((l) => l.cause);
     expect(cause("P0420")).toContain("catalyst_inefficient");
-    expect(cause("P0171")).toEqual(expect.arrayContaining(["intake_air_leak", "maf_sensor_fault", "fuel_pump_weak"]));
+    expect(cause("P0171")).toEqual(
+      expect.arrayContaining(["intake_air_leak", "maf_sensor_fault", "fuel_pump_weak"]),
+    );
     expect(cause("P0128")).toContain("thermostat_stuck_open");
     expect(cause("P0301")).toEqual(expect.arrayContaining(["ignition_coil_failed", "spark_plugs_worn"]));
     expect(cause("P0562")).toContain("alternator_not_charging");
@@ -528,14 +659,20 @@ describe("links", () => {
 
   it("links every symptom to a cause and every check to a cause", () => {
     for (const s of kb.symptoms) expect(linksOf(s.key).length, s.key).toBeGreaterThanOrEqual(1);
-    for (const c of kb.checks) expect(kb.checkLinks.some((l) => l.check === c.key), c.key).toBe(true);
+    for (const c of kb.checks)
+      expect(
+        kb.checkLinks.some((l) => l.check === c.key),
+        c.key,
+      ).toBe(true);
   });
 
   it("has some checks that bear on a whole component or system", () => {
     const nodeLinks = kb.checkLinks.filter((l) => causeByKey.get(l.cause)!.level !== "failure_mode");
     expect(nodeLinks.length).toBeGreaterThanOrEqual(5);
     expect(nodeLinks.some((l) => l.check === "brake_road_test" && l.cause === "brakes")).toBe(true);
-    expect(nodeLinks.some((l) => l.check === "engine_fault_memory" && l.cause === "engine_fuel_emissions")).toBe(true);
+    expect(
+      nodeLinks.some((l) => l.check === "engine_fault_memory" && l.cause === "engine_fuel_emissions"),
+    ).toBe(true);
   });
 
   it("keeps every probability in range", () => {
@@ -559,7 +696,8 @@ describe("links", () => {
   });
 
   it("makes a check's hit rate on its causes beat its false-alarm rate", () => {
-    for (const l of kb.checkLinks) expect(l.pFail, `${l.check}|${l.cause}`).toBeGreaterThan(checkByKey.get(l.check)!.falseAlarm);
+    for (const l of kb.checkLinks)
+      expect(l.pFail, `${l.check}|${l.cause}`).toBeGreaterThan(checkByKey.get(l.check)!.falseAlarm);
   });
 });
 
@@ -570,7 +708,9 @@ describe("owner words on failure modes", () => {
         const said = c[field];
         expect(said, `${c.key}.${field}`).toBeDefined();
         expect(said!.trim().length, `${c.key}.${field}`).toBeGreaterThan(25);
-        expect(said!.toLowerCase(), `${c.key}.${field} repeats the technical name`).not.toContain(c.name.toLowerCase());
+        expect(said!.toLowerCase(), `${c.key}.${field} repeats the technical name`).not.toContain(
+          c.name.toLowerCase(),
+        );
         expect(said, `${c.key}.${field} names a trouble code`).not.toMatch(/\b[PCBU][0-9][0-9A-F]{3}\b/);
         expect(said, `${c.key}.${field} uses a key`).not.toContain(c.key);
         expect(said!.trim(), `${c.key}.${field}`).toMatch(/[.!]$/);
@@ -607,9 +747,12 @@ describe("measurement rules", () => {
     describe(c.key, () => {
       it("parses, names only `value` and known units, and converts its limits to the check's unit", () => {
         const node = m.parse(rule);
-        const symbols = node.filter((n: MathNode) => m.isSymbolNode(n)).map((n) => (n as unknown as { name: string }).name);
+        const symbols = node
+          .filter((n: MathNode) => m.isSymbolNode(n))
+          .map((n) => (n as unknown as { name: string }).name);
         expect(symbols).toContain("value");
-        for (const s of symbols.filter((s) => s !== "value")) expect(m.Unit.isValuelessUnit(s), `${s} in ${rule}`).toBe(true);
+        for (const s of symbols.filter((s) => s !== "value"))
+          expect(m.Unit.isValuelessUnit(s), `${s} in ${rule}`).toBe(true);
         if (unit !== "") expect(() => m.unit(1, unit)).not.toThrow();
         expect(boundsOf(rule, unit).length).toBeGreaterThanOrEqual(1);
       });
@@ -647,7 +790,9 @@ describe("measurement rules", () => {
       const comment = [lines[ruleLine]];
       for (let j = ruleLine - 1; j > keyLine && lines[j].trim().startsWith("//"); j--) comment.push(lines[j]);
       const said = comment.filter((l) => l.includes("//")).join(" ");
-      expect(said, `${c.key}: no source comment beside its rule`).toMatch(/published|secondary|common practice|from memory|derived/i);
+      expect(said, `${c.key}: no source comment beside its rule`).toMatch(
+        /published|secondary|common practice|from memory|derived/i,
+      );
       if (/maker-specific/i.test(said)) expect(text(c), c.key).toMatch(/maker's [a-z -]*(figure|table)/i);
     }
   });
@@ -673,19 +818,33 @@ describe("demo journeys", () => {
     const ranked = topBy("vibration_braking");
     expect(ranked[0].cause).toBe("brake_disc_runout_dtv");
     const linked = ranked.map((r) => r.cause);
-    for (const k of ["brake_pad_deposits", "arm_bush_worn", "wheel_bearing_worn", "wheel_out_of_balance"]) expect(linked).toContain(k);
+    for (const k of ["brake_pad_deposits", "arm_bush_worn", "wheel_bearing_worn", "wheel_out_of_balance"])
+      expect(linked).toContain(k);
     // out-of-balance is weaker under braking than at steady speed
     const p = (s: string, c: string) => kb.symptomLinks.find((l) => l.symptom === s && l.cause === c)!.p;
-    expect(p("vibration_braking", "wheel_out_of_balance")).toBeLessThan(p("vibration_speed", "wheel_out_of_balance"));
+    expect(p("vibration_braking", "wheel_out_of_balance")).toBeLessThan(
+      p("vibration_speed", "wheel_out_of_balance"),
+    );
   });
 
   it("vibration under braking: the check plan has the gauge, micrometer, visual, road test, balance and play checks", () => {
     const onDisc = checksFor("brake_disc_runout_dtv");
-    for (const k of ["disc_runout_dial_gauge", "disc_thickness_variation", "disc_surface_visual", "brake_road_test"]) expect(onDisc).toContain(k);
+    for (const k of [
+      "disc_runout_dial_gauge",
+      "disc_thickness_variation",
+      "disc_surface_visual",
+      "brake_road_test",
+    ])
+      expect(onDisc).toContain(k);
     expect(checksFor("wheel_out_of_balance")).toContain("wheel_balance");
     expect(checksFor("arm_bush_worn")).toContain("suspension_play_ramp");
     const gauge = checkByKey.get("disc_runout_dial_gauge")!;
-    expect(gauge.result).toMatchObject({ kind: "measurement", quantity: "length", unit: "mm", rule: "value <= 0.05 mm" });
+    expect(gauge.result).toMatchObject({
+      kind: "measurement",
+      quantity: "length",
+      unit: "mm",
+      rule: "value <= 0.05 mm",
+    });
     const rule = (gauge.result as { rule: string }).rule;
     expect(evaluate(rule, m.unit(0.09, "mm"))).toBe(false);
     expect(evaluate(rule, m.unit(0.0035, "inch"))).toBe(false); // 0.089 mm
@@ -696,18 +855,27 @@ describe("demo journeys", () => {
   it("clunk over bumps: the front-end suspects are all linked, drop link first", () => {
     const ranked = topBy("clunk_front_bumps");
     expect(ranked[0].cause).toBe("drop_link_worn");
-    for (const k of ["arb_bush_worn", "top_mount_worn", "ball_joint_worn", "damper_worn"]) expect(ranked.map((r) => r.cause)).toContain(k);
+    for (const k of ["arb_bush_worn", "top_mount_worn", "ball_joint_worn", "damper_worn"])
+      expect(ranked.map((r) => r.cause)).toContain(k);
   });
 
   it("pulls to one side: alignment, tyre pressure, tyre conicity and a sticking caliper", () => {
     const ranked = topBy("pulls_driving");
     expect(ranked[0].cause).toBe("alignment_out");
-    for (const k of ["tyre_pressure_low", "tyre_internal_fault", "brake_caliper_sticking"]) expect(ranked.map((r) => r.cause)).toContain(k);
+    for (const k of ["tyre_pressure_low", "tyre_internal_fault", "brake_caliper_sticking"])
+      expect(ranked.map((r) => r.cause)).toContain(k);
   });
 
   it("drinks fuel: tyres, dragging brake, thermostat, lambda and air leak, with a two-sided fuel-trim rule", () => {
     const linked = linksOf("high_fuel_consumption").map((l) => l.cause);
-    for (const k of ["tyre_pressure_low", "brake_caliper_sticking", "thermostat_stuck_open", "lambda_sensor_slow", "intake_air_leak"]) expect(linked).toContain(k);
+    for (const k of [
+      "tyre_pressure_low",
+      "brake_caliper_sticking",
+      "thermostat_stuck_open",
+      "lambda_sensor_slow",
+      "intake_air_leak",
+    ])
+      expect(linked).toContain(k);
     const trim = checkByKey.get("long_term_fuel_trim")!.result as { rule: string; unit: string };
     expect(trim.unit).toBe("");
     expect(evaluate(trim.rule, 4)).toBe(true);
@@ -717,7 +885,14 @@ describe("demo journeys", () => {
 
   it("rear windows won't go down: lock-out switch, fuse, master switch, motor/regulator and door loom", () => {
     const linked = linksOf("rear_windows_dead").map((l) => l.cause);
-    for (const k of ["window_lock_on", "window_fuse_blown", "window_master_switch", "window_regulator_motor", "door_loom_broken"]) expect(linked).toContain(k);
+    for (const k of [
+      "window_lock_on",
+      "window_fuse_blown",
+      "window_master_switch",
+      "window_regulator_motor",
+      "door_loom_broken",
+    ])
+      expect(linked).toContain(k);
     const lock = checkByKey.get("window_lock_switch")!;
     expect(lock.minutes).toBeLessThanOrEqual(Math.min(...kb.checks.map((c) => c.minutes)));
     expect(causeByKey.get("window_lock_on")!.priority).toBe("sound");
@@ -726,15 +901,18 @@ describe("demo journeys", () => {
   it("P0420 stored: the catalyst leads, a broken-up catalyst, the rear sensor and a leak compete, and the checks tell them apart", () => {
     const ranked = topBy("dtc_p0420");
     expect(ranked[0].cause).toBe("catalyst_inefficient");
-    for (const k of ["catalyst_broken_up", "downstream_o2_fault", "exhaust_joint_leak"]) expect(ranked.map((r) => r.cause)).toContain(k);
+    for (const k of ["catalyst_broken_up", "downstream_o2_fault", "exhaust_joint_leak"])
+      expect(ranked.map((r) => r.cause)).toContain(k);
     expect(checksFor("catalyst_inefficient")).toContain("catalyst_sensor_compare");
-    for (const k of ["exhaust_back_pressure", "box_rattle_tap"]) expect(checksFor("catalyst_broken_up")).toContain(k);
+    for (const k of ["exhaust_back_pressure", "box_rattle_tap"])
+      expect(checksFor("catalyst_broken_up")).toContain(k);
     expect(checksFor("downstream_o2_fault")).toContain("downstream_o2_check");
   });
 
   it("rear door won't open from inside: the child lock is checked first and nothing is broken", () => {
     const linked = linksOf("door_wont_open_inside").map((l) => l.cause);
-    for (const k of ["child_lock_on", "inner_door_handle_cable", "door_latch_seized"]) expect(linked).toContain(k);
+    for (const k of ["child_lock_on", "inner_door_handle_cable", "door_latch_seized"])
+      expect(linked).toContain(k);
     const check = checkByKey.get("child_lock_check")!;
     expect(check.minutes).toBeLessThanOrEqual(Math.min(...kb.checks.map((c) => c.minutes)));
     expect(check.skill).toBe("apprentice");
@@ -744,7 +922,8 @@ describe("demo journeys", () => {
   it("engine lamp and a lean code: the fuel-trim read bears on every cause of P0171", () => {
     const lean = linksOf("dtc_p0171").map((l) => l.cause);
     const trim = new Set(kb.checkLinks.filter((l) => l.check === "long_term_fuel_trim").map((l) => l.cause));
-    for (const k of lean.filter((k) => !["brake_servo_vacuum", "manifold_leak"].includes(k))) expect(trim.has(k), k).toBe(true);
+    for (const k of lean.filter((k) => !["brake_servo_vacuum", "manifold_leak"].includes(k)))
+      expect(trim.has(k), k).toBe(true);
   });
 
   it("published and common-practice limits are where the docs say", () => {

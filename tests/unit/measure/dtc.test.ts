@@ -6,7 +6,13 @@ import { parseDtc } from "~/measure";
 
 describe("DTC", () => {
   it("systems and scope", () => {
-    expect(parseDtc("P0301")).toEqual({ valid: true, code: "P0301", system: "powertrain", scope: "generic", group: "ignition system or misfire" });
+    expect(parseDtc("P0301")).toEqual({
+      valid: true,
+      code: "P0301",
+      system: "powertrain",
+      scope: "generic",
+      group: "ignition system or misfire",
+    });
     expect(parseDtc("C1234")).toMatchObject({ valid: true, system: "chassis", scope: "manufacturer" });
     expect(parseDtc("B0001")).toMatchObject({ valid: true, system: "body", scope: "generic" });
     expect(parseDtc("U0100")).toMatchObject({ valid: true, system: "network", scope: "generic" });

@@ -1,7 +1,13 @@
 // Fuel consumption (NIST SP 811 §B.5: L/100 km = 235.215 / mpg(US); UK from the two gallon
 // definitions: 100 × 4.54609 / 1.609344 = 282.481) and the metric/imperial formatter.
 import { describe, expect, it } from "vitest";
-import { convertFuelConsumption, formatQuantity, L100KM_TIMES_MPG_UK, L100KM_TIMES_MPG_US, MeasureError } from "~/measure";
+import {
+  convertFuelConsumption,
+  formatQuantity,
+  L100KM_TIMES_MPG_UK,
+  L100KM_TIMES_MPG_US,
+  MeasureError,
+} from "~/measure";
 
 describe("fuel consumption", () => {
   it("constants from the unit definitions", () => {
@@ -43,7 +49,10 @@ describe("unit-system formatting", () => {
   });
 
   it("torque: 110 N·m = 110 / 1.3558179483 = 81.13 lbf·ft", () => {
-    expect(formatQuantity("110 N m", "torque", "imperial")).toMatchObject({ text: "81.1 lbf·ft", unit: "lbf·ft" });
+    expect(formatQuantity("110 N m", "torque", "imperial")).toMatchObject({
+      text: "81.1 lbf·ft",
+      unit: "lbf·ft",
+    });
     expect(formatQuantity("81.13 lbf ft", "torque", "metric").text).toBe("110 N·m");
   });
 
@@ -59,7 +68,9 @@ describe("unit-system formatting", () => {
   });
 
   it("wrong kind of quantity is an error", () => {
-    expect(() => formatQuantity("3 kPa", "length", "metric")).toThrow("That value is in kPa; it should be a length, such as 1 mm.");
+    expect(() => formatQuantity("3 kPa", "length", "metric")).toThrow(
+      "That value is in kPa; it should be a length, such as 1 mm.",
+    );
     expect(() => formatQuantity("3", "torque", "metric")).toThrow(/has no unit/);
   });
 });

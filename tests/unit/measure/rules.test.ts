@@ -14,7 +14,11 @@ const codeOf = (f: () => unknown): string => {
 
 describe("unit-aware rules", () => {
   it("disc run-out limit 0.05 mm (a generic value; real limits are per vehicle)", () => {
-    expect(evaluateRule("value <= 0.05 mm", "0.09 mm")).toEqual({ pass: false, result: "fail", reading: "0.09 mm" });
+    expect(evaluateRule("value <= 0.05 mm", "0.09 mm")).toEqual({
+      pass: false,
+      result: "fail",
+      reading: "0.09 mm",
+    });
     expect(evaluateRule("value <= 0.05 mm", "0.03 mm").pass).toBe(true);
   });
 
@@ -25,7 +29,10 @@ describe("unit-aware rules", () => {
   });
 
   it("0.0019 in passes: 0.0019 × 25.4 = 0.04826 mm ≤ 0.05 mm", () => {
-    expect(evaluateRule("value <= 0.05 mm", "0.0019 in")).toMatchObject({ pass: true, reading: "0.04826 mm" });
+    expect(evaluateRule("value <= 0.05 mm", "0.0019 in")).toMatchObject({
+      pass: true,
+      reading: "0.04826 mm",
+    });
   });
 
   it("tyre tread ≥ 1.6 mm (Road Vehicles (Construction and Use) Regulations 1986 reg. 27 — secondary)", () => {
@@ -71,21 +78,30 @@ describe("unit-aware rules", () => {
 
   it("readings as { value, unit } and findings for the reasoning engine", () => {
     expect(evaluateRule("value <= 0.05 mm", { value: 0.0035, unit: "in" }).pass).toBe(false);
-    expect(findingFromReading("runout", "value <= 0.05 mm", "0.09 mm")).toEqual({ checkId: "runout", result: "fail" });
+    expect(findingFromReading("runout", "value <= 0.05 mm", "0.09 mm")).toEqual({
+      checkId: "runout",
+      result: "fail",
+    });
   });
 });
 
 describe("clear errors, never a silent pass", () => {
   it("unit of the wrong kind", () => {
-    expect(() => evaluateRule("value <= 0.05 mm", "30 kPa")).toThrow("That reading is in kPa; this check needs a length, such as 0.05 mm.");
-    expect(() => evaluateRule("value >= 220 kPa", "2 mm")).toThrow("That reading is in mm; this check needs a pressure, such as 220 kPa.");
+    expect(() => evaluateRule("value <= 0.05 mm", "30 kPa")).toThrow(
+      "That reading is in kPa; this check needs a length, such as 0.05 mm.",
+    );
+    expect(() => evaluateRule("value >= 220 kPa", "2 mm")).toThrow(
+      "That reading is in mm; this check needs a pressure, such as 220 kPa.",
+    );
     expect(() => evaluateRule("value <= 40 N m", "40 kg")).toThrow(/needs a torque/);
     expect(codeOf(() => evaluateRule("value <= 0.05 mm", "30 kPa"))).toBe("UNIT_MISMATCH");
     expect(codeOf(() => evaluateRule("value * 2 <= 5 mm", "2 kPa"))).toBe("UNIT_MISMATCH");
   });
 
   it("missing or unexpected unit", () => {
-    expect(() => evaluateRule("value <= 0.05 mm", "0.05")).toThrow("That reading has no unit; this check needs a length, such as 0.05 mm.");
+    expect(() => evaluateRule("value <= 0.05 mm", "0.05")).toThrow(
+      "That reading has no unit; this check needs a length, such as 0.05 mm.",
+    );
     expect(codeOf(() => evaluateRule("value <= 0.05 mm", "0.05"))).toBe("MISSING_UNIT");
     expect(codeOf(() => evaluateRule("value < 3", "2 mm"))).toBe("UNEXPECTED_UNIT");
   });

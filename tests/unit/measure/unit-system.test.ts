@@ -2,7 +2,15 @@
 // 1 in = 25.4 mm exactly (NIST SP 811 §B.6); 1 UK pint = 0.56826125 L (Weights and Measures Act
 // 1985, Schedule 1, via the UK gallon of 4.54609 L); 1 psi = 6.894757 kPa (NIST SP 811 §B.8).
 import { describe, expect, it } from "vitest";
-import { describeRule, evaluateRule, formatMileage, MeasureError, parseDecimal, parseMileage, readReading } from "~/measure";
+import {
+  describeRule,
+  evaluateRule,
+  formatMileage,
+  MeasureError,
+  parseDecimal,
+  parseMileage,
+  readReading,
+} from "~/measure";
 
 const message = (f: () => unknown) => {
   try {
@@ -48,18 +56,24 @@ describe("mileage in the workshop's units", () => {
 
 describe("readings as technicians write them", () => {
   it("takes a percentage for a ratio check (plain-number rule), written with % or in words", () => {
-    for (const r of ["65 %", "65%", "65 percent", "65 per cent"]) expect(evaluateRule("value >= 70", r).result, r).toBe("fail");
+    for (const r of ["65 %", "65%", "65 percent", "65 per cent"])
+      expect(evaluateRule("value >= 70", r).result, r).toBe("fail");
     expect(evaluateRule("value >= 70", "72 %").result).toBe("pass");
     expect(readReading("65 %").percent).toBe(true);
   });
 
   it("refuses a percentage where a length is needed, saying what is needed", () => {
-    expect(message(() => evaluateRule("value >= 1.6 mm", "65 %"))).toBe("That reading is a percentage; this check needs a length, such as 1.6 mm.");
+    expect(message(() => evaluateRule("value >= 1.6 mm", "65 %"))).toBe(
+      "That reading is a percentage; this check needs a length, such as 1.6 mm.",
+    );
   });
 
   it("reads fractions of an inch as tread gauges show them: 2/32 in = 1.5875 mm, below 1.6 mm", () => {
     // Road Vehicles (Construction and Use) Regulations 1986 reg. 27: 1.6 mm minimum (secondary source).
-    expect(evaluateRule("value >= 1.6 mm", "2/32 in")).toMatchObject({ result: "fail", reading: "1.5875 mm" });
+    expect(evaluateRule("value >= 1.6 mm", "2/32 in")).toMatchObject({
+      result: "fail",
+      reading: "1.5875 mm",
+    });
     expect(evaluateRule("value >= 1.6 mm", '3/32"')).toMatchObject({ result: "pass", reading: "2.38125 mm" });
     expect(evaluateRule("value >= 1.6 mm", "1 1/2 in").result).toBe("pass");
     expect(message(() => evaluateRule("value >= 1.6 mm", "2/0 in"))).toMatch(/divides by zero/);
@@ -70,7 +84,9 @@ describe("limits in words, in the workshop's units", () => {
   it("metric shows the rule's own figure", () => {
     expect(describeRule("value <= 0.05 mm", "metric")).toBe("at most 0.05 mm");
     expect(describeRule("1.6 mm <= value", "metric")).toBe("at least 1.6 mm");
-    expect(describeRule("value >= 200 kPa and value <= 260 kPa", "metric")).toBe("at least 200 kPa and at most 260 kPa");
+    expect(describeRule("value >= 200 kPa and value <= 260 kPa", "metric")).toBe(
+      "at least 200 kPa and at most 260 kPa",
+    );
     expect(describeRule("value <= 10", "metric")).toBe("at most 10");
   });
 

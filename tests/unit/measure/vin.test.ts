@@ -33,7 +33,10 @@ describe("VIN", () => {
     expect(validateVin("WVWZZZ1J0XW000001", { requireCheckDigit: true }).valid).toBe(true);
     // without the option the check digit is reported but not required (mandatory in North America only)
     expect(validateVin("WVWZZZ1JZXW000001")).toMatchObject({ valid: true, checkDigitMatches: false });
-    expect(validateVin("WVWZZZ1JZXW000001", { requireCheckDigit: true })).toMatchObject({ valid: false, code: "VIN_CHECK_DIGIT" });
+    expect(validateVin("WVWZZZ1JZXW000001", { requireCheckDigit: true })).toMatchObject({
+      valid: false,
+      code: "VIN_CHECK_DIGIT",
+    });
   });
 
   it("one mistyped character is caught by the check digit when required", () => {
@@ -48,8 +51,16 @@ describe("VIN", () => {
 
   it("refuses wrong length and letters a VIN never uses", () => {
     expect(validateVin("1M8GDM9AXKP04278")).toMatchObject({ valid: false, code: "VIN_LENGTH" });
-    expect(validateVin("1M8GDM9AXKP04278O")).toMatchObject({ valid: false, code: "VIN_CHARACTER", message: expect.stringMatching(/probably 0/) });
-    expect(validateVin("IM8GDM9AXKP042788")).toMatchObject({ valid: false, code: "VIN_CHARACTER", message: expect.stringMatching(/probably 1/) });
+    expect(validateVin("1M8GDM9AXKP04278O")).toMatchObject({
+      valid: false,
+      code: "VIN_CHARACTER",
+      message: expect.stringMatching(/probably 0/),
+    });
+    expect(validateVin("IM8GDM9AXKP042788")).toMatchObject({
+      valid: false,
+      code: "VIN_CHARACTER",
+      message: expect.stringMatching(/probably 1/),
+    });
     expect(validateVin("1M8GDM9AXKP04278Q")).toMatchObject({ valid: false, code: "VIN_CHARACTER" });
     expect(validateVin("1M8GDM9AXKP04278*")).toMatchObject({ valid: false, code: "VIN_CHARACTER" });
   });

@@ -19,7 +19,9 @@ describe("getIndex", () => {
   it("drops the old version of the same workshop, keeps other workshops", () => {
     getIndex(quickFindKey("ws-1", 3), () => kbEntries);
     getIndex(quickFindKey("ws-2", 1), () => kbEntries);
-    const edited = kbEntries.map((e) => (e.id === "vibration_braking" ? { ...e, keywords: [...e.keywords, "tramp"] } : e));
+    const edited = kbEntries.map((e) =>
+      e.id === "vibration_braking" ? { ...e, keywords: [...e.keywords, "tramp"] } : e,
+    );
     const next = getIndex(quickFindKey("ws-1", 4), () => edited);
     expect(cachedKeys()).toEqual(["kb:ws-2#1", "kb:ws-1#4"]);
     expect(search(next, "tramp")[0].items[0].entry.id).toBe("vibration_braking");

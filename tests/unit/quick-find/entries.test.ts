@@ -30,13 +30,27 @@ describe("entries from the knowledge base", () => {
 
 describe("vehicle and case entries", () => {
   it("lets a vehicle be found by registration, VIN and owner", () => {
-    const e = vehicleEntry({ id: "v1", registration: "DEMO 101", vin: "9RL0R1BR4N4100231", make: "Orlan", model: "Brisk", year: 2019, ownerName: "Harriet Pennock" });
+    const e = vehicleEntry({
+      id: "v1",
+      registration: "DEMO 101",
+      vin: "9RL0R1BR4N4100231",
+      make: "Orlan",
+      model: "Brisk",
+      year: 2019,
+      ownerName: "Harriet Pennock",
+    });
     expect(e.title).toBe("DEMO 101 · Orlan Brisk 2019");
     expect(e.keywords).toEqual(["DEMO 101", "9RL0R1BR4N4100231", "Harriet Pennock"]);
   });
 
   it("titles a case with its number and vehicle, and keeps the complaint as subtitle", () => {
-    const e = caseEntry({ id: "c1", number: 1041, registration: "DEMO 101", vehicle: "Orlan Brisk", complaint: "Shakes when I brake." });
+    const e = caseEntry({
+      id: "c1",
+      number: 1041,
+      registration: "DEMO 101",
+      vehicle: "Orlan Brisk",
+      complaint: "Shakes when I brake.",
+    });
     expect(e.title).toBe("#1041 · DEMO 101 · Orlan Brisk");
     expect(e.subtitle).toBe("Shakes when I brake.");
     expect(e.keywords).toContain("1041");

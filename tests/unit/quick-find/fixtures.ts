@@ -21,7 +21,13 @@ export const fleetEntries: Entry[] = [
   ),
   ...DEMO_CASES.map((c) => {
     const v = DEMO_VEHICLES.find((x) => x.key === c.vehicle);
-    return caseEntry({ id: c.key, number: c.number, registration: v?.registration, vehicle: v ? `${v.make} ${v.model}` : undefined, complaint: c.complaint });
+    return caseEntry({
+      id: c.key,
+      number: c.number,
+      registration: v?.registration,
+      vehicle: v ? `${v.make} ${v.model}` : undefined,
+      complaint: c.complaint,
+    });
   }),
 ];
 

@@ -18,7 +18,8 @@ const options = () => screen.getAllByRole("option");
 const selected = () => options().find((o) => o.getAttribute("aria-selected") === "true");
 
 function setup(extra: Partial<React.ComponentProps<typeof QuickFind>> = {}) {
-  const onPick = vi.fn<(entry: Entry, pick: { present?: boolean; code?: string; conditions?: string[] }) => void>();
+  const onPick =
+    vi.fn<(entry: Entry, pick: { present?: boolean; code?: string; conditions?: string[] }) => void>();
   render(<QuickFind entries={allEntries} onPick={onPick} {...extra} />);
   return onPick;
 }
@@ -90,7 +91,10 @@ describe("Quick find palette", () => {
     type("squeal brake");
     fireEvent.click(within(options()[0]).getByText("Absent"));
     expect(onPick).toHaveBeenCalledTimes(1);
-    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ id: "squeal_braking" }), { present: false, conditions: ["braking"] }]);
+    expect(onPick.mock.calls[0]).toEqual([
+      expect.objectContaining({ id: "squeal_braking" }),
+      { present: false, conditions: ["braking"] },
+    ]);
   });
 
   it("offers a negated complaint as absent, and Enter records it so", () => {
@@ -100,7 +104,10 @@ describe("Quick find palette", () => {
     expect(options()[0].textContent).toContain("Grinding when braking");
     expect(options()[0].textContent).toContain("Enter adds it as absent");
     fireEvent.keyDown(input(), { key: "Enter" });
-    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ id: "grinding_braking" }), { present: false }]);
+    expect(onPick.mock.calls[0]).toEqual([
+      expect.objectContaining({ id: "grinding_braking" }),
+      { present: false },
+    ]);
     expect(screen.getByRole("status").textContent).toMatch(/as absent/);
   });
 
@@ -110,7 +117,10 @@ describe("Quick find palette", () => {
     type("P0325"); // a valid generic code (SAE J2012 format) with no symptom of its own here
     expect(options()[0].textContent).toContain("Trouble code stored");
     fireEvent.keyDown(input(), { key: "Enter" });
-    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ id: "trouble_code_stored" }), { present: true, code: "P0325" }]);
+    expect(onPick.mock.calls[0]).toEqual([
+      expect.objectContaining({ id: "trouble_code_stored" }),
+      { present: true, code: "P0325" },
+    ]);
   });
 
   it("says “no good match” for words nothing fits, and Enter records nothing", () => {
@@ -133,7 +143,10 @@ describe("Quick find palette", () => {
     type("DEMO 101");
     expect(screen.getByText("Vehicles")).toBeTruthy();
     fireEvent.keyDown(input(), { key: "Enter" });
-    expect(onPick.mock.calls[0]).toEqual([expect.objectContaining({ kind: "vehicle", id: "orlan-brisk" }), {}]);
+    expect(onPick.mock.calls[0]).toEqual([
+      expect.objectContaining({ kind: "vehicle", id: "orlan-brisk" }),
+      {},
+    ]);
     expect(screen.queryByRole("dialog")).toBeNull();
   });
 

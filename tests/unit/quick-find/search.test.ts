@@ -7,7 +7,8 @@ import { allEntries, caseByNumber, kbEntries, vehicleByReg } from "./fixtures";
 
 const index = buildIndex(allEntries);
 const first = (groups: ResultGroup[]) => groups[0]?.items[0]?.entry;
-const ids = (groups: ResultGroup[], kind: string) => groups.find((g) => g.kind === kind)?.items.map((i) => i.entry.id) ?? [];
+const ids = (groups: ResultGroup[], kind: string) =>
+  groups.find((g) => g.kind === kind)?.items.map((i) => i.entry.id) ?? [];
 const symptom = (key: string) => starterKnowledgeBase.symptoms.find((s) => s.key === key);
 
 describe("complaints in the trade's and the owner's words", () => {
@@ -18,9 +19,13 @@ describe("complaints in the trade's and the owner's words", () => {
     expect(first(groups)?.id).toBe("vibration_braking");
   });
 
-  it.each(["shudder when braking", "shake when I brake", "steering wheel wobbles under braking", "vibration braking"])(
-    "finds the braking-vibration symptom first for “%s” too",
-    (q) => expect(first(search(index, q))?.id).toBe("vibration_braking"),
+  it.each([
+    "shudder when braking",
+    "shake when I brake",
+    "steering wheel wobbles under braking",
+    "vibration braking",
+  ])("finds the braking-vibration symptom first for “%s” too", (q) =>
+    expect(first(search(index, q))?.id).toBe("vibration_braking"),
   );
 
   it("finds the front clunk over bumps for “clunk bumps”, ahead of the underside rattle", () => {
@@ -35,9 +40,12 @@ describe("complaints in the trade's and the owner's words", () => {
     expect(list.indexOf("pull_braking")).toBeGreaterThan(0);
   });
 
-  it.each(["drinks fuel", "poor economy", "mpg", "high consumption", "thirsty"])("finds high fuel consumption first for “%s”", (q) => {
-    expect(first(search(index, q))?.id).toBe("high_fuel_consumption");
-  });
+  it.each(["drinks fuel", "poor economy", "mpg", "high consumption", "thirsty"])(
+    "finds high fuel consumption first for “%s”",
+    (q) => {
+      expect(first(search(index, q))?.id).toBe("high_fuel_consumption");
+    },
+  );
 
   it("finds the dead-window symptoms for “windows dead” and “windows won't go down”", () => {
     for (const q of ["windows dead", "windows won't go down"]) {
@@ -54,7 +62,9 @@ describe("complaints in the trade's and the owner's words", () => {
 
 describe("conditions are part of a symptom's meaning", () => {
   it("matches “under braking” from brake, braking and “when I brake”", () => {
-    const braking = starterKnowledgeBase.symptoms.filter((s) => s.conditions.includes("under braking")).map((s) => s.key);
+    const braking = starterKnowledgeBase.symptoms
+      .filter((s) => s.conditions.includes("under braking"))
+      .map((s) => s.key);
     expect(braking.length).toBeGreaterThan(3);
     for (const q of ["brake", "braking", "when I brake"]) {
       const found = ids(search(index, q, { kinds: ["symptom"], limit: 50 }), "symptom");
@@ -107,7 +117,8 @@ describe("vehicles and cases", () => {
 describe("typing, typos and the empty box", () => {
   it("keeps the braking vibration first from “judder br” to the end of the word", () => {
     const q = "judder braking";
-    for (let n = "judder br".length; n <= q.length; n++) expect(first(search(index, q.slice(0, n)))?.id, q.slice(0, n)).toBe("vibration_braking");
+    for (let n = "judder br".length; n <= q.length; n++)
+      expect(first(search(index, q.slice(0, n)))?.id, q.slice(0, n)).toBe("vibration_braking");
   });
 
   it("tolerates a missing letter and a swapped pair", () => {
@@ -141,7 +152,9 @@ describe("grouping", () => {
     const groups = search(index, "brake fluid");
     const kinds = groups.map((g) => g.kind);
     expect(kinds.length).toBeGreaterThanOrEqual(3);
-    expect([...kinds].sort((a, b) => ENTRY_KINDS.indexOf(a as never) - ENTRY_KINDS.indexOf(b as never))).toEqual(kinds);
+    expect(
+      [...kinds].sort((a, b) => ENTRY_KINDS.indexOf(a as never) - ENTRY_KINDS.indexOf(b as never)),
+    ).toEqual(kinds);
     for (const g of groups) {
       expect(g.items.every((i) => i.entry.kind === g.kind)).toBe(true);
       const scores = g.items.map((i) => i.score);
@@ -166,8 +179,13 @@ describe("grouping", () => {
 
 describe("a number beside other words is a whole plate part", () => {
   // Invented plates and case numbers, as in the demo.
-  const cases = [1019, 1012, 1041].map((number, i) => caseEntry({ id: `case-${number}`, number, registration: ["DEMO 104", "DEMO 102", "DEMO 101"][i] }));
-  const fleet = buildIndex([...cases, vehicleEntry({ id: "v101", registration: "DEMO 101", make: "Orlan", model: "Brisk" })]);
+  const cases = [1019, 1012, 1041].map((number, i) =>
+    caseEntry({ id: `case-${number}`, number, registration: ["DEMO 104", "DEMO 102", "DEMO 101"][i] }),
+  );
+  const fleet = buildIndex([
+    ...cases,
+    vehicleEntry({ id: "v101", registration: "DEMO 101", make: "Orlan", model: "Brisk" }),
+  ]);
 
   it("“DEMO 101” finds that plate and its case, not cases #1019 and #1012", () => {
     const found = search(fleet, "DEMO 101").flatMap((g) => g.items.map((i) => i.entry.id));

@@ -12,7 +12,14 @@ describe("normalising", () => {
   });
 
   it("stems plurals of words but never touches codes", () => {
-    expect(["bumps", "batteries", "switches", "brakes", "glass", "bus"].map(stem)).toEqual(["bump", "battery", "switch", "brake", "glass", "bus"]);
+    expect(["bumps", "batteries", "switches", "brakes", "glass", "bus"].map(stem)).toEqual([
+      "bump",
+      "battery",
+      "switch",
+      "brake",
+      "glass",
+      "bus",
+    ]);
     expect(stem("9rl0r1br4n41002s")).toBe("9rl0r1br4n41002s");
   });
 });
@@ -66,7 +73,11 @@ describe("queries", () => {
 
   it("drops stopwords and spots a case number", () => {
     // "when I brake" is an owner phrase: it becomes the braking concept as one token
-    expect(parseQuery("the wheel shakes when I brake").tokens.map((t) => t.concept ?? t.word)).toEqual(["wheel", "_vibration", "_brake"]);
+    expect(parseQuery("the wheel shakes when I brake").tokens.map((t) => t.concept ?? t.word)).toEqual([
+      "wheel",
+      "_vibration",
+      "_brake",
+    ]);
     expect(parseQuery("#1041").caseNumber).toBe(true);
     expect(parseQuery("1041").caseNumber).toBe(false);
   });
@@ -81,7 +92,10 @@ describe("typo distance", () => {
   });
 
   it("finds near words in a vocabulary, and none for short words", () => {
-    const byLength = new Map<number, string[]>([[8, ["grinding", "steering"]], [5, ["clunk", "brake"]]]);
+    const byLength = new Map<number, string[]>([
+      [8, ["grinding", "steering"]],
+      [5, ["clunk", "brake"]],
+    ]);
     expect(nearWords("grindng", byLength, false)).toEqual(["grinding"]);
     expect(nearWords("brk", byLength, false)).toEqual([]);
     expect(nearWords("stee", byLength, true)).toEqual(["steering"]);

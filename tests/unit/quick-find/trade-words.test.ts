@@ -7,13 +7,16 @@ import { analyse } from "~/quick-find/analyse";
 import { kbEntries } from "./fixtures";
 
 const index = buildIndex(kbEntries);
-const top = (q: string, kinds: ("symptom" | "check")[] = ["symptom"]): ScoredEntry | undefined => search(index, q, { kinds })[0]?.items[0];
+const top = (q: string, kinds: ("symptom" | "check")[] = ["symptom"]): ScoredEntry | undefined =>
+  search(index, q, { kinds })[0]?.items[0];
 const concept = (w: string) => analyse(w)[0]?.concept;
 
 describe("stemming (Porter 1980, through the stemmer package)", () => {
   it("gives the textbook stems", () => {
     // Porter, "An algorithm for suffix stripping", Program 14(3), 1980: worked examples of steps 1–5.
-    expect(["caresses", "ponies", "motoring", "conditional", "relational", "hopefully"].map(porterStem)).toEqual(["caress", "poni", "motor", "condit", "relat", "hopefulli"]);
+    expect(
+      ["caresses", "ponies", "motoring", "conditional", "relational", "hopefully"].map(porterStem),
+    ).toEqual(["caress", "poni", "motor", "condit", "relat", "hopefulli"]);
     expect(porterStem("jerking")).toBe(porterStem("jerks"));
     expect(porterStem("braking")).toBe("brake");
   });
@@ -65,11 +68,17 @@ describe("negation and “only”", () => {
   });
 
   it("lands an “only” complaint said positively on the “only” symptom, present", () => {
-    expect(top("back windows only work from the driver's switches")).toMatchObject({ entry: { id: "rear_windows_driver_only" }, present: true });
+    expect(top("back windows only work from the driver's switches")).toMatchObject({
+      entry: { id: "rear_windows_driver_only" },
+      present: true,
+    });
   });
 
   it("keeps a negative symptom present when the words are negative too", () => {
-    expect(top("back door won't open from the inside")).toMatchObject({ entry: { id: "door_wont_open_inside" }, present: true });
+    expect(top("back door won't open from the inside")).toMatchObject({
+      entry: { id: "door_wont_open_inside" },
+      present: true,
+    });
     // a phrase of the synonym table is a complaint, not a negation
     expect(parseQuery("won't start").negated).toBe(false);
   });
@@ -82,12 +91,14 @@ describe("negation and “only”", () => {
 
 describe("trouble codes typed as codes (SAE J2012 format)", () => {
   it("lands a listed code on its own symptom, typed any usual way", () => {
-    for (const q of ["P0171", "p0171", "P 0171", "code P0171 stored"]) expect(top(q)).toMatchObject({ entry: { id: "dtc_p0171" }, code: "P0171" });
+    for (const q of ["P0171", "p0171", "P 0171", "code P0171 stored"])
+      expect(top(q)).toMatchObject({ entry: { id: "dtc_p0171" }, code: "P0171" });
     expect(top("P0420")?.entry.id).toBe("dtc_p0420");
   });
 
   it("lands any other valid code on the generic symptom, with the code kept", () => {
-    for (const code of ["P0325", "C0035", "B1000", "U0100", "P2015"]) expect(top(code)).toMatchObject({ entry: { id: "trouble_code_stored" }, code, weak: false });
+    for (const code of ["P0325", "C0035", "B1000", "U0100", "P2015"])
+      expect(top(code)).toMatchObject({ entry: { id: "trouble_code_stored" }, code, weak: false });
   });
 
   it("treats an invalid code as words (second character 4 is not in the standard)", () => {
@@ -108,7 +119,10 @@ describe("checks by the words of their steps", () => {
 
 describe("conditions read off a complaint", () => {
   it("names braking and high speed in “judder only when braking from the motorway”", () => {
-    expect(parseQuery("judder only when braking from the motorway").conditions).toEqual(["braking", "high_speed"]);
+    expect(parseQuery("judder only when braking from the motorway").conditions).toEqual([
+      "braking",
+      "high_speed",
+    ]);
     expect(parseQuery("ticks when cold").conditions).toEqual(["cold"]);
     expect(parseQuery("clunk over speed bumps turning").conditions).toEqual(["over_bumps", "turning"]);
   });

@@ -7,7 +7,10 @@ import { CONDITIONS, parseEvidence, rankCauses, ReasoningError, speedBand, type 
 
 // A and B equally likely; s (leak .05) shows with both at .8, A only under braking (its link says so).
 const model: Model = {
-  causes: [{ id: "A", prior: 1 }, { id: "B", prior: 1 }],
+  causes: [
+    { id: "A", prior: 1 },
+    { id: "B", prior: 1 },
+  ],
   symptoms: [{ id: "s", leak: 0.05 }],
   links: [
     { symptomId: "s", causeId: "A", p: 0.8, when: ["braking"] },
@@ -15,8 +18,12 @@ const model: Model = {
   ],
   checks: [],
 };
-const seen = (present: boolean, conditions?: ("braking" | "high_speed" | "cold")[]) => ({ observations: [{ symptomId: "s", present, ...(conditions ? { conditions } : {}) }], findings: [] });
-const pA = (e: ReturnType<typeof seen>, o = { unlistedPrior: 0 }) => rankCauses(model, e, o).causes.find((c) => c.id === "A")!.probability;
+const seen = (present: boolean, conditions?: ("braking" | "high_speed" | "cold")[]) => ({
+  observations: [{ symptomId: "s", present, ...(conditions ? { conditions } : {}) }],
+  findings: [],
+});
+const pA = (e: ReturnType<typeof seen>, o = { unlistedPrior: 0 }) =>
+  rankCauses(model, e, o).causes.find((c) => c.id === "A")!.probability;
 
 describe("conditions", () => {
   it("without conditions the two are tied", () => {
@@ -47,14 +54,27 @@ describe("conditions", () => {
   });
 
   it("refuse a condition that is not on the list, and parse the list as zod input", () => {
-    const bad = { observations: [{ symptomId: "s", present: true, conditions: ["on Tuesdays"] }], findings: [] };
+    const bad = {
+      observations: [{ symptomId: "s", present: true, conditions: ["on Tuesdays"] }],
+      findings: [],
+    };
     expect(() => rankCauses(model, bad as never)).toThrow(ReasoningError);
     expect(() => parseEvidence(bad)).toThrow(ReasoningError);
-    expect(parseEvidence(seen(true, ["braking", "cold"])).observations[0].conditions).toEqual(["braking", "cold"]);
+    expect(parseEvidence(seen(true, ["braking", "cold"])).observations[0].conditions).toEqual([
+      "braking",
+      "cold",
+    ]);
     expect(CONDITIONS).toContain("over_bumps");
   });
 
   it("band road speeds: below 30 km/h low, to 80 mid, above high (rule of thumb, common practice)", () => {
-    expect([10, 29.9, 30, 79, 80, 130].map(speedBand)).toEqual(["low_speed", "low_speed", "mid_speed", "mid_speed", "high_speed", "high_speed"]);
+    expect([10, 29.9, 30, 79, 80, 130].map(speedBand)).toEqual([
+      "low_speed",
+      "low_speed",
+      "mid_speed",
+      "mid_speed",
+      "high_speed",
+      "high_speed",
+    ]);
   });
 });

@@ -27,20 +27,38 @@ describe("contributions", () => {
   it("sign: a present symptom with high P(s|c) pushes c up; its absence pushes c down", () => {
     const up = rankCauses(model, sPresent).causes.find((c) => c.id === "A")!;
     expect(up.contributions["symptom:s"]).toBeGreaterThan(0);
-    const down = rankCauses(model, { observations: [{ symptomId: "s", present: false }], findings: [] }).causes.find((c) => c.id === "A")!;
+    const down = rankCauses(model, {
+      observations: [{ symptomId: "s", present: false }],
+      findings: [],
+    }).causes.find((c) => c.id === "A")!;
     expect(down.contributions["symptom:s"]).toBeLessThan(0);
     // A failed check that bears on A pushes A up; a pass pushes it down.
-    const failA = rankCauses(model, { observations: [], findings: [{ checkId: "k", result: "fail" }] }).causes.find((c) => c.id === "A")!;
+    const failA = rankCauses(model, {
+      observations: [],
+      findings: [{ checkId: "k", result: "fail" }],
+    }).causes.find((c) => c.id === "A")!;
     expect(failA.contributions["check:k"]).toBeGreaterThan(0);
-    const passA = rankCauses(model, { observations: [], findings: [{ checkId: "k", result: "pass" }] }).causes.find((c) => c.id === "A")!;
+    const passA = rankCauses(model, {
+      observations: [],
+      findings: [{ checkId: "k", result: "pass" }],
+    }).causes.find((c) => c.id === "A")!;
     expect(passA.contributions["check:k"]).toBeLessThan(0);
   });
 
   it("two causes: the contribution is the textbook likelihood ratio (dentist, Russell & Norvig ch. 13)", () => {
     // P(toothache|cavity) = .6, P(toothache|¬cavity) = .1 → log 6; catch .9 / .2 → log 4.5
-    const e: Evidence = { observations: [{ symptomId: "toothache", present: true }, { symptomId: "catch", present: true }], findings: [] };
+    const e: Evidence = {
+      observations: [
+        { symptomId: "toothache", present: true },
+        { symptomId: "catch", present: true },
+      ],
+      findings: [],
+    };
     const cavity = rankCauses(dentist, e, { unlistedPrior: 0 }).causes[0];
-    expect(cavity.contributions).toEqual({ "symptom:toothache": expect.closeTo(Math.log(6), 12), "symptom:catch": expect.closeTo(Math.log(4.5), 12) });
+    expect(cavity.contributions).toEqual({
+      "symptom:toothache": expect.closeTo(Math.log(6), 12),
+      "symptom:catch": expect.closeTo(Math.log(4.5), 12),
+    });
     // logit(.2) + log 6 + log 4.5 = log(.25 × 27) = log 6.75 = logit(.108 / .124)
     expect(logit(0.2) + Math.log(6) + Math.log(4.5)).toBeCloseTo(logit(cavity.probability), 12);
   });
@@ -64,7 +82,8 @@ describe("contributions", () => {
     const a = r.causes.find((c) => c.id === "A")!;
     expect(a.probability).toBe(0);
     expect(a.contributions["symptom:s"]).toBe(-Infinity);
-    for (const c of r.causes) for (const w of Object.values(c.contributions)) expect(Number.isNaN(w)).toBe(false);
+    for (const c of r.causes)
+      for (const w of Object.values(c.contributions)) expect(Number.isNaN(w)).toBe(false);
   });
 
   it("are included when the ranking is serialised", () => {

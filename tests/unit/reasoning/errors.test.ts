@@ -47,7 +47,8 @@ const change = (f: (m: Model) => void): Model => {
 };
 
 describe("model errors", () => {
-  it("EMPTY_MODEL", () => expect(rank({ causes: [], symptoms: [], links: [], checks: [] })).toBe("EMPTY_MODEL"));
+  it("EMPTY_MODEL", () =>
+    expect(rank({ causes: [], symptoms: [], links: [], checks: [] })).toBe("EMPTY_MODEL"));
 
   it("DUPLICATE_ID for causes, symptoms and checks", () => {
     expect(rank(change((m) => m.causes.push({ id: "A", prior: 1 })))).toBe("DUPLICATE_ID");
@@ -57,8 +58,12 @@ describe("model errors", () => {
 
   it("UNKNOWN_ID in the tree, links and checks", () => {
     expect(rank(change((m) => (m.causes[1].parentId = "nowhere")))).toBe("UNKNOWN_ID");
-    expect(rank(change((m) => m.links.push({ symptomId: "ghost", causeId: "A", p: 0.5 })))).toBe("UNKNOWN_ID");
-    expect(rank(change((m) => m.links.push({ symptomId: "s", causeId: "ghost", p: 0.5 })))).toBe("UNKNOWN_ID");
+    expect(rank(change((m) => m.links.push({ symptomId: "ghost", causeId: "A", p: 0.5 })))).toBe(
+      "UNKNOWN_ID",
+    );
+    expect(rank(change((m) => m.links.push({ symptomId: "s", causeId: "ghost", p: 0.5 })))).toBe(
+      "UNKNOWN_ID",
+    );
     expect(rank(change((m) => m.checks[0].bears.push({ causeId: "ghost", pFail: 0.5 })))).toBe("UNKNOWN_ID");
   });
 
@@ -86,21 +91,35 @@ describe("model errors", () => {
   it("CYCLE, including a cause that is its own parent", () => {
     expect(rank(change((m) => (m.causes[0].parentId = "A")))).toBe("CYCLE");
     expect(rank(change((m) => m.causes.push({ id: "self", parentId: "self", prior: 1 })))).toBe("CYCLE");
-    const loop = change((m) => m.causes.push({ id: "x", parentId: "y", prior: 1 }, { id: "y", parentId: "z", prior: 1 }, { id: "z", parentId: "x", prior: 1 }));
+    const loop = change((m) =>
+      m.causes.push(
+        { id: "x", parentId: "y", prior: 1 },
+        { id: "y", parentId: "z", prior: 1 },
+        { id: "z", parentId: "x", prior: 1 },
+      ),
+    );
     expect(() => rankCauses(loop, none)).toThrow(/x → y → z → x|y → z → x → y|z → x → y → z/);
   });
 
   it("DUPLICATE_LINK for symptom links and check bearings", () => {
-    expect(rank(change((m) => m.links.push({ symptomId: "s", causeId: "A", p: 0.3 })))).toBe("DUPLICATE_LINK");
+    expect(rank(change((m) => m.links.push({ symptomId: "s", causeId: "A", p: 0.3 })))).toBe(
+      "DUPLICATE_LINK",
+    );
     expect(rank(change((m) => m.checks[0].bears.push({ causeId: "A", pFail: 0.3 })))).toBe("DUPLICATE_LINK");
   });
 
   it("INVALID_INPUT from the schemas and from a bad skill", () => {
     expect(codeOf(() => parseModel({ causes: "none" }))).toBe("INVALID_INPUT");
-    expect(codeOf(() => parseModel({ ...good(), links: [{ symptomId: "s", causeId: "A", p: 3 }] }))).toBe("INVALID_INPUT");
-    expect(codeOf(() => parseEvidence({ observations: [{ symptomId: "s" }], findings: [] }))).toBe("INVALID_INPUT");
+    expect(codeOf(() => parseModel({ ...good(), links: [{ symptomId: "s", causeId: "A", p: 3 }] }))).toBe(
+      "INVALID_INPUT",
+    );
+    expect(codeOf(() => parseEvidence({ observations: [{ symptomId: "s" }], findings: [] }))).toBe(
+      "INVALID_INPUT",
+    );
     expect(parseModel(good())).toEqual(good());
-    expect(rank(change((m) => ((m.checks[0] as { skill: unknown }).skill = "wizard")))).toBe("INVALID_OPTION");
+    expect(rank(change((m) => ((m.checks[0] as { skill: unknown }).skill = "wizard")))).toBe(
+      "INVALID_OPTION",
+    );
     expect(codeOf(() => rankCauses(null as unknown as Model, none))).toBe("INVALID_INPUT");
     expect(rank(good(), null as unknown as Evidence)).toBe("INVALID_INPUT");
   });
@@ -108,8 +127,12 @@ describe("model errors", () => {
 
 describe("evidence and option errors", () => {
   it("UNKNOWN_ID for observations, findings, what-if and orders", () => {
-    expect(rank(good(), { observations: [{ symptomId: "ghost", present: true }], findings: [] })).toBe("UNKNOWN_ID");
-    expect(rank(good(), { observations: [], findings: [{ checkId: "ghost", result: "fail" }] })).toBe("UNKNOWN_ID");
+    expect(rank(good(), { observations: [{ symptomId: "ghost", present: true }], findings: [] })).toBe(
+      "UNKNOWN_ID",
+    );
+    expect(rank(good(), { observations: [], findings: [{ checkId: "ghost", result: "fail" }] })).toBe(
+      "UNKNOWN_ID",
+    );
     expect(codeOf(() => whatIf(good(), none, "ghost"))).toBe("UNKNOWN_ID");
     expect(codeOf(() => orderCost(good(), none, ["ghost"]))).toBe("UNKNOWN_ID");
     expect(codeOf(() => orderCost(good(), none, ["k", "k"]))).toBe("INVALID_INPUT");
@@ -117,8 +140,18 @@ describe("evidence and option errors", () => {
 
   it("CONFLICTING_EVIDENCE", () => {
     const obs = (present: boolean) => ({ symptomId: "s", present, source: "owner" as const });
-    expect(rank(good(), { observations: [obs(true), obs(false)], findings: [] })).toBe("CONFLICTING_EVIDENCE");
-    expect(rank(good(), { observations: [], findings: [{ checkId: "k", result: "fail" }, { checkId: "k", result: "pass" }] })).toBe("CONFLICTING_EVIDENCE");
+    expect(rank(good(), { observations: [obs(true), obs(false)], findings: [] })).toBe(
+      "CONFLICTING_EVIDENCE",
+    );
+    expect(
+      rank(good(), {
+        observations: [],
+        findings: [
+          { checkId: "k", result: "fail" },
+          { checkId: "k", result: "pass" },
+        ],
+      }),
+    ).toBe("CONFLICTING_EVIDENCE");
     // the same report twice is not a conflict, and counts once
     const twice = rankCauses(good(), { observations: [obs(true), obs(true)], findings: [] });
     expect(Object.keys(twice.causes[0].contributions)).toEqual(["symptom:s"]);
@@ -138,7 +171,9 @@ describe("evidence and option errors", () => {
   });
 
   it("ALREADY_RECORDED for what-if on a done check", () => {
-    expect(codeOf(() => whatIf(good(), { observations: [], findings: [{ checkId: "k", result: "pass" }] }, "k"))).toBe("ALREADY_RECORDED");
+    expect(
+      codeOf(() => whatIf(good(), { observations: [], findings: [{ checkId: "k", result: "pass" }] }, "k")),
+    ).toBe("ALREADY_RECORDED");
   });
 
   it("INVALID_OPTION", () => {
@@ -152,8 +187,20 @@ describe("evidence and option errors", () => {
   it("the list of codes is exactly the codes tested above (a new code needs a test here)", () => {
     expect([...REASONING_ERROR_CODES].sort()).toEqual(
       [
-        "EMPTY_MODEL", "INVALID_INPUT", "DUPLICATE_ID", "UNKNOWN_ID", "INVALID_PROBABILITY", "INVALID_PRIOR", "ZERO_PRIOR",
-        "INVALID_COST", "CYCLE", "DUPLICATE_LINK", "CONFLICTING_EVIDENCE", "IMPOSSIBLE_EVIDENCE", "ALREADY_RECORDED", "INVALID_OPTION",
+        "EMPTY_MODEL",
+        "INVALID_INPUT",
+        "DUPLICATE_ID",
+        "UNKNOWN_ID",
+        "INVALID_PROBABILITY",
+        "INVALID_PRIOR",
+        "ZERO_PRIOR",
+        "INVALID_COST",
+        "CYCLE",
+        "DUPLICATE_LINK",
+        "CONFLICTING_EVIDENCE",
+        "IMPOSSIBLE_EVIDENCE",
+        "ALREADY_RECORDED",
+        "INVALID_OPTION",
       ].sort(),
     );
   });
@@ -175,13 +222,22 @@ describe("never NaN", () => {
       ],
     };
     for (const unlistedPrior of [0, 0.05]) {
-      const { ranking, plan } = diagnose(compileModel(m), { observations: [{ symptomId: "s", present: true }], findings: [] }, { unlistedPrior });
-      const all = [...ranking.causes.map((c) => c.probability), ranking.unlisted, ...Object.values(ranking.nodes)];
+      const { ranking, plan } = diagnose(
+        compileModel(m),
+        { observations: [{ symptomId: "s", present: true }], findings: [] },
+        { unlistedPrior },
+      );
+      const all = [
+        ...ranking.causes.map((c) => c.probability),
+        ranking.unlisted,
+        ...Object.values(ranking.nodes),
+      ];
       for (const c of ranking.causes) all.push(...Object.values(c.contributions).filter(Number.isFinite));
       for (const s of plan.steps) all.push(s.pFind, s.ratio, s.cost, s.pReached);
       all.push(plan.expectedCost, plan.cheapestFirstExpectedCost, plan.saving);
       expect(all.some(Number.isNaN)).toBe(false);
-      for (const c of ranking.causes) for (const w of Object.values(c.contributions)) expect(Number.isNaN(w)).toBe(false);
+      for (const c of ranking.causes)
+        for (const w of Object.values(c.contributions)) expect(Number.isNaN(w)).toBe(false);
     }
   });
 });

@@ -14,29 +14,52 @@ describe("graded figures on a link", () => {
   // W "pads worn near the limit" (base 10) and M "worn to the backing plate" (base 2.5):
   // P(W) = .8, P(M) = .2; the pad check, false alarm .03, bears on both with graded figures.
   const pads: Model = {
-    causes: [{ id: "W", prior: 10 }, { id: "M", prior: 2.5 }],
+    causes: [
+      { id: "W", prior: 10 },
+      { id: "M", prior: 2.5 },
+    ],
     symptoms: [],
     links: [],
-    checks: [{
-      id: "pad", cost: 15, falseAlarm: 0.03,
-      bears: [
-        { causeId: "W", pFail: 0.9, graded: { well_within: 0.02, near: 0.08, beyond: 0.75, far_beyond: 0.15 } },
-        { causeId: "M", pFail: 0.98, graded: { well_within: 0.005, near: 0.015, beyond: 0.08, far_beyond: 0.9 } },
-      ],
-    }],
+    checks: [
+      {
+        id: "pad",
+        cost: 15,
+        falseAlarm: 0.03,
+        bears: [
+          {
+            causeId: "W",
+            pFail: 0.9,
+            graded: { well_within: 0.02, near: 0.08, beyond: 0.75, far_beyond: 0.15 },
+          },
+          {
+            causeId: "M",
+            pFail: 0.98,
+            graded: { well_within: 0.005, near: 0.015, beyond: 0.08, far_beyond: 0.9 },
+          },
+        ],
+      },
+    ],
   };
   const u = { unlistedPrior: 0 };
 
   it("ranks the backing plate first for a reading far beyond the limit (0.8 mm)", () => {
     // W .8 × .15 = .12, M .2 × .9 = .18 → P(M) = .18 / .30 = .6
-    const r = rankCauses(pads, { observations: [], findings: [{ checkId: "pad", result: "fail", band: "far_beyond" }] }, u);
+    const r = rankCauses(
+      pads,
+      { observations: [], findings: [{ checkId: "pad", result: "fail", band: "far_beyond" }] },
+      u,
+    );
     expect(r.causes[0].id).toBe("M");
     expect(prob(r, "M")).toBeCloseTo(0.6, 12);
   });
 
   it("ranks worn-near-the-limit first for a reading just beyond (2.4 mm), as pass/fail alone does", () => {
     // beyond: W .8 × .75 = .6, M .2 × .08 = .016 → P(W) = .6 / .616 = .974026
-    const r = rankCauses(pads, { observations: [], findings: [{ checkId: "pad", result: "fail", band: "beyond" }] }, u);
+    const r = rankCauses(
+      pads,
+      { observations: [], findings: [{ checkId: "pad", result: "fail", band: "beyond" }] },
+      u,
+    );
     expect(prob(r, "W")).toBeCloseTo(0.6 / 0.616, 12);
     // plain fail: W .8 × .9 = .72, M .2 × .98 = .196 → P(W) = .72 / .916 = .786026
     const plain = rankCauses(pads, { observations: [], findings: [{ checkId: "pad", result: "fail" }] }, u);
@@ -47,13 +70,20 @@ describe("graded figures on a link", () => {
 describe("default shares where a link has no graded figures", () => {
   // A, B equal, unlisted .2: priors .4, .4, .2; k (false alarm .1) bears on A with P(fail) .8.
   const m: Model = {
-    causes: [{ id: "A", prior: 1 }, { id: "B", prior: 1 }],
+    causes: [
+      { id: "A", prior: 1 },
+      { id: "B", prior: 1 },
+    ],
     symptoms: [],
     links: [],
     checks: [{ id: "k", cost: 10, falseAlarm: 0.1, bears: [{ causeId: "A", pFail: 0.8 }] }],
   };
   const rank = (result: "pass" | "fail", band?: "well_within" | "near" | "beyond" | "far_beyond") =>
-    rankCauses(m, { observations: [], findings: [band ? { checkId: "k", result, band } : { checkId: "k", result }] }, { unlistedPrior: 0.2 });
+    rankCauses(
+      m,
+      { observations: [], findings: [band ? { checkId: "k", result, band } : { checkId: "k", result }] },
+      { unlistedPrior: 0.2 },
+    );
 
   it.each([
     // far: A .8·.5 = .4, B and U .1·.2 = .02 → .16, .008, .004 → .16 / .172
@@ -78,9 +108,24 @@ describe("default shares where a link has no graded figures", () => {
   });
 
   it("refuses a band that contradicts the result, and graded figures that do not add up to 1", () => {
-    const bad = () => rankCauses(m, { observations: [], findings: [{ checkId: "k", result: "pass", band: "far_beyond" }] });
+    const bad = () =>
+      rankCauses(m, { observations: [], findings: [{ checkId: "k", result: "pass", band: "far_beyond" }] });
     expect(bad).toThrow(ReasoningError);
-    const sums: Model = { ...m, checks: [{ ...m.checks[0], bears: [{ causeId: "A", pFail: 0.8, graded: { well_within: 0.1, near: 0.1, beyond: 0.4, far_beyond: 0.5 } }] }] };
+    const sums: Model = {
+      ...m,
+      checks: [
+        {
+          ...m.checks[0],
+          bears: [
+            {
+              causeId: "A",
+              pFail: 0.8,
+              graded: { well_within: 0.1, near: 0.1, beyond: 0.4, far_beyond: 0.5 },
+            },
+          ],
+        },
+      ],
+    };
     try {
       rankCauses(sums, { observations: [], findings: [] });
       expect.unreachable();
@@ -93,10 +138,21 @@ describe("default shares where a link has no graded figures", () => {
 describe("on the starter knowledge base", () => {
   it("a 0.8 mm pad reading ranks 'worn to the backing plate' above 'worn near the limit'", () => {
     // a well-used car (9 years, 161,000 km) with grinding from the front and the pads measured at 0.8 mm
-    const model = buildModel(knowledgeFromSeed(), { fuel: "diesel", drivetrain: "fwd", ageYears: 9, km: 161_000 }, 60);
-    const graded = new Map(kb.checkLinks.filter((l) => l.graded).map((l) => [`${l.check}|${l.cause}`, l.graded]));
-    model.checks = model.checks.map((k) => ({ ...k, bears: k.bears.map((b) => ({ ...b, graded: graded.get(`${k.id}|${b.causeId}`) })) }));
-    const findings = (band?: "far_beyond") => [{ checkId: "pad_thickness", result: "fail" as const, ...(band ? { band } : {}) }];
+    const model = buildModel(
+      knowledgeFromSeed(),
+      { fuel: "diesel", drivetrain: "fwd", ageYears: 9, km: 161_000 },
+      60,
+    );
+    const graded = new Map(
+      kb.checkLinks.filter((l) => l.graded).map((l) => [`${l.check}|${l.cause}`, l.graded]),
+    );
+    model.checks = model.checks.map((k) => ({
+      ...k,
+      bears: k.bears.map((b) => ({ ...b, graded: graded.get(`${k.id}|${b.causeId}`) })),
+    }));
+    const findings = (band?: "far_beyond") => [
+      { checkId: "pad_thickness", result: "fail" as const, ...(band ? { band } : {}) },
+    ];
     const before = rankCauses(model, { observations: [], findings: findings() });
     const after = rankCauses(model, { observations: [], findings: findings("far_beyond") });
     const at = (r: ReturnType<typeof rankCauses>, id: string) => r.causes.findIndex((c) => c.id === id);

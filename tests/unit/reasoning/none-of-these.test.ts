@@ -6,7 +6,10 @@ import { rankCauses, whatIf, type Model } from "~/reasoning";
 
 // A and B equally likely; s shows with A .6 (leak .02); k finds A .9 (false alarm .05).
 const model: Model = {
-  causes: [{ id: "A", prior: 1 }, { id: "B", prior: 1 }],
+  causes: [
+    { id: "A", prior: 1 },
+    { id: "B", prior: 1 },
+  ],
   symptoms: [{ id: "s", leak: 0.02 }],
   links: [{ symptomId: "s", causeId: "A", p: 0.6 }],
   checks: [{ id: "k", cost: 10, falseAlarm: 0.05, bears: [{ causeId: "A", pFail: 0.9 }] }],
@@ -26,11 +29,19 @@ describe("none of these", () => {
 
   it("rises when a check clears the listed cause that explained the symptom (hand values)", () => {
     // then k passes: A × .1, B × .95, U × .95 → .027, .00855, .019 → Z = .05455 → U .348304
-    const r = rankCauses(model, { observations: [{ symptomId: "s", present: true }], findings: [{ checkId: "k", result: "pass" }] }, opts);
+    const r = rankCauses(
+      model,
+      { observations: [{ symptomId: "s", present: true }], findings: [{ checkId: "k", result: "pass" }] },
+      opts,
+    );
     expect(r.unlisted).toBeCloseTo(0.019 / 0.05455, 12);
     expect(prob(r, "A")).toBeCloseTo(0.027 / 0.05455, 12);
     // with the leak alone (ρ = 0) U gets .1 × .02 × .95 = .0019 of Z .03745: .050734 — "none of these" stays silent
-    const leakOnly = rankCauses(model, { observations: [{ symptomId: "s", present: true }], findings: [{ checkId: "k", result: "pass" }] }, { ...opts, unlistedSymptomRate: 0 });
+    const leakOnly = rankCauses(
+      model,
+      { observations: [{ symptomId: "s", present: true }], findings: [{ checkId: "k", result: "pass" }] },
+      { ...opts, unlistedSymptomRate: 0 },
+    );
     expect(leakOnly.unlisted).toBeCloseTo(0.0019 / 0.03745, 12);
   });
 
@@ -51,7 +62,11 @@ describe("none of these", () => {
     // r = .7; P(s) under the prior = .45·.6 + .45·.02 + .1·.2 = .299
     // A' = .7·.6 + .3·.299 = .5097, B' = .7·.02 + .0897 = .1037, U' = .7·.2 + .0897 = .2297
     // .229365, .046665, .02297 → Z = .299
-    const r = rankCauses(model, { observations: [{ symptomId: "s", present: true, source: "owner" }], findings: [] }, opts);
+    const r = rankCauses(
+      model,
+      { observations: [{ symptomId: "s", present: true, source: "owner" }], findings: [] },
+      opts,
+    );
     expect(r.unlisted).toBeCloseTo(0.02297 / 0.299, 12);
     expect(prob(r, "A")).toBeCloseTo(0.229365 / 0.299, 12);
   });

@@ -17,9 +17,11 @@ const model: Model = {
   checks: [],
 };
 const pA = (source: "owner" | "technician", present = true, options = {}) =>
-  rankCauses(model, { observations: [{ symptomId: "noise", present, source }], findings: [] }, { unlistedPrior: 0, ...options }).causes.find(
-    (c) => c.id === "A",
-  )!.probability;
+  rankCauses(
+    model,
+    { observations: [{ symptomId: "noise", present, source }], findings: [] },
+    { unlistedPrior: 0, ...options },
+  ).causes.find((c) => c.id === "A")!.probability;
 
 describe("owner reliability", () => {
   it("the default is 0.7", () => expect(DEFAULT_OWNER_RELIABILITY).toBe(0.7));
@@ -52,9 +54,11 @@ describe("owner reliability", () => {
     // P(noise | A) = 1: a technician's 'absent' rules A out; the owner's only lowers it.
     const sure: Model = { ...model, links: [{ symptomId: "noise", causeId: "A", p: 1 }, model.links[1]] };
     const obs = (source: "owner" | "technician") =>
-      rankCauses(sure, { observations: [{ symptomId: "noise", present: false, source }], findings: [] }, { unlistedPrior: 0 }).causes.find(
-        (c) => c.id === "A",
-      )!.probability;
+      rankCauses(
+        sure,
+        { observations: [{ symptomId: "noise", present: false, source }], findings: [] },
+        { unlistedPrior: 0 },
+      ).causes.find((c) => c.id === "A")!.probability;
     expect(obs("technician")).toBe(0);
     expect(obs("owner")).toBeGreaterThan(0);
   });

@@ -12,14 +12,20 @@ const none = { observations: [], findings: [] };
 /** ECR by the textbook sum, over every hypothesis and every earlier step (Heckerman et al. 1995); a false alarm finds nothing. */
 function bruteEcr(model: Model, order: string[], unlisted: number): number {
   const total = model.causes.reduce((s, c) => s + c.prior, 0);
-  const hyps = [...model.causes.map((c) => ({ id: c.id as string | null, p: ((1 - unlisted) * c.prior) / total })), { id: null, p: unlisted }];
+  const hyps = [
+    ...model.causes.map((c) => ({ id: c.id as string | null, p: ((1 - unlisted) * c.prior) / total })),
+    { id: null, p: unlisted },
+  ];
   const q = (checkId: string, h: string | null) => {
     const k = model.checks.find((c) => c.id === checkId)!;
     return k.bears.find((b) => b.causeId === h)?.pFail ?? 0;
   };
   let ecr = 0;
   order.forEach((id, i) => {
-    const reach = hyps.reduce((s, h) => s + h.p * order.slice(0, i).reduce((m, prev) => m * (1 - q(prev, h.id)), 1), 0);
+    const reach = hyps.reduce(
+      (s, h) => s + h.p * order.slice(0, i).reduce((m, prev) => m * (1 - q(prev, h.id)), 1),
+      0,
+    );
     ecr += model.checks.find((c) => c.id === id)!.cost * reach;
   });
   return ecr;
@@ -39,7 +45,10 @@ describe("checks with false-alarm rate 1", () => {
       }));
       const model: Model = { causes, symptoms: [], links: [], checks };
       const order = checks.map((c) => c.id).sort(() => rand() - 0.5);
-      expect(orderCost(model, none, order, { unlistedPrior: 0.05 })).toBeCloseTo(bruteEcr(model, order, 0.05), 9);
+      expect(orderCost(model, none, order, { unlistedPrior: 0.05 })).toBeCloseTo(
+        bruteEcr(model, order, 0.05),
+        9,
+      );
     }
   });
 
@@ -53,7 +62,12 @@ describe("checks with false-alarm rate 1", () => {
       causes: Array.from({ length: n }, (_, i) => ({ id: `c${i}`, prior: 1 })),
       symptoms: [],
       links: [],
-      checks: Array.from({ length: n }, (_, i) => ({ id: `k${i}`, cost: 1 + (i % 7), falseAlarm: 1, bears: [] })),
+      checks: Array.from({ length: n }, (_, i) => ({
+        id: `k${i}`,
+        cost: 1 + (i % 7),
+        falseAlarm: 1,
+        bears: [],
+      })),
     };
     const started = performance.now();
     const plan = planChecks(model, none);

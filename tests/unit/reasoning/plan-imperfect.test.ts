@@ -38,7 +38,11 @@ describe("imperfect checks", () => {
   it("a cheap check with a high false-alarm rate does not jump ahead of a relevant one", () => {
     // k3 bears on nothing likely (B' with prior 0) and fails 30% of the time by false alarm.
     // By P(fail) it would score .3 / 5 = .06 and lead; by detection it scores 0 and comes last.
-    const m: Model = { ...model, causes: [...model.causes, { id: "C", prior: 0 }], checks: [...model.checks, { id: "k3", cost: 5, falseAlarm: 0.3, bears: [{ causeId: "C", pFail: 1 }] }] };
+    const m: Model = {
+      ...model,
+      causes: [...model.causes, { id: "C", prior: 0 }],
+      checks: [...model.checks, { id: "k3", cost: 5, falseAlarm: 0.3, bears: [{ causeId: "C", pFail: 1 }] }],
+    };
     const plan = planChecks(m, none, { unlistedPrior: 0.1 });
     expect(plan.steps.map((s) => s.checkId)).toEqual(["k1", "k2", "k3"]);
     expect(plan.steps[2].pFind).toBe(0);
@@ -105,15 +109,28 @@ describe("imperfect checks", () => {
     const plan = planChecks(m, { observations: [], findings: [] }, { unlistedPrior: 0 });
     expect(plan.steps.map((s) => s.checkId)).toEqual(["k0", "k1"]);
     expect(plan.expectedCost).toBeCloseTo(76, 12);
-    expect(orderCost(m, { observations: [], findings: [] }, ["k1", "k0"], { unlistedPrior: 0 })).toBeCloseTo(100.5, 12);
+    expect(orderCost(m, { observations: [], findings: [] }, ["k1", "k0"], { unlistedPrior: 0 })).toBeCloseTo(
+      100.5,
+      12,
+    );
   });
 
   it("when the fault is outside the knowledge base, no check can find it", () => {
     // Evidence rules out every listed cause (P(s | A) = 0, s present, leak .3): only U is left.
-    const m: Model = { ...model, symptoms: [{ id: "s", leak: 0.3 }], links: [{ symptomId: "s", causeId: "A", p: 0 }, { symptomId: "s", causeId: "B", p: 0 }] };
+    const m: Model = {
+      ...model,
+      symptoms: [{ id: "s", leak: 0.3 }],
+      links: [
+        { symptomId: "s", causeId: "A", p: 0 },
+        { symptomId: "s", causeId: "B", p: 0 },
+      ],
+    };
     const plan = planChecks(m, { observations: [{ symptomId: "s", present: true }], findings: [] });
     // Each would fail only by false alarm (k1 .2, k2 .05), which finds nothing: both score 0,
     // and equal chances fall back to cheapest first.
-    expect(plan.steps.map((s) => [s.checkId, s.pFind])).toEqual([["k1", 0], ["k2", 0]]);
+    expect(plan.steps.map((s) => [s.checkId, s.pFind])).toEqual([
+      ["k1", 0],
+      ["k2", 0],
+    ]);
   });
 });

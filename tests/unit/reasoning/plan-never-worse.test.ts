@@ -11,7 +11,10 @@ const none = { observations: [], findings: [] };
 /** ECR by the textbook sum over hypotheses (Heckerman, Breese & Rommelse 1995); a false alarm finds nothing. */
 function ecrOf(model: Model, order: string[], unlisted: number): number {
   const total = model.causes.reduce((s, c) => s + c.prior, 0);
-  const hyps = [...model.causes.map((c) => ({ id: c.id as string | null, p: ((1 - unlisted) * c.prior) / total })), { id: null, p: unlisted }];
+  const hyps = [
+    ...model.causes.map((c) => ({ id: c.id as string | null, p: ((1 - unlisted) * c.prior) / total })),
+    { id: null, p: unlisted },
+  ];
   let ecr = 0;
   for (const h of hyps) {
     let reach = h.p;
@@ -36,7 +39,10 @@ describe("a plan never worse than cheapest-first", () => {
     //   k1 k2 k3: 10 + .5·11 + .5·12 = 21.5 (also cheapest-first)
     //   k1 k3 k2: 10 + .5·12 + 0·11 = 16 (the minimum of the six orders)
     const m: Model = {
-      causes: [{ id: "A", prior: 1 }, { id: "B", prior: 1 }],
+      causes: [
+        { id: "A", prior: 1 },
+        { id: "B", prior: 1 },
+      ],
       symptoms: [],
       links: [],
       checks: [
@@ -80,7 +86,9 @@ describe("a plan never worse than cheapest-first", () => {
       expect(plan.saving).toBeCloseTo(plan.cheapestFirstExpectedCost - plan.expectedCost, 12);
       expect(plan.saving).toBeGreaterThanOrEqual(0);
       // the plain ratio order, for counting how often the swaps mattered
-      const ratio = [...plan.steps].sort((a, b) => b.ratio - a.ratio || a.cost - b.cost || (a.checkId < b.checkId ? -1 : 1)).map((s) => s.checkId);
+      const ratio = [...plan.steps]
+        .sort((a, b) => b.ratio - a.ratio || a.cost - b.cost || (a.checkId < b.checkId ? -1 : 1))
+        .map((s) => s.checkId);
       if (ecrOf(model, ratio, u) > plan.expectedCost + 1e-9) improvedOnRatio++;
     }
     // the random instances do include orders the ratio rule gets wrong

@@ -15,7 +15,12 @@ function perfectChecks(entries: { id: string; p: number; cost: number }[]): Mode
     causes: entries.map((e) => ({ id: e.id, prior: e.p })),
     symptoms: [],
     links: [],
-    checks: entries.map((e) => ({ id: `check-${e.id}`, cost: e.cost, falseAlarm: 0, bears: [{ causeId: e.id, pFail: 1 }] })),
+    checks: entries.map((e) => ({
+      id: `check-${e.id}`,
+      cost: e.cost,
+      falseAlarm: 0,
+      bears: [{ causeId: e.id, pFail: 1 }],
+    })),
   };
 }
 
@@ -32,7 +37,8 @@ function ecrByFormula(order: { p: number; cost: number }[]): number {
 
 function* permutations<T>(xs: T[]): Generator<T[]> {
   if (xs.length <= 1) return yield xs;
-  for (let i = 0; i < xs.length; i++) for (const rest of permutations([...xs.slice(0, i), ...xs.slice(i + 1)])) yield [xs[i], ...rest];
+  for (let i = 0; i < xs.length; i++)
+    for (const rest of permutations([...xs.slice(0, i), ...xs.slice(i + 1)])) yield [xs[i], ...rest];
 }
 
 describe("ordering theorem (brute force over all orders)", () => {
@@ -73,8 +79,16 @@ describe("worked vectors", () => {
     expect(plan.expectedCost).toBeCloseTo(42, 12);
     expect(plan.cheapestFirstExpectedCost).toBeCloseTo(44, 12);
     expect(plan.saving).toBeCloseTo(2, 12);
-    expect(plan.steps.map((s) => s.pFind)).toEqual([expect.closeTo(0.3, 12), expect.closeTo(0.5, 12), expect.closeTo(0.2, 12)]);
-    expect(plan.steps.map((s) => s.ratio)).toEqual([expect.closeTo(0.03, 12), expect.closeTo(0.0125, 12), expect.closeTo(0.01, 12)]);
+    expect(plan.steps.map((s) => s.pFind)).toEqual([
+      expect.closeTo(0.3, 12),
+      expect.closeTo(0.5, 12),
+      expect.closeTo(0.2, 12),
+    ]);
+    expect(plan.steps.map((s) => s.ratio)).toEqual([
+      expect.closeTo(0.03, 12),
+      expect.closeTo(0.0125, 12),
+      expect.closeTo(0.01, 12),
+    ]);
     // the last step counts, weighted by P(not found before it) = .2
     expect(plan.steps.map((s) => s.pReached)).toEqual([1, expect.closeTo(0.7, 12), expect.closeTo(0.2, 12)]);
   });
@@ -82,7 +96,14 @@ describe("worked vectors", () => {
   it("three checks: every order's ECR", () => {
     const expected: Record<string, number> = { BAC: 42, BCA: 44, CBA: 48, ABC: 49, ACB: 53, CAB: 55 };
     for (const [order, ecr] of Object.entries(expected)) {
-      expect(orderCost(abc, none, [...order].map((c) => `check-${c}`), exact)).toBeCloseTo(ecr, 12);
+      expect(
+        orderCost(
+          abc,
+          none,
+          [...order].map((c) => `check-${c}`),
+          exact,
+        ),
+      ).toBeCloseTo(ecr, 12);
     }
   });
 
@@ -119,7 +140,12 @@ describe("special cases and ties", () => {
       { id: "z", p: 0.3, cost: 20 },
       { id: "w", p: 0.1, cost: 20 },
     ]);
-    expect(planChecks(m, none, exact).steps.map((s) => s.checkId)).toEqual(["check-y", "check-z", "check-w", "check-x"]);
+    expect(planChecks(m, none, exact).steps.map((s) => s.checkId)).toEqual([
+      "check-y",
+      "check-z",
+      "check-w",
+      "check-x",
+    ]);
   });
 
   it("equal ratios: cheaper first, then by id", () => {
@@ -130,7 +156,12 @@ describe("special cases and ties", () => {
       { id: "b", p: 0.05, cost: 10 },
       { id: "a", p: 0.05, cost: 10 },
     ]);
-    expect(planChecks(m, none, exact).steps.map((s) => s.checkId)).toEqual(["check-small", "check-big", "check-a", "check-b"]);
+    expect(planChecks(m, none, exact).steps.map((s) => s.checkId)).toEqual([
+      "check-small",
+      "check-big",
+      "check-a",
+      "check-b",
+    ]);
   });
 
   it("recorded checks leave the plan; the rest is re-ordered by the new posterior", () => {
@@ -140,7 +171,11 @@ describe("special cases and ties", () => {
       { id: "C", p: 0.2, cost: 20 },
     ]);
     // B passed: A = .5/.7, C = .2/.7 → ratios .0179, .0143 → A then C; ECR 40 + (2/7)·20
-    const plan = planChecks(abc, { observations: [], findings: [{ checkId: "check-B", result: "pass" }] }, exact);
+    const plan = planChecks(
+      abc,
+      { observations: [], findings: [{ checkId: "check-B", result: "pass" }] },
+      exact,
+    );
     expect(plan.steps.map((s) => s.checkId)).toEqual(["check-A", "check-C"]);
     expect(plan.expectedCost).toBeCloseTo(40 + (2 / 7) * 20, 12);
   });

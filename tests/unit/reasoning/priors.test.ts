@@ -2,7 +2,14 @@
 // (Dirichlet) smoothing p̂ = (count + α·p₀) / (n + α) (Manning, Raghavan & Schütze, Introduction
 // to Information Retrieval, ch. 13 — recalled from memory). Arithmetic by hand in each case.
 import { describe, expect, it } from "vitest";
-import { checkCost, DEFAULT_PSEUDO_COUNT, DEFAULT_YOUNG_FACTOR, ReasoningError, resolvePriors, type PriorInput } from "~/reasoning";
+import {
+  checkCost,
+  DEFAULT_PSEUDO_COUNT,
+  DEFAULT_YOUNG_FACTOR,
+  ReasoningError,
+  resolvePriors,
+  type PriorInput,
+} from "~/reasoning";
 
 const causes: PriorInput[] = [
   { id: "glow-plug", baseRate: 2, applicability: { fuel: ["diesel"] } },
@@ -55,7 +62,9 @@ describe("resolvePriors", () => {
   });
 
   it("α = 0 is pure frequencies; no counts is the base rates", () => {
-    const freq = byId(resolvePriors(causes, {}, { outcomes: { "glow-plug": 3, battery: 1 }, pseudoCount: 0 }));
+    const freq = byId(
+      resolvePriors(causes, {}, { outcomes: { "glow-plug": 3, battery: 1 }, pseudoCount: 0 }),
+    );
     expect(freq["glow-plug"].prior).toBeCloseTo(0.75, 14);
     expect(freq["coil-pack"].prior).toBe(0);
     const base = byId(resolvePriors(causes, {}, { pseudoCount: 0 }));
@@ -81,18 +90,39 @@ describe("resolvePriors", () => {
     expect(code(() => resolvePriors([], {}))).toBe("EMPTY_MODEL");
     expect(code(() => resolvePriors([{ id: "a", baseRate: -1 }], {}))).toBe("INVALID_PRIOR");
     expect(code(() => resolvePriors([{ id: "a", baseRate: Number.NaN }], {}))).toBe("INVALID_PRIOR");
-    expect(code(() => resolvePriors([{ id: "a", baseRate: 1 }, { id: "a", baseRate: 1 }], {}))).toBe("DUPLICATE_ID");
+    expect(
+      code(() =>
+        resolvePriors(
+          [
+            { id: "a", baseRate: 1 },
+            { id: "a", baseRate: 1 },
+          ],
+          {},
+        ),
+      ),
+    ).toBe("DUPLICATE_ID");
     expect(code(() => resolvePriors(causes, {}, { outcomes: { nope: 1 } }))).toBe("UNKNOWN_ID");
     expect(code(() => resolvePriors(causes, {}, { outcomes: { battery: -2 } }))).toBe("INVALID_PRIOR");
     expect(code(() => resolvePriors(causes, {}, { pseudoCount: -1 }))).toBe("INVALID_OPTION");
-    expect(code(() => resolvePriors([{ id: "a", baseRate: 1, applicability: { fuel: ["diesel"] } }], { fuel: "petrol" }))).toBe("ZERO_PRIOR");
+    expect(
+      code(() =>
+        resolvePriors([{ id: "a", baseRate: 1, applicability: { fuel: ["diesel"] } }], { fuel: "petrol" }),
+      ),
+    ).toBe("ZERO_PRIOR");
   });
 });
 
 describe("checkCost", () => {
   it("(minutes + access minutes) × rate / 60 + consumables", () => {
     // 12 min + ramp 5 + wheels off 10 = 27 min at 80/h = 36; + 4.5 consumables = 40.5
-    expect(checkCost({ minutes: 12, labourRatePerHour: 80, consumables: 4.5, access: { ramp: 5, wheels_off: 10 } })).toBeCloseTo(40.5, 12);
+    expect(
+      checkCost({
+        minutes: 12,
+        labourRatePerHour: 80,
+        consumables: 4.5,
+        access: { ramp: 5, wheels_off: 10 },
+      }),
+    ).toBeCloseTo(40.5, 12);
     expect(checkCost({ minutes: 30, labourRatePerHour: 60 })).toBe(30);
   });
 

@@ -14,7 +14,8 @@ describe("fast engine = reference implementation", () => {
       expect(fast.causes.map((c) => c.id)).toEqual(ref.causes.map((c) => c.id));
       fast.causes.forEach((c, i) => {
         expect(c.probability).toBeCloseTo(ref.causes[i].probability, 12);
-        for (const [key, w] of Object.entries(ref.causes[i].contributions)) expect(c.contributions[key]).toBeCloseTo(w, 8);
+        for (const [key, w] of Object.entries(ref.causes[i].contributions))
+          expect(c.contributions[key]).toBeCloseTo(w, 8);
       });
       expect(fast.unlisted).toBeCloseTo(ref.unlisted, 12);
 
@@ -49,7 +50,9 @@ describe("fast engine = reference implementation", () => {
     const compiled = compileModel(model);
     const before = json(diagnose(model, evidence));
     expect(json(diagnose(compiled, evidence))).toEqual(before);
-    expect(json(diagnose(compiled, evidence, { unlistedPrior: 0 }))).toEqual(json(diagnose(model, evidence, { unlistedPrior: 0 })));
+    expect(json(diagnose(compiled, evidence, { unlistedPrior: 0 }))).toEqual(
+      json(diagnose(model, evidence, { unlistedPrior: 0 })),
+    );
     model.links.forEach((l) => (l.p = 0.5)); // later edits do not reach the compiled copy
     expect(json(diagnose(compiled, evidence))).toEqual(before);
   });

@@ -7,8 +7,16 @@ import { rankCauses, rankSecondFault, ReasoningError, type Model } from "~/reaso
 // s1 "judder under braking" shows with A .9; s2 "hum that rises with speed" with B .8 and with A
 // now and then (.1); kA (the dial gauge) finds A .95; kB (rock and spin) finds B .9; s3 shows with C.
 const model: Model = {
-  causes: [{ id: "A", prior: 1 }, { id: "B", prior: 1 }, { id: "C", prior: 1 }],
-  symptoms: [{ id: "s1", leak: 0.02 }, { id: "s2", leak: 0.02 }, { id: "s3", leak: 0.02 }],
+  causes: [
+    { id: "A", prior: 1 },
+    { id: "B", prior: 1 },
+    { id: "C", prior: 1 },
+  ],
+  symptoms: [
+    { id: "s1", leak: 0.02 },
+    { id: "s2", leak: 0.02 },
+    { id: "s3", leak: 0.02 },
+  ],
   links: [
     { symptomId: "s1", causeId: "A", p: 0.9 },
     { symptomId: "s2", causeId: "B", p: 0.8 },
@@ -79,7 +87,10 @@ describe("second fault", () => {
     };
     expect(code(() => rankSecondFault(model, evidence, ["Z"]))).toBe("UNKNOWN_ID");
     expect(code(() => rankSecondFault(model, evidence, []))).toBe("INVALID_INPUT");
-    const tree: Model = { ...model, causes: [{ id: "G", prior: 0 }, ...model.causes.map((c) => ({ ...c, parentId: "G" }))] };
+    const tree: Model = {
+      ...model,
+      causes: [{ id: "G", prior: 0 }, ...model.causes.map((c) => ({ ...c, parentId: "G" }))],
+    };
     expect(code(() => rankSecondFault(tree, evidence, ["G"]))).toBe("INVALID_INPUT");
   });
 });

@@ -9,10 +9,19 @@ describe("orderByKeyDesc", () => {
     for (const n of [1, 2, 3, 17, 1000, 5000]) {
       const keys = Float64Array.from({ length: n }, () => {
         const r = rand();
-        return r < 0.1 ? 0 : r < 0.2 ? 0.25 : r < 0.22 ? Infinity : r < 0.24 ? 1e300 : rand() * 10 ** Math.floor(rand() * 10 - 5);
+        return r < 0.1
+          ? 0
+          : r < 0.2
+            ? 0.25
+            : r < 0.22
+              ? Infinity
+              : r < 0.24
+                ? 1e300
+                : rand() * 10 ** Math.floor(rand() * 10 - 5);
       });
       const tag = Float64Array.from({ length: n }, () => Math.floor(rand() * 3));
-      const exact = (a: number, b: number) => (keys[b] === keys[a] ? 0 : keys[b] > keys[a] ? 1 : -1) || tag[a] - tag[b] || a - b;
+      const exact = (a: number, b: number) =>
+        (keys[b] === keys[a] ? 0 : keys[b] > keys[a] ? 1 : -1) || tag[a] - tag[b] || a - b;
       const got = Array.from(orderByKeyDesc(keys, n, exact));
       const want = Array.from({ length: n }, (_, i) => i).sort(exact);
       expect(got).toEqual(want);

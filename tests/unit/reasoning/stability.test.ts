@@ -23,7 +23,10 @@ describe("numerical stability", () => {
       checks: [],
     };
     expect(0.01 ** 200).toBe(0);
-    const e = { observations: Array.from({ length: n }, (_, i) => ({ symptomId: `s${i}`, present: true })), findings: [] };
+    const e = {
+      observations: Array.from({ length: n }, (_, i) => ({ symptomId: `s${i}`, present: true })),
+      findings: [],
+    };
     const r = rankCauses(model, e, { unlistedPrior: 0 });
     const a = r.causes.find((c) => c.id === "A")!;
     expect(a.probability / (1 / (1 + 2 ** 200))).toBeCloseTo(1, 10);

@@ -33,7 +33,9 @@ describe("cause tree", () => {
   it("a link on a node applies to each leaf below it", () => {
     // judder | discs = .8 for warped and worn; glazed uses the leak .05
     // warped .25 × .8 = .2, worn .2, glazed .5 × .05 = .025; Z = .425
-    const r = rankCauses(tree([{ symptomId: "judder", causeId: "discs", p: 0.8 }]), judder, { unlistedPrior: 0 });
+    const r = rankCauses(tree([{ symptomId: "judder", causeId: "discs", p: 0.8 }]), judder, {
+      unlistedPrior: 0,
+    });
     expect(p(r, "warped")).toBeCloseTo(0.2 / 0.425, 14);
     expect(p(r, "worn")).toBeCloseTo(0.2 / 0.425, 14);
     expect(p(r, "glazed")).toBeCloseTo(0.025 / 0.425, 14);
@@ -56,10 +58,16 @@ describe("cause tree", () => {
 
   it("a check on a node bears on every leaf below it", () => {
     // Perfect check on discs: P(fail) = P(warped) + P(worn) = .5
-    const checks = [{ id: "measure-runout", cost: 10, falseAlarm: 0, bears: [{ causeId: "discs", pFail: 1 }] }];
+    const checks = [
+      { id: "measure-runout", cost: 10, falseAlarm: 0, bears: [{ causeId: "discs", pFail: 1 }] },
+    ];
     const plan = planChecks(tree([], checks), { observations: [], findings: [] }, { unlistedPrior: 0 });
     expect(plan.steps[0].pFind).toBeCloseTo(0.5, 14);
-    const after = rankCauses(tree([], checks), { observations: [], findings: [{ checkId: "measure-runout", result: "pass" }] }, { unlistedPrior: 0 });
+    const after = rankCauses(
+      tree([], checks),
+      { observations: [], findings: [{ checkId: "measure-runout", result: "pass" }] },
+      { unlistedPrior: 0 },
+    );
     expect(p(after, "glazed")).toBeCloseTo(1, 14);
     expect(after.nodes.discs).toBe(0);
   });

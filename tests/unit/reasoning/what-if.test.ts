@@ -23,8 +23,16 @@ describe("what-if", () => {
     // fail: A .54, B .06, U .02 (Z = .62) → A at 27/31; pass: A .06, B .24, U .08 (Z = .38) → B at 12/19
     const w = whatIf(model, none, "k", { unlistedPrior: 0.1 });
     expect(w.pFail).toBeCloseTo(0.62, 14);
-    expect(w.ifFail).toEqual({ topCauseId: "A", probability: expect.closeTo(0.54 / 0.62, 14), unlisted: expect.closeTo(0.02 / 0.62, 14) });
-    expect(w.ifPass).toEqual({ topCauseId: "B", probability: expect.closeTo(12 / 19, 14), unlisted: expect.closeTo(4 / 19, 14) });
+    expect(w.ifFail).toEqual({
+      topCauseId: "A",
+      probability: expect.closeTo(0.54 / 0.62, 14),
+      unlisted: expect.closeTo(0.02 / 0.62, 14),
+    });
+    expect(w.ifPass).toEqual({
+      topCauseId: "B",
+      probability: expect.closeTo(12 / 19, 14),
+      unlisted: expect.closeTo(4 / 19, 14),
+    });
   });
 
   it("a check that cannot fail has no fail outcome", () => {
@@ -38,7 +46,11 @@ describe("what-if", () => {
     // unlisted .5 → A = 1/3, B = 1/6; k passes: A (1/3)(.1) = 1/30, B (1/6)(.8) = 4/30,
     // U .5 × .8 = 12/30; Z = 17/30 → U on top at 12/17
     const w = whatIf(model, none, "k", { unlistedPrior: 0.5 });
-    expect(w.ifPass).toEqual({ topCauseId: null, probability: expect.closeTo(12 / 17, 14), unlisted: expect.closeTo(12 / 17, 14) });
+    expect(w.ifPass).toEqual({
+      topCauseId: null,
+      probability: expect.closeTo(12 / 17, 14),
+      unlisted: expect.closeTo(12 / 17, 14),
+    });
   });
 
   it("matches ranking with the finding recorded, on random models", () => {
@@ -48,7 +60,10 @@ describe("what-if", () => {
       for (const k of m.checks.filter((c) => !done.has(c.id)).slice(0, 5)) {
         const w = whatIf(m, evidence, k.id);
         for (const result of ["fail", "pass"] as const) {
-          const r = rankCauses(m, { ...evidence, findings: [...evidence.findings, { checkId: k.id, result }] });
+          const r = rankCauses(m, {
+            ...evidence,
+            findings: [...evidence.findings, { checkId: k.id, result }],
+          });
           const out = result === "fail" ? w.ifFail! : w.ifPass!;
           const top = r.causes[0].probability >= r.unlisted ? r.causes[0] : null;
           expect(out.topCauseId).toBe(top?.id ?? null);

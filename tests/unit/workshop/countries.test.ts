@@ -8,7 +8,8 @@ describe("country defaults", () => {
   });
 
   it("keeps EU standard rates at or above the 15% minimum (Council Directive 2006/112/EC Art. 97)", () => {
-    for (const c of COUNTRIES.filter((c) => c.currency === "EUR")) expect(c.taxRate).toBeGreaterThanOrEqual(0.15);
+    for (const c of COUNTRIES.filter((c) => c.currency === "EUR"))
+      expect(c.taxRate).toBeGreaterThanOrEqual(0.15);
   });
 
   it("uses ISO 4217 currency and ISO 3166 country codes", () => {

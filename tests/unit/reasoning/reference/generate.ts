@@ -12,7 +12,12 @@ export function generateCase(size: Size, seed: number): { model: Model; evidence
   const components = Math.max(1, Math.round(size.causes * 0.15));
   const causes: Model["causes"] = [];
   for (let i = 0; i < size.causes; i++) {
-    const parentId = i < systems ? null : i < systems + components ? `c${Math.floor(rand() * systems)}` : `c${systems + Math.floor(rand() * components)}`;
+    const parentId =
+      i < systems
+        ? null
+        : i < systems + components
+          ? `c${Math.floor(rand() * systems)}`
+          : `c${systems + Math.floor(rand() * components)}`;
     causes.push({ id: `c${i}`, parentId, prior: between(rand, 0.1, 10) });
   }
   const componentIds = causes.slice(systems, systems + components).map((c) => c.id);
@@ -20,7 +25,10 @@ export function generateCase(size: Size, seed: number): { model: Model; evidence
   const causeFor = () => (rand() < 0.9 ? pick(rand, leafIds) : pick(rand, componentIds));
 
   const symptomCount = Math.max(1, Math.round(size.links / 5));
-  const symptoms = Array.from({ length: symptomCount }, (_, i) => ({ id: `s${i}`, leak: between(rand, 0.01, 0.2) }));
+  const symptoms = Array.from({ length: symptomCount }, (_, i) => ({
+    id: `s${i}`,
+    leak: between(rand, 0.01, 0.2),
+  }));
   const links: Model["links"] = [];
   const seen = new Set<string>();
   while (links.length < size.links) {
@@ -47,7 +55,11 @@ export function generateCase(size: Size, seed: number): { model: Model; evidence
   const observations: Evidence["observations"] = [];
   const findings: Evidence["findings"] = [];
   const used = new Set<string>();
-  for (let tries = 0; observations.length + findings.length < size.evidence && tries < 100 * size.evidence; tries++) {
+  for (
+    let tries = 0;
+    observations.length + findings.length < size.evidence && tries < 100 * size.evidence;
+    tries++
+  ) {
     if (rand() < 0.7 || size.checks === 0) {
       const symptomId = `s${Math.floor(rand() * symptomCount)}`;
       if (used.has(symptomId)) continue;

@@ -6,7 +6,14 @@ import type { Evidence, Model } from "~/reasoning";
 
 const SKILLS = ["apprentice", "technician", "senior"];
 
-export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.7, maxSkill = "senior", rho = 0.04) {
+export function naiveDiagnose(
+  model: Model,
+  evidence: Evidence,
+  u = 0.05,
+  r = 0.7,
+  maxSkill = "senior",
+  rho = 0.04,
+) {
   const leaves = model.causes.filter((c) => !model.causes.some((d) => d.parentId === c.id));
   const chainOf = (id: string): string[] => {
     const chain = [id];
@@ -88,12 +95,16 @@ export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.
     .filter((k) => !evidence.findings.some((f) => f.checkId === k.id))
     .map((k) => {
       const q = checkLik(k.id);
-      const borne = prior.map((_, h) => h !== H - 1 && chains[h].some((a) => k.bears.some((b) => b.causeId === a)));
+      const borne = prior.map(
+        (_, h) => h !== H - 1 && chains[h].some((a) => k.bears.some((b) => b.causeId === a)),
+      );
       const pFind = post.reduce((s, p, h) => s + (borne[h] ? p * q[h] : 0), 0);
       return { check: k, q, borne, pFind, ratio: pFind / k.cost };
     })
     .sort((a, b) => b.ratio - a.ratio || a.check.cost - b.check.cost || (a.check.id < b.check.id ? -1 : 1));
-  const within = remaining.filter((s) => SKILLS.indexOf(s.check.skill ?? "technician") <= SKILLS.indexOf(maxSkill));
+  const within = remaining.filter(
+    (s) => SKILLS.indexOf(s.check.skill ?? "technician") <= SKILLS.indexOf(maxSkill),
+  );
   const ecr = (order: typeof within) => {
     let survive = [...post];
     let cost = 0;
@@ -113,7 +124,8 @@ export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.
       for (let i = 0; i + 1 < Math.min(order.length, 64); i++) {
         const [a, b] = [order[i], order[i + 1]];
         const r = survive.reduce((x, y) => x + y, 0);
-        const after = (s: (typeof order)[number]) => survive.reduce((x, v, h) => x + (s.borne[h] ? v * (1 - s.q[h]) : v), 0);
+        const after = (s: (typeof order)[number]) =>
+          survive.reduce((x, v, h) => x + (s.borne[h] ? v * (1 - s.q[h]) : v), 0);
         const keep = a.check.cost * r + b.check.cost * after(a);
         const swap = b.check.cost * r + a.check.cost * after(b);
         if (swap < keep - 1e-12 * (a.check.cost + b.check.cost)) {
@@ -127,12 +139,20 @@ export function naiveDiagnose(model: Model, evidence: Evidence, u = 0.05, r = 0.
     }
     return order;
   };
-  const cheapest = [...within].sort((a, b) => a.check.cost - b.check.cost || (a.check.id < b.check.id ? -1 : 1));
+  const cheapest = [...within].sort(
+    (a, b) => a.check.cost - b.check.cost || (a.check.id < b.check.id ? -1 : 1),
+  );
   let shown = improve(within);
   if (ecr(shown) > ecr(cheapest)) {
     const alt = improve(cheapest);
     if (ecr(alt) < ecr(shown)) shown = alt;
   }
   const steps = shown.map((s) => ({ checkId: s.check.id, pFind: s.pFind, ratio: s.ratio }));
-  return { causes, unlisted: post[H - 1], steps, expectedCost: ecr(shown), cheapestFirstExpectedCost: ecr(cheapest) };
+  return {
+    causes,
+    unlisted: post[H - 1],
+    steps,
+    expectedCost: ecr(shown),
+    cheapestFirstExpectedCost: ecr(cheapest),
+  };
 }
