@@ -6,75 +6,24 @@ import type { KnowledgeBaseSeed } from "./types";
 
 export const troubleCodesOther: KnowledgeBaseSeed = {
   symptoms: [
-    troubleCode(
-      "P0016",
-      "crankshaft position – camshaft position correlation (bank 1 sensor A)",
-      "engine_mechanical",
-      ["cam crank correlation", "timing correlation code"],
-    ), // from memory
-    troubleCode("P0524", "engine oil pressure too low", "engine_mechanical", [
-      "low oil pressure code",
-      "oil pressure code",
-    ]), // from memory
-    troubleCode(
-      "P0128",
-      "coolant thermostat (coolant temperature below thermostat regulating temperature)",
-      "cooling",
-      ["thermostat code", "engine not warming up code"],
-    ), // from memory
-    troubleCode("P0217", "engine coolant over-temperature condition", "cooling", [
-      "over temperature code",
-      "engine overheat code",
-    ]), // from memory
-    troubleCode("P0480", "cooling fan 1 control circuit", "cooling", [
-      "fan control code",
-      "radiator fan circuit code",
-    ]), // from memory
-    troubleCode("P0420", "catalyst system efficiency below threshold (bank 1)", "exhaust", [
-      "catalyst code",
-      "cat efficiency code",
-      "catalytic converter code",
-    ]), // SAE J2012 title, secondary, via SOURCES.md
-    troubleCode("P2002", "diesel particulate filter efficiency below threshold (bank 1)", "exhaust", [
-      "dpf efficiency code",
-      "particulate filter efficiency",
-    ]), // from memory
-    troubleCode("P2463", "diesel particulate filter soot accumulation (bank 1)", "exhaust", [
-      "dpf soot code",
-      "dpf full code",
-    ]), // from memory
-    troubleCode("P0562", "system voltage low", "electrical", [
-      "low voltage code",
-      "battery voltage low code",
-    ]), // from memory
-    troubleCode("P0563", "system voltage high", "electrical", [
-      "system voltage high code",
-      "overcharging code",
-    ]), // from memory
-    troubleCode("P0700", "transmission control system (MIL request)", "driveline", [
-      "gearbox code",
-      "transmission fault code",
-    ]), // from memory
+    troubleCode("P0016", "crankshaft position – camshaft position correlation (bank 1 sensor A)", "engine_mechanical", ["cam crank correlation", "timing correlation code"]), // from memory
+    troubleCode("P0524", "engine oil pressure too low", "engine_mechanical", ["low oil pressure code", "oil pressure code"]), // from memory
+    troubleCode("P0128", "coolant thermostat (coolant temperature below thermostat regulating temperature)", "cooling", ["thermostat code", "engine not warming up code"]), // from memory
+    troubleCode("P0217", "engine coolant over-temperature condition", "cooling", ["over temperature code", "engine overheat code"]), // from memory
+    troubleCode("P0480", "cooling fan 1 control circuit", "cooling", ["fan control code", "radiator fan circuit code"]), // from memory
+    troubleCode("P0420", "catalyst system efficiency below threshold (bank 1)", "exhaust", ["catalyst code", "cat efficiency code", "catalytic converter code"]), // SAE J2012 title, secondary, via SOURCES.md
+    troubleCode("P2002", "diesel particulate filter efficiency below threshold (bank 1)", "exhaust", ["dpf efficiency code", "particulate filter efficiency"]), // from memory
+    troubleCode("P2463", "diesel particulate filter soot accumulation (bank 1)", "exhaust", ["dpf soot code", "dpf full code"]), // from memory
+    troubleCode("P0562", "system voltage low", "electrical", ["low voltage code", "battery voltage low code"]), // from memory
+    troubleCode("P0563", "system voltage high", "electrical", ["system voltage high code", "overcharging code"]), // from memory
+    troubleCode("P0700", "transmission control system (MIL request)", "driveline", ["gearbox code", "transmission fault code"]), // from memory
     // Any other valid code lands here, the code itself kept with the observation: one symptom for
     // every code the base does not list by itself (chassis, body and network codes, bank-2 and
     // higher-cylinder engine codes). A code nobody has written down also hints at a fault outside
     // the base: its leak is higher than a listed code's, and a fault that is not in the base is
     // taken to store such a code half the time (starter estimate).
-    {
-      key: "trouble_code_stored",
-      name: "Trouble code stored that is not listed by itself",
-      system: "engine_fuel_emissions",
-      kind: "trouble_code",
-      synonyms: [
-        "other trouble code",
-        "unlisted fault code",
-        "scan tool shows another code",
-        "code not on the list",
-      ],
-      conditions: ["in the fault memory"],
-      leak: 0.05,
-      unlisted: 0.5,
-    },
+    { key: "trouble_code_stored", name: "Trouble code stored that is not listed by itself", system: "engine_fuel_emissions", kind: "trouble_code",
+      synonyms: ["other trouble code", "unlisted fault code", "scan tool shows another code", "code not on the list"], conditions: ["in the fault memory"], leak: 0.05, unlisted: 0.5 },
   ],
   causes: [],
   checks: [],

@@ -1,21 +1,8 @@
 // The starter knowledge base as plain data. Seeding copies it into a workshop's own tables,
 // where seniors then curate it. Keys are stable slugs so re-seeding is idempotent.
 // The vocabulary lists are the app's own (app/domain); the seed shapes are below.
-export {
-  CAUTIONS,
-  CHECK_ACCESS as ACCESS,
-  PRIORITIES,
-  SYMPTOM_KINDS,
-  SYSTEMS,
-} from "../../app/domain/knowledge";
-export type {
-  Applicability,
-  Caution,
-  CheckAccess as Access,
-  Priority,
-  SymptomKind,
-  System,
-} from "../../app/domain/knowledge";
+export { CAUTIONS, CHECK_ACCESS as ACCESS, PRIORITIES, SYMPTOM_KINDS, SYSTEMS } from "../../app/domain/knowledge";
+export type { Applicability, Caution, CheckAccess as Access, Priority, SymptomKind, System } from "../../app/domain/knowledge";
 export { SKILLS } from "../../app/domain/people";
 export type { Skill } from "../../app/domain/people";
 export { DRIVETRAINS, FUEL_TYPES } from "../../app/domain/vehicles";
