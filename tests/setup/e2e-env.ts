@@ -1,6 +1,10 @@
-// Ports of the end-to-end run, apart from the demo's so both can run at once.
-const APP_PORT = 3998;
-const OAUTH_PORT = 4191;
+// Ports of the end-to-end run, apart from the demo's so both can run at once. RL_E2E_PORT_BASE
+// moves the whole set (app on the base, fakes on base+1..3) so two worktrees can test side by side.
+const BASE = Number(process.env.RL_E2E_PORT_BASE ?? "0");
+const APP_PORT = BASE ? BASE : 3998;
+const OAUTH_PORT = BASE ? BASE + 1 : 4191;
+const SMTP_PORT = BASE ? BASE + 2 : 4192;
+const PAY_PORT = BASE ? BASE + 3 : 4193;
 
 export const E2E_ENV = {
   PORT: String(APP_PORT),
@@ -11,10 +15,10 @@ export const E2E_ENV = {
   GITHUB_OAUTH_URL: `http://127.0.0.1:${OAUTH_PORT}`,
   GITHUB_API_URL: `http://127.0.0.1:${OAUTH_PORT}`,
   FAKE_OAUTH_PORT: String(OAUTH_PORT),
-  FAKE_SMTP_PORT: "4192",
-  FAKE_PAY_PORT: "4193",
-  SMTP_URL: "smtp://127.0.0.1:4192",
-  FAKE_MAIL_DIR: "/tmp/ramplight-e2e-mail",
+  FAKE_SMTP_PORT: String(SMTP_PORT),
+  FAKE_PAY_PORT: String(PAY_PORT),
+  SMTP_URL: `smtp://127.0.0.1:${SMTP_PORT}`,
+  FAKE_MAIL_DIR: `/tmp/ramplight-e2e-mail${BASE ? "-" + BASE : ""}`,
   OAUTH_CLIENT_ID: "ramplight-e2e",
   OAUTH_CLIENT_SECRET: "e2e-secret-0123456789",
   OAUTH_REDIRECT_URI: `http://127.0.0.1:${APP_PORT}/auth/github/callback`,
