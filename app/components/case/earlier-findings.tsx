@@ -1,6 +1,6 @@
 import { useQuery } from "@tanstack/react-query";
 import { findingsQuery } from "~/cases/case-queries";
-import { FindingRow } from "./evidence-list";
+import { FindingRow } from "./finding-row";
 
 /** The findings before the latest ones, read when their fold is opened. */
 export default function EarlierFindings({

@@ -1,9 +1,7 @@
 import { lazy, Suspense } from "react";
 import type { CaseView } from "~/cases/case-queries";
 import { Fold } from "../fold";
-import { formatDate } from "~/domain/format";
-
-type Finding = CaseView["case"]["findings"][number];
+import { FindingRow } from "./finding-row";
 
 // A long case keeps its latest findings in view; the earlier ones open on request.
 // The view carries the latest findings; the earlier ones are read (and their code loaded) on opening.
@@ -78,37 +76,5 @@ export function EvidenceList({
         ))}
       </ol>
     </section>
-  );
-}
-
-export function FindingRow({
-  f,
-  canWork,
-  remove,
-}: {
-  f: Finding;
-  canWork: boolean;
-  remove: (kind: "unfind", id: string) => void;
-}) {
-  return (
-    <li className="flex items-center justify-between gap-2">
-      <span>
-        <strong className={f.result === "fail" ? "text-stop" : ""}>
-          {f.id.startsWith("pending") ? "Recording…" : f.result === "fail" ? "Fault found" : "Passed"}
-        </strong>
-        {`: ${f.name}${f.reading ? ` — ${f.reading}` : ""} `}
-        <span className="meta tabular">{`${f.by ? `${f.by}, ` : ""}${formatDate(f.recordedAt)}`}</span>
-      </span>
-      {canWork && !f.id.startsWith("pending") ? (
-        <button
-          type="button"
-          onClick={() => remove("unfind", f.id)}
-          className="btn-small"
-          aria-label={`Remove finding ${f.name}`}
-        >
-          Remove
-        </button>
-      ) : null}
-    </li>
   );
 }
