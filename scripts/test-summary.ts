@@ -1,11 +1,11 @@
 // Reads vitest's JSON report and prints the per-level counts, then the one line CI reads:
-// "N passed, N failed". The typecheck and the schema-drift check count as one test each.
+// "N passed, N failed". The typecheck, lint, format and schema-drift checks count as one test each.
 import { readFileSync } from "node:fs";
 
 type Assertion = { status: string };
 type FileResult = { name: string; assertionResults: Assertion[]; status: string; message?: string };
 
-const [reportPath, typecheckFailed, driftFailed] = process.argv.slice(2);
+const [reportPath, typecheckFailed, driftFailed, lintFailed, formatFailed] = process.argv.slice(2);
 let files: FileResult[] = [];
 try {
   files = JSON.parse(readFileSync(reportPath, "utf8")).testResults ?? [];
@@ -46,6 +46,8 @@ for (const [level, c] of [...levels].sort()) {
 for (const [name, flag] of [
   ["typecheck", typecheckFailed],
   ["schema-drift", driftFailed],
+  ["lint", lintFailed],
+  ["format", formatFailed],
 ] as const) {
   console.log(`  ${name.padEnd(12)} ${flag === "1" ? "failed" : "passed"}`);
   if (flag === "1") failed++;

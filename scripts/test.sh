@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # npm test: everything the tests need, then all of them, then one line "N passed, N failed".
 #   dependencies (npm ci), Debian's Chromium (apt-get when missing), a throwaway PostgreSQL
-#   cluster on its own port, the production build; then typecheck, unit, dom, integration, e2e.
+#   cluster on its own port, the production build; then typecheck, lint, format, unit, dom, integration, e2e.
 set -uo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/.."
 export NO_COLOR=1 FORCE_COLOR=0 CI="${CI:-}"
@@ -30,6 +30,12 @@ typecheck_failed=0
 echo "== typecheck"
 if ! (node_modules/.bin/react-router typegen && node_modules/.bin/tsc); then typecheck_failed=1; status=1; fi
 
+echo "== lint (ESLint) and format (Prettier)"
+lint_failed=0
+node_modules/.bin/eslint --config scripts/eslint.config.js . || { lint_failed=1; status=1; }
+format_failed=0
+node_modules/.bin/prettier --check --log-level warn . || { echo "run npm run format" >&2; format_failed=1; status=1; }
+
 echo "== schema and migrations agree"
 drift_failed=0
 backup="$(mktemp -d)"; cp -r drizzle "$backup/"
@@ -54,5 +60,5 @@ report=".tmp/vitest-report.json"
 mkdir -p .tmp
 node_modules/.bin/vitest run --config tests/vitest.config.ts --reporter=default --reporter=json --outputFile.json="$report" "$@" || status=1
 
-node_modules/.bin/tsx scripts/test-summary.ts "$report" "$typecheck_failed" "$drift_failed" || status=1
+node_modules/.bin/tsx scripts/test-summary.ts "$report" "$typecheck_failed" "$drift_failed" "$lint_failed" "$format_failed" || status=1
 exit $status

@@ -54,14 +54,12 @@ export async function signInFromProfile(db: Db, profile: ProviderProfile, now = 
         .orderBy(invitations.createdAt)
         .limit(1);
       if (invite) {
-        await tx
-          .insert(members)
-          .values({
-            workshopId: invite.workshopId,
-            userId,
-            role: invite.role,
-            skill: skillForRole(invite.role),
-          });
+        await tx.insert(members).values({
+          workshopId: invite.workshopId,
+          userId,
+          role: invite.role,
+          skill: skillForRole(invite.role),
+        });
         await tx.update(invitations).set({ acceptedAt: now }).where(eq(invitations.id, invite.id));
         await audit(tx, {
           workshopId: invite.workshopId,

@@ -152,8 +152,11 @@ export function buildIndex(entries: Entry[]): QuickFindIndex {
       for (const w of a.words) wordP.add(w, i, weight);
       for (const c of a.concepts) conceptP.add(c, i, weight);
       for (const f of a.fragments) codeP.add(f, i, weight);
-      if (phrase && a.canonical)
-        (own.push(a.canonical), ownLiteral.push(a.literal), ownPolarity?.push(a.polarity));
+      if (phrase && a.canonical) {
+        own.push(a.canonical);
+        ownLiteral.push(a.literal);
+        ownPolarity?.push(a.polarity);
+      }
       return a.fuse;
     };
     const title = field(e.title, FIELD_WEIGHT.title);

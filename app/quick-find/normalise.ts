@@ -137,6 +137,7 @@ export const NEGATIONS: ReadonlySet<string> = new Set([
 const APOSTROPHES = /['’‘`]/g;
 const COMBINING = /[\u0300-\u036f]/g;
 const NON_WORD = /[^a-z0-9]+/g;
+// eslint-disable-next-line no-control-regex -- \x00–\x7f is the ASCII range on purpose, NUL included
 const NON_ASCII = /[^\x00-\x7f]/;
 const LETTERS_ONLY = /^[a-z]+$/;
 

@@ -1,6 +1,6 @@
 // How conditions weigh in the ranking; the list of conditions itself is the domain's (app/domain).
 export { CONDITIONS, SPEED_BANDS_KMH, speedBand, type Condition } from "~/domain/conditions";
-import { CONDITIONS, type Condition } from "~/domain/conditions";
+import { CONDITIONS } from "~/domain/conditions";
 
 /**
  * How conditions count (a modelling choice, not measured): when a cause shows its symptom, the

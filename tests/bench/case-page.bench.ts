@@ -114,27 +114,23 @@ async function seedCase(databaseUrl: string) {
       .where(eq(checks.workshopId, member.workshopId))
       .orderBy(checks.id)
       .limit(30);
-    await db
-      .insert(findings)
-      .values(
-        kbChecks.map((k) => ({
-          workshopId: member.workshopId,
-          caseId: created.id,
-          checkId: k.id,
-          result: "pass" as const,
-          recordedById: member.memberId,
-        })),
-      );
-    await db
-      .insert(observations)
-      .values({
+    await db.insert(findings).values(
+      kbChecks.map((k) => ({
         workshopId: member.workshopId,
         caseId: created.id,
-        symptomId: kbId("bramblegate", "symptom", "vibration_braking"),
-        present: true,
-        source: "owner",
+        checkId: k.id,
+        result: "pass" as const,
         recordedById: member.memberId,
-      });
+      })),
+    );
+    await db.insert(observations).values({
+      workshopId: member.workshopId,
+      caseId: created.id,
+      symptomId: kbId("bramblegate", "symptom", "vibration_braking"),
+      present: true,
+      source: "owner",
+      recordedById: member.memberId,
+    });
     const token = await createSession(db, member.userId, "case-page bench");
     return { caseId: created.id, cookie: `rl_session=${token}`, findings: kbChecks.length };
   } finally {

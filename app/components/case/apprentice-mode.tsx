@@ -1,6 +1,5 @@
 import { Form } from "react-router";
 import type { Diagnosis } from "~/cases/present-diagnosis";
-import type { UnitSystem } from "~/domain/vehicles";
 import type { FormErrors } from "~/http/forms";
 import { describedBy, FieldError } from "../ui/form-errors";
 import { CheckPlan, type RecordResult } from "./check-plan";
@@ -9,7 +8,6 @@ type Props = {
   errors?: FormErrors;
   plan: Diagnosis["plan"];
   currency: string;
-  units: UnitSystem;
   record: RecordResult;
   busy: boolean;
   error: string | null;
@@ -28,7 +26,6 @@ export function ApprenticeMode(props: Props) {
       <CheckPlan
         plan={props.plan}
         currency={props.currency}
-        units={props.units}
         record={props.record}
         busy={props.busy}
         error={props.error}

@@ -3,7 +3,6 @@ import type { Diagnosis } from "~/cases/present-diagnosis";
 import { useQuery } from "@tanstack/react-query";
 import { checkQuery } from "~/cases/case-queries";
 import { PLAN_OPEN, PLAN_SHOWN } from "~/cases/shown";
-import type { UnitSystem } from "~/domain/vehicles";
 import { formatMoney, formatPercent } from "~/domain/format";
 import { Fold } from "../fold";
 import { Cautions } from "./cautions";
@@ -70,7 +69,10 @@ function onPlanKey(
   const key = e.key.toLowerCase();
   if (!isOpen(step.checkId)) {
     // A folded check opens first (Enter, P or F), so its cautions are read before anything is recorded.
-    if (e.key === "Enter" || key === "p" || key === "f") (e.preventDefault(), open(step.checkId));
+    if (e.key === "Enter" || key === "p" || key === "f") {
+      e.preventDefault();
+      open(step.checkId);
+    }
     return;
   }
   if ((key === "p" || key === "f") && step.resultKind === "pass_fail") {
@@ -93,7 +95,6 @@ function onPlanKey(
 type PlanProps = {
   plan: Diagnosis["plan"];
   currency: string;
-  units: UnitSystem;
   record: RecordResult;
   busy: boolean;
   /** The message of a refused recording, shown at the step it concerns. */
@@ -104,16 +105,7 @@ type PlanProps = {
   single?: boolean;
 };
 
-export function CheckPlan({
-  plan,
-  currency,
-  units,
-  record,
-  busy,
-  errorFor,
-  error,
-  single = false,
-}: PlanProps) {
+export function CheckPlan({ plan, currency, record, busy, errorFor, error, single = false }: PlanProps) {
   const steps = plan.steps;
   // The plan orders every remaining check; the screen offers the few worth doing now.
   const worth = steps.filter((s, i) => i === 0 || s.pFind >= WORTH);
@@ -131,7 +123,9 @@ export function CheckPlan({
     const onKey = (e: KeyboardEvent) => {
       if (!e.altKey || e.ctrlKey || e.metaKey || e.code !== "KeyN") return;
       const first = list.current?.querySelector<HTMLElement>("[data-step]");
-      if (first) (e.preventDefault(), first.focus());
+      if (!first) return;
+      e.preventDefault();
+      first.focus();
     };
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
@@ -182,6 +176,8 @@ export function CheckPlan({
         <kbd>Alt</kbd>+<kbd>N</kbd> next check · <kbd>↑</kbd>/<kbd>↓</kbd> move · <kbd>P</kbd> or <kbd>F</kbd>{" "}
         then <kbd>Enter</kbd> records passed or a fault · <kbd>Enter</kbd> type a reading
       </p>
+      {/* The plan's keys (arrows, P, F, Enter) act on the focused step; every step is focusable. */}
+      {/* eslint-disable-next-line jsx-a11y/no-noninteractive-element-interactions */}
       <ol
         ref={list}
         className="mt-3 grid gap-3"
@@ -197,7 +193,6 @@ export function CheckPlan({
             folded={!isOpen(s.checkId) && !errorFor(s.checkId)}
             onOpen={() => open(s.checkId)}
             currency={currency}
-            units={units}
             record={record}
             busy={busy}
             error={errorFor(s.checkId)}
@@ -251,14 +246,13 @@ type StepProps = {
   folded: boolean;
   onOpen: () => void;
   currency: string;
-  units: UnitSystem;
   record: RecordResult;
   busy: boolean;
   error: string | null;
   armed: Result | null;
 };
 
-function PlanStep({ step, first, folded, onOpen, currency, units, record, busy, error, armed }: StepProps) {
+function PlanStep({ step, first, folded, onOpen, currency, record, busy, error, armed }: StepProps) {
   const [reading, setReading] = useState("");
   const errorId = useId();
   const limit = step.limit;
@@ -271,6 +265,8 @@ function PlanStep({ step, first, folded, onOpen, currency, units, record, busy, 
     return (
       <li
         data-step={step.checkId}
+        // A step takes the focus so that P or F then Enter is aimed at it and at nothing else.
+        // eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex
         tabIndex={0}
         aria-label={step.name}
         className="flex flex-wrap items-center justify-between gap-2 rounded-lg border border-rule p-3 outline-offset-2"
@@ -288,6 +284,7 @@ function PlanStep({ step, first, folded, onOpen, currency, units, record, busy, 
   return (
     <li
       data-step={step.checkId}
+      // eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex -- as above: the step is the target
       tabIndex={0}
       aria-label={step.name}
       className={`rounded-lg border p-3 outline-offset-2 ${first ? "border-uv-500 bg-uv-50" : "border-rule"}`}

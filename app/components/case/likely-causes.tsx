@@ -1,4 +1,4 @@
-import { useEffect, useRef } from "react";
+import { useState } from "react";
 import type { ShownCause } from "~/cases/present-diagnosis";
 import { WHY_CAUSES } from "~/cases/shown";
 import { Fold } from "../fold";
@@ -8,18 +8,21 @@ import { PriorityMark } from "../priority";
 // The causes shown with their "why" are exactly those the server sends it for.
 const SHOWN = WHY_CAUSES;
 
+function movedBetween(before: ShownCause[], after: ShownCause[]): Set<string> {
+  const was = new Map(before.map((c) => [c.id, c.probability]));
+  return new Set(
+    after.filter((c) => Math.abs((was.get(c.id) ?? c.probability) - c.probability) > 0.005).map((c) => c.id),
+  );
+}
+
 /** Likely causes as bars of their share; "not in the knowledge base" always has its own bar. */
 export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlisted: number }) {
-  // Remember the last shares so a bar that moved can flash once: the user sees what changed.
-  const last = useRef(new Map<string, number>());
-  const moved = new Set(
-    causes
-      .filter((c) => Math.abs((last.current.get(c.id) ?? c.probability) - c.probability) > 0.005)
-      .map((c) => c.id),
-  );
-  useEffect(() => {
-    last.current = new Map(causes.map((c) => [c.id, c.probability]));
-  });
+  // Compare with the shares of the last ranking so a bar that moved can pulse: the user sees what
+  // changed. Kept in state and updated while rendering (React's pattern for "the previous value").
+  const [seen, setSeen] = useState({ causes, moved: new Set<string>(), round: 0 });
+  if (seen.causes !== causes)
+    setSeen({ causes, moved: movedBetween(seen.causes, causes), round: seen.round + 1 });
+  const moved = seen.moved;
   const top = causes.slice(0, SHOWN);
   const rest = causes.slice(SHOWN).filter((c) => c.probability >= 0.001);
   return (
@@ -29,7 +32,13 @@ export function LikelyCauses({ causes, unlisted }: { causes: ShownCause[]; unlis
       </h2>
       <ol className="mt-3 grid gap-3" aria-label="Likely causes, most likely first">
         {top.map((c, i) => (
-          <CauseRow key={c.id} cause={c} rank={i + 1} moved={moved.has(c.id)} open={i === 0} />
+          <CauseRow
+            key={c.id}
+            cause={c}
+            rank={i + 1}
+            moved={moved.has(c.id) ? seen.round : 0}
+            open={i === 0}
+          />
         ))}
       </ol>
       {rest.length ? (
@@ -62,12 +71,13 @@ function Bar({
   label,
   value,
   muted = false,
-  moved = false,
+  moved = 0,
 }: {
   label: string;
   value: number;
   muted?: boolean;
-  moved?: boolean;
+  /** The ranking round in which this bar's share changed, 0 if it did not: a new round replays the pulse. */
+  moved?: number;
 }) {
   return (
     <div>
@@ -76,7 +86,8 @@ function Bar({
         <span className="tabular font-semibold">{formatPercent(value)}</span>
       </div>
       <div
-        className={`mt-1 h-3 rounded-full bg-data-soft ${moved ? "motion-safe:animate-pulse" : ""}`}
+        key={moved}
+        className={`mt-1 h-3 rounded-full bg-data-soft ${moved ? "motion-safe:animate-moved" : ""}`}
         aria-hidden="true"
       >
         <div
@@ -96,12 +107,12 @@ function CauseRow({
 }: {
   cause: ShownCause;
   rank: number;
-  moved: boolean;
+  moved: number;
   open: boolean;
 }) {
   const max = Math.max(1, ...cause.why.map((w) => Math.abs(w.weight)));
   return (
-    <li data-cause={cause.name} data-moved={moved || undefined}>
+    <li data-cause={cause.name} data-moved={moved ? true : undefined}>
       <Bar label={`${rank}. ${cause.name}`} value={cause.probability} moved={moved} />
       <Fold
         open={open}

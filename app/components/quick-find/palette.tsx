@@ -3,7 +3,7 @@
 // index builder until someone wants them. cmdk draws the list and handles the arrow keys; ranking
 // is ours (app/quick-find), so cmdk's own filter is off.
 import { Command } from "cmdk";
-import { type RefObject, useCallback, useEffect, useMemo, useState } from "react";
+import { type RefObject, useCallback, useLayoutEffect, useMemo, useState } from "react";
 import {
   type Entry,
   type EntryKind,
@@ -39,8 +39,8 @@ type PaletteProps = QuickFindProps & {
   open: boolean;
   onOpenChange: (open: boolean) => void;
   inputRef: RefObject<HTMLInputElement | null>;
-  /** What was typed while the palette's code was loading; taken over (and emptied) once it is here. */
-  typedAhead: RefObject<string>;
+  /** What was typed while the palette's code was loading: the box starts with it. */
+  typedAhead: string;
   onReady: () => void;
 };
 
@@ -50,23 +50,26 @@ const GROUP =
 
 export default function QuickFindPalette(props: PaletteProps) {
   const { entries, cacheKey, recentIds, kinds, limit, onPick, placeholder, open, inputRef } = props;
-  const [query, setQuery] = useState("");
+  const { onOpenChange, onReady } = props;
   // The keys pressed between Ctrl+K and this code arriving belong in the box, not on the page.
-  useEffect(() => {
-    if (props.typedAhead.current) setQuery(props.typedAhead.current);
-    props.typedAhead.current = "";
+  const [query, setQuery] = useState(props.typedAhead);
+  // Before the first paint, so no key falls between the holder letting go and the box taking focus.
+  useLayoutEffect(() => {
     inputRef.current?.focus();
-    props.onReady();
-  }, []);
+    onReady();
+  }, [inputRef, onReady]);
   const [selection, setSelection] = useState<{ query: string; value: string } | null>(null);
   const [arrowed, setArrowed] = useState<string | null>(null); // the query the user moved the highlight in
   const [added, setAdded] = useState<string | null>(null);
   const setOpen = useCallback(
     (next: boolean) => {
-      if (!next) (setQuery(""), setAdded(null));
-      props.onOpenChange(next);
+      if (!next) {
+        setQuery("");
+        setAdded(null);
+      }
+      onOpenChange(next);
     },
-    [props.onOpenChange],
+    [onOpenChange],
   );
 
   // Mounted only once wanted: the index is built from the first open on.

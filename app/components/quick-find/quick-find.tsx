@@ -18,17 +18,21 @@ export function QuickFind(props: QuickFindProps) {
   const [wanted, setWanted] = useState(false); // mount (and load) nothing until first opened
   const input = useRef<HTMLInputElement | null>(null);
   const shortcut = useShortcutLabel();
-  const show = useCallback(() => (setWanted(true), setOpen(true)), []);
+  const show = useCallback(() => {
+    setWanted(true);
+    setOpen(true);
+  }, []);
   // Until the palette's code has loaded, the keys typed after Ctrl+K are kept here and handed to it,
   // so a fast typist loses nothing and nothing reaches the page.
-  const typedAhead = useRef("");
+  const [typedAhead, setTypedAhead] = useState("");
   const [ready, setReady] = useState(false);
+  const onReady = useCallback(() => setReady(true), []);
   useEffect(() => {
     if (!wanted || ready) return;
     const hold = (e: KeyboardEvent) => {
       if (e.ctrlKey || e.metaKey || e.altKey) return;
-      if (e.key.length === 1) typedAhead.current += e.key;
-      else if (e.key === "Backspace") typedAhead.current = typedAhead.current.slice(0, -1);
+      if (e.key.length === 1) setTypedAhead((t) => t + e.key);
+      else if (e.key === "Backspace") setTypedAhead((t) => t.slice(0, -1));
       else return;
       e.preventDefault();
       e.stopPropagation();
@@ -59,7 +63,7 @@ export function QuickFind(props: QuickFindProps) {
             onOpenChange={setOpen}
             inputRef={input}
             typedAhead={typedAhead}
-            onReady={() => setReady(true)}
+            onReady={onReady}
           />
         </Suspense>
       ) : null}

@@ -21,7 +21,6 @@ import { CaseQuickFind } from "~/components/case/case-quick-find";
 import { RouteErrorPage } from "~/components/error-page";
 import { dbContext } from "~/http/context";
 import { invalid, onForm, zodErrors } from "~/http/forms.server";
-import type { UnitSystem } from "~/domain/vehicles";
 import { quickFindKey } from "~/quick-find";
 import type { Route } from "./+types/workbench";
 
@@ -82,12 +81,12 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
   const [notice, setNotice] = useState<{ said: string; undo: Change | null } | null>(null);
   const dismiss = useCallback(() => setNotice(null), []);
   // A form post (conclude, sign-off) changes the case: refresh the live copy from the new loader data.
+  const { refetch } = query;
   useEffect(() => {
-    if (actionData?.notice) void query.refetch();
-  }, [actionData]);
+    if (actionData?.notice) void refetch();
+  }, [actionData, refetch]);
   const c = view.case;
   const d = view.diagnosis;
-  const units = c.workshop.units as UnitSystem;
   /** Every recording and removal says what it did and offers to take it back. */
   const change = (next: Change) => {
     const before = c;
@@ -163,7 +162,6 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
             <ApprenticeMode
               plan={d.plan}
               currency={c.workshop.currency}
-              units={units}
               record={record}
               busy={evidence.isPending}
               error={planError}
@@ -190,7 +188,6 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
               <CheckPlan
                 plan={d.plan}
                 currency={c.workshop.currency}
-                units={units}
                 record={record}
                 busy={evidence.isPending}
                 error={planError}

@@ -105,42 +105,36 @@ describe("data model", () => {
     const db = testDb();
     const [w] = await db.select({ id: workshops.id }).from(workshops).limit(1);
     await expect(
-      db
-        .insert(symptoms)
-        .values({
-          workshopId: w.id,
-          key: "bad-leak",
-          name: "Bad",
-          system: "brakes",
-          kind: "noise",
-          leak: 1.2,
-        }),
+      db.insert(symptoms).values({
+        workshopId: w.id,
+        key: "bad-leak",
+        name: "Bad",
+        system: "brakes",
+        kind: "noise",
+        leak: 1.2,
+      }),
     ).rejects.toMatchObject({ cause: { constraint: "symptoms_leak_range" } });
     await expect(
-      db
-        .insert(checks)
-        .values({
-          workshopId: w.id,
-          key: "bad-cost",
-          name: "Bad",
-          minutes: -5,
-          skill: "apprentice",
-          resultKind: "pass_fail",
-          falseAlarm: 0.1,
-        }),
+      db.insert(checks).values({
+        workshopId: w.id,
+        key: "bad-cost",
+        name: "Bad",
+        minutes: -5,
+        skill: "apprentice",
+        resultKind: "pass_fail",
+        falseAlarm: 0.1,
+      }),
     ).rejects.toMatchObject({ cause: { constraint: "checks_costs_nonneg" } });
     await expect(
-      db
-        .insert(checks)
-        .values({
-          workshopId: w.id,
-          key: "bad-rule",
-          name: "Bad",
-          minutes: 5,
-          skill: "apprentice",
-          resultKind: "measurement",
-          falseAlarm: 0.1,
-        }),
+      db.insert(checks).values({
+        workshopId: w.id,
+        key: "bad-rule",
+        name: "Bad",
+        minutes: 5,
+        skill: "apprentice",
+        resultKind: "measurement",
+        falseAlarm: 0.1,
+      }),
     ).rejects.toMatchObject({ cause: { constraint: "checks_measurement_rule" } });
   });
 });

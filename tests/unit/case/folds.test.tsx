@@ -69,7 +69,6 @@ describe("check plan", () => {
       <CheckPlan
         plan={plan([step(1, ["lifting"]), step(2, ["hot_parts"])])}
         currency="GBP"
-        units="metric"
         record={vi.fn()}
         busy={false}
         error={null}
@@ -96,7 +95,6 @@ describe("check plan", () => {
       <CheckPlan
         plan={plan([step(1), bare])}
         currency="GBP"
-        units="metric"
         record={vi.fn()}
         busy={false}
         error={null}

@@ -52,7 +52,6 @@ function renderPlan(steps: Step[], errorFor: (id: string) => string | null = () 
       <CheckPlan
         plan={plan(steps)}
         currency="GBP"
-        units="imperial"
         record={record}
         busy={false}
         error={null}

@@ -1,7 +1,7 @@
 // Several faults at once: after a cause is confirmed, the evidence it explains is set aside and
 // the rest is ranked as a second fault. Hand values by Bayes' rule (Russell & Norvig, AIMA ch. 13).
 import { describe, expect, it } from "vitest";
-import { rankCauses, rankSecondFault, ReasoningError, type Model } from "~/reasoning";
+import { rankCauses, rankSecondFault, type ReasoningError, type Model } from "~/reasoning";
 
 // A warped disc (A) and a worn wheel bearing (B) on one car, C an innocent third cause; equal priors.
 // s1 "judder under braking" shows with A .9; s2 "hum that rises with speed" with B .8 and with A
