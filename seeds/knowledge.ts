@@ -1,6 +1,6 @@
 import type { Db, Tx } from "../app/db/client.server";
 import { copyKnowledgeBase, saveTemplate, STARTER_TEMPLATE } from "../app/kb/copy.server";
-import { toDocument } from "../app/kb/document";
+import { toDocument } from "../app/domain/knowledge-document";
 import { seedId } from "./ids";
 import { starterKnowledgeBase } from "./kb";
 import type { KnowledgeBaseSeed } from "./kb/types";

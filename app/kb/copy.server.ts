@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import type { Db, Tx } from "~/db/client.server";
 import { causes, checkLinks, checks, kbTemplates, symptomLinks, symptoms } from "~/db/schema";
 import { refuse } from "~/http/errors.server";
-import type { KnowledgeDocument, KnowledgeItems } from "./document";
+import type { KnowledgeDocument, KnowledgeItems } from "~/domain/knowledge-document";
 
 export type KbItemKind = "symptom" | "cause" | "check";
 /** The row id an item gets in this workshop: random in the app, derived from the key by the seed. */

@@ -8,7 +8,7 @@ export type { Skill } from "../../app/domain/people";
 export { DRIVETRAINS, FUEL_TYPES } from "../../app/domain/vehicles";
 export type { Drivetrain, FuelType } from "../../app/domain/vehicles";
 
-// The seed shapes are the knowledge-base document's items (app/kb/document.ts).
+// The seed shapes are the knowledge-base document's items (app/domain/knowledge-document.ts).
 export type {
   CauseItem as CauseSeed,
   CheckItem as CheckSeed,
@@ -17,4 +17,4 @@ export type {
   KnowledgeItems as KnowledgeBaseSeed,
   SymptomItem as SymptomSeed,
   SymptomLinkItem as SymptomLinkSeed,
-} from "../../app/kb/document";
+} from "../../app/domain/knowledge-document";

@@ -3,7 +3,7 @@
 // index builder until someone wants them. cmdk draws the list and handles the arrow keys; ranking
 // is ours (app/quick-find), so cmdk's own filter is off.
 import { Command } from "cmdk";
-import { type RefObject, useCallback, useLayoutEffect, useMemo, useState } from "react";
+import { type RefObject, useCallback, useEffect, useMemo, useState } from "react";
 import {
   type Entry,
   type EntryKind,
@@ -39,8 +39,8 @@ type PaletteProps = QuickFindProps & {
   open: boolean;
   onOpenChange: (open: boolean) => void;
   inputRef: RefObject<HTMLInputElement | null>;
-  /** What was typed while the palette's code was loading: the box starts with it. */
-  typedAhead: string;
+  /** Hands over (and forgets) what was typed while the palette's code was loading. */
+  takeTypedAhead: () => string;
   onReady: () => void;
 };
 
@@ -50,14 +50,19 @@ const GROUP =
 
 export default function QuickFindPalette(props: PaletteProps) {
   const { entries, cacheKey, recentIds, kinds, limit, onPick, placeholder, open, inputRef } = props;
-  const { onOpenChange, onReady } = props;
-  // The keys pressed between Ctrl+K and this code arriving belong in the box, not on the page.
-  const [query, setQuery] = useState(props.typedAhead);
-  // Before the first paint, so no key falls between the holder letting go and the box taking focus.
-  useLayoutEffect(() => {
+  const { onOpenChange, onReady, takeTypedAhead } = props;
+  const [query, setQuery] = useState("");
+  // The keys pressed between Ctrl+K and this code arriving belong in the box, not on the page. They
+  // are taken once the dialog's input is on the page (after its portal mounts), then the holder
+  // lets go.
+  useEffect(() => {
+    const held = takeTypedAhead();
+    // Keys held by a window listener, outside React, handed over once: an effect is the place.
+    // eslint-disable-next-line react-hooks/set-state-in-effect
+    if (held) setQuery(held);
     inputRef.current?.focus();
     onReady();
-  }, [inputRef, onReady]);
+  }, [takeTypedAhead, inputRef, onReady]);
   const [selection, setSelection] = useState<{ query: string; value: string } | null>(null);
   const [arrowed, setArrowed] = useState<string | null>(null); // the query the user moved the highlight in
   const [added, setAdded] = useState<string | null>(null);

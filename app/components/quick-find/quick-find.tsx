@@ -24,15 +24,20 @@ export function QuickFind(props: QuickFindProps) {
   }, []);
   // Until the palette's code has loaded, the keys typed after Ctrl+K are kept here and handed to it,
   // so a fast typist loses nothing and nothing reaches the page.
-  const [typedAhead, setTypedAhead] = useState("");
+  const typedAhead = useRef("");
+  const takeTypedAhead = useCallback(() => {
+    const held = typedAhead.current;
+    typedAhead.current = "";
+    return held;
+  }, []);
   const [ready, setReady] = useState(false);
   const onReady = useCallback(() => setReady(true), []);
   useEffect(() => {
     if (!wanted || ready) return;
     const hold = (e: KeyboardEvent) => {
       if (e.ctrlKey || e.metaKey || e.altKey) return;
-      if (e.key.length === 1) setTypedAhead((t) => t + e.key);
-      else if (e.key === "Backspace") setTypedAhead((t) => t.slice(0, -1));
+      if (e.key.length === 1) typedAhead.current += e.key;
+      else if (e.key === "Backspace") typedAhead.current = typedAhead.current.slice(0, -1);
       else return;
       e.preventDefault();
       e.stopPropagation();
@@ -62,7 +67,7 @@ export function QuickFind(props: QuickFindProps) {
             open={open}
             onOpenChange={setOpen}
             inputRef={input}
-            typedAhead={typedAhead}
+            takeTypedAhead={takeTypedAhead}
             onReady={onReady}
           />
         </Suspense>

@@ -14,7 +14,7 @@ import {
   uuid,
 } from "drizzle-orm/pg-core";
 import type { Applicability } from "../../domain/knowledge";
-import type { KnowledgeDocument } from "../../kb/document";
+import type { KnowledgeDocument } from "../../domain/knowledge-document";
 import {
   causeLevelEnum,
   priorityEnum,
@@ -193,7 +193,7 @@ export const checkLinks = pgTable(
   ],
 );
 
-// Knowledge bases a new workshop can start from, as documents of our own format (app/kb/document.ts).
+// Knowledge bases a new workshop can start from, as documents of our own format (app/domain/knowledge-document.ts).
 // Not a workshop's row: the starter base is written here by the seed and copied at workshop creation.
 export const kbTemplates = pgTable("kb_templates", {
   key: text("key").primaryKey(), // "starter"

@@ -1,7 +1,7 @@
-// The knowledge-base document format (app/kb/document.ts): the starter base is a valid document,
+// The knowledge-base document format (app/domain/knowledge-document.ts): the starter base is a valid document,
 // and malformed items are refused with the item and the reason.
 import { describe, expect, it } from "vitest";
-import { KnowledgeDocumentSchema, toDocument } from "~/kb/document";
+import { KnowledgeDocumentSchema, toDocument } from "~/domain/knowledge-document";
 import { starterKnowledgeBase } from "../../../seeds/kb";
 
 const starter = toDocument("Starter", starterKnowledgeBase);
