@@ -1,7 +1,7 @@
 import { lazy, Suspense } from "react";
 import type { CaseView } from "~/cases/case-queries";
 import { Fold } from "../fold";
-import { FindingRow } from "./finding-row";
+import { FindingRow, RemoveButton } from "./finding-row";
 
 // A long case keeps its latest findings in view; the earlier ones open on request.
 // The view carries the latest findings; the earlier ones are read (and their code loaded) on opening.
@@ -39,15 +39,12 @@ export function EvidenceList({
                 {o.by ? `, ${o.by}` : ""})
               </span>
             </span>
-            {canWork && !o.id.startsWith("pending") ? (
-              <button
-                type="button"
-                onClick={() => remove("unobserve", o.id)}
-                className="btn-small"
-                aria-label={`Remove observation ${o.name}`}
-              >
-                Remove
-              </button>
+            {canWork ? (
+              <RemoveButton
+                id={o.id}
+                what={`observation ${o.name}`}
+                onRemove={() => remove("unobserve", o.id)}
+              />
             ) : null}
           </li>
         ))}

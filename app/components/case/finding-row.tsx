@@ -22,16 +22,19 @@ export function FindingRow({
         {`: ${f.name}${f.reading ? ` — ${f.reading}` : ""} `}
         <span className="meta tabular">{`${f.by ? `${f.by}, ` : ""}${formatDate(f.recordedAt)}`}</span>
       </span>
-      {canWork && !f.id.startsWith("pending") ? (
-        <button
-          type="button"
-          onClick={() => remove("unfind", f.id)}
-          className="btn-small"
-          aria-label={`Remove finding ${f.name}`}
-        >
-          Remove
-        </button>
+      {canWork ? (
+        <RemoveButton id={f.id} what={`finding ${f.name}`} onRemove={() => remove("unfind", f.id)} />
       ) : null}
     </li>
+  );
+}
+
+/** Takes a piece of evidence back; none for one still being recorded (its id is not the server's yet). */
+export function RemoveButton({ id, what, onRemove }: { id: string; what: string; onRemove: () => void }) {
+  if (id.startsWith("pending")) return null;
+  return (
+    <button type="button" onClick={onRemove} className="btn-small" aria-label={`Remove ${what}`}>
+      Remove
+    </button>
   );
 }
