@@ -99,7 +99,7 @@ function ensureBuild() {
 async function seedCase(databaseUrl: string) {
   const { db, pool } = createDb(databaseUrl, { max: 2 });
   try {
-    const { openCase } = await import("../../app/cases/workflow.server");
+    const { openCase } = await import("../../app/cases/open-case.server");
     const { loadAccount } = await import("../../app/auth/accounts.server");
     const { asMember } = await import("../../app/auth/guards.server");
     const member = asMember((await loadAccount(db, seedId("user:priya-hale")))!);

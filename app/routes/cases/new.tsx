@@ -1,7 +1,7 @@
 import { Form, href, redirect } from "react-router";
 import { z } from "zod";
 import { memberContext, requirePermission } from "~/auth/guards.server";
-import { openCase } from "~/cases/workflow.server";
+import { openCase } from "~/cases/open-case.server";
 import { dbContext } from "~/http/context";
 import { RouteErrorPage } from "~/components/error-page";
 import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";

@@ -8,7 +8,7 @@ import { createSession } from "~/auth/session.server";
 import { dbContext } from "~/http/context";
 import type { Db } from "~/db/client.server";
 import { auditLog, findings, observations } from "~/db/schema";
-import { openCase } from "~/cases/workflow.server";
+import { openCase } from "~/cases/open-case.server";
 import { guardRequest } from "~/http/request-guard.server";
 import { seedId } from "../../../seeds/ids";
 import { kbId } from "../../../seeds/knowledge";
@@ -134,7 +134,7 @@ export async function findingRow(db: Db, caseIdValue: string, check: string) {
   return row;
 }
 
-/** A fresh open case on a demo vehicle, assigned to whoever opens it (workflow.server's openCase). */
+/** A fresh open case on a demo vehicle, assigned to whoever opens it (open-case.server's openCase). */
 export async function freshCase(db: Db, login = "priya-hale", vehicle = "orlan-brisk") {
   const created = await openCase(db, await memberFor(db, login), {
     vehicleId: seedId(`vehicle:${vehicle}`),
