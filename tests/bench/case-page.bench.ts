@@ -22,6 +22,8 @@ const UNUSED = "http://127.0.0.1:4997"; // the server only validates the sign-in
 const CONNECTIONS = 20;
 const WARMUP_S = 3;
 const DURATION_S = 10;
+const PAIRED_ROUNDS = 5;
+const PAIRED_S = 4;
 // Targets, all relative to this machine in this run except the browser figures: the case page's
 // p99 at most 3× the trivial route's, its throughput at least 0.4× the trivial route's, the
 // document at most 50 KiB; in Chromium, keypress → re-ranked list painted ≤ 100 ms (median),
@@ -316,7 +318,11 @@ try {
     stock: ["node_modules/@react-router/serve/bin.js", "./build/server/index.js"],
   } as const;
   const start = async (args: readonly string[], extra: Record<string, string> = {}) => {
-    server = spawn(process.execPath, [...args], {
+    // RL_BENCH_PROFILE=dir writes a V8 CPU profile of each server into dir (open it in Chromium's DevTools).
+    const profile = process.env.RL_BENCH_PROFILE
+      ? ["--cpu-prof", `--cpu-prof-dir=${process.env.RL_BENCH_PROFILE}`]
+      : [];
+    server = spawn(process.execPath, [...profile, ...args], {
       env: { ...env, ...extra },
       stdio: ["ignore", "ignore", "pipe"],
     });
@@ -348,6 +354,22 @@ try {
   const trivial = await measure("landing page GET / (trivial)", "/", {});
   const casePage = await measure("case page GET /cases/:id (signed in)", casePath, signedIn);
   const caseApi = await measure("case API GET /api/cases/:id", `/api/cases/${seeded.caseId}`, signedIn);
+  // This machine's speed drifts by a third within minutes (other tenants), so one landing run and
+  // one case-page run a minute apart can disagree by that much. The throughput target is judged on
+  // paired rounds instead: the two routes back to back, several times, and the median ratio.
+  const rounds: number[] = [];
+  for (let i = 0; i < PAIRED_ROUNDS; i++) {
+    const a = await autocannon({ url: `${APP_URL}/`, connections: CONNECTIONS, duration: PAIRED_S });
+    const b = await autocannon({
+      url: `${APP_URL}${casePath}`,
+      connections: CONNECTIONS,
+      duration: PAIRED_S,
+      headers: signedIn,
+    });
+    rounds.push(b.requests.average / a.requests.average);
+  }
+  const sortedRounds = [...rounds].sort((x, y) => x - y);
+  const pairedRatio = sortedRounds[Math.floor(sortedRounds.length / 2)];
   // One connection: the time one request takes with nobody queueing ahead of it.
   const serial = await measure("case page, 1 connection (service time)", casePath, signedIn, 1, 5);
   const browserLines = await inBrowser(seeded, mark);
@@ -371,13 +393,15 @@ try {
     console.log(
       `${pad(r.name, 42)} ${pad(String(r.p50), 8)} ${pad(String(r.p99), 8)} ${pad(r.rps.toFixed(0), 10)} ${r.bad}`,
     );
-  const ratio = casePage.rps / trivial.rps;
-  console.log(`case page throughput / trivial: ${ratio.toFixed(2)}×`);
+  const ratio = pairedRatio;
+  console.log(
+    `case page throughput / trivial: ${(casePage.rps / trivial.rps).toFixed(2)}× in the runs above; in ${PAIRED_ROUNDS} paired rounds of ${PAIRED_S} s each: ${rounds.map((r) => r.toFixed(2)).join(", ")} (median ${ratio.toFixed(2)}×)`,
+  );
   console.log(
     `target case page p99 ≤ ${TARGET_P99_TIMES}× the trivial route's (${trivial.p99} ms → ${TARGET_P99_TIMES * trivial.p99} ms): ${casePage.p99} ms — ${mark(casePage.p99 <= TARGET_P99_TIMES * trivial.p99)}`,
   );
   console.log(
-    `target case page throughput ≥ ${TARGET_RATIO}× trivial: ${ratio.toFixed(2)}× — ${mark(ratio >= TARGET_RATIO)}`,
+    `target case page throughput ≥ ${TARGET_RATIO}× trivial (median of the paired rounds): ${ratio.toFixed(2)}× — ${mark(ratio >= TARGET_RATIO)}`,
   );
   console.log(
     `target case page document ≤ ${TARGET_DOC_KIB} KiB: ${(pageBytes / 1024).toFixed(1)} KiB — ${mark(pageBytes <= TARGET_DOC_KIB * 1024)}`,

@@ -46,41 +46,60 @@ type StepProps = {
 
 export function PlanStep({ step, first, folded, onOpen, currency, record, busy, error, armed }: StepProps) {
   const [reading, setReading] = useState("");
-  const errorId = useId();
-  const limit = step.limit;
-  // A check opened from the folded part of the plan came without its steps: read them now.
-  const details = useQuery({ ...checkQuery(step.checkId), enabled: !folded && !step.detailed });
-  const instructions = step.detailed ? step.instructions : (details.data?.instructions ?? []);
-  const failMeans = step.detailed ? step.failMeans : (details.data?.failMeans ?? "");
   // One <li> folded or open, so opening it from the keyboard keeps the focus where it was.
-  if (folded) {
-    return (
-      <li
-        data-step={step.checkId}
-        // A step takes the focus so that P or F then Enter is aimed at it and at nothing else.
-        // eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex
-        tabIndex={0}
-        aria-label={step.name}
-        className="flex flex-wrap items-center justify-between gap-2 rounded-lg border border-rule p-3 outline-offset-2"
-      >
-        <span>
-          <span className="font-semibold">{step.name}</span>
-          <span className="meta tabular block">{`${formatPercent(step.pFind)} to find it · ${step.minutes} min · ${formatMoney(step.cost, currency)}${step.cautions.length ? " · needs care" : ""}`}</span>
-        </span>
-        <button type="button" className="btn" onClick={onOpen} aria-label={`Open ${step.name}`}>
-          Open
-        </button>
-      </li>
-    );
-  }
   return (
     <li
       data-step={step.checkId}
-      // eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex -- as above: the step is the target
+      // A step takes the focus so that P or F then Enter is aimed at it and at nothing else.
+      // eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex
       tabIndex={0}
       aria-label={step.name}
-      className={`rounded-lg border p-3 outline-offset-2 ${first ? "border-uv-500 bg-uv-50" : "border-rule"}`}
+      className={
+        folded
+          ? "flex flex-wrap items-center justify-between gap-2 rounded-lg border border-rule p-3 outline-offset-2"
+          : `rounded-lg border p-3 outline-offset-2 ${first ? "border-uv-500 bg-uv-50" : "border-rule"}`
+      }
     >
+      {folded ? (
+        <>
+          <span>
+            <span className="font-semibold">{step.name}</span>
+            <span className="meta tabular block">{`${formatPercent(step.pFind)} to find it · ${step.minutes} min · ${formatMoney(step.cost, currency)}${step.cautions.length ? " · needs care" : ""}`}</span>
+          </span>
+          <button type="button" className="btn" onClick={onOpen} aria-label={`Open ${step.name}`}>
+            Open
+          </button>
+        </>
+      ) : (
+        <OpenStep {...{ step, first, currency, record, busy, error, armed, reading, setReading }} />
+      )}
+    </li>
+  );
+}
+
+/**
+ * An open step's body. Only open steps read the check's details (a folded one shows a line), so a
+ * page of folded steps costs no query observers while rendering.
+ */
+function OpenStep({
+  step,
+  first,
+  currency,
+  record,
+  busy,
+  error,
+  armed,
+  reading,
+  setReading,
+}: Omit<StepProps, "folded" | "onOpen"> & { reading: string; setReading: (r: string) => void }) {
+  const errorId = useId();
+  const limit = step.limit;
+  // A check opened from the folded part of the plan came without its steps: read them now.
+  const details = useQuery({ ...checkQuery(step.checkId), enabled: !step.detailed });
+  const instructions = step.detailed ? step.instructions : (details.data?.instructions ?? []);
+  const failMeans = step.detailed ? step.failMeans : (details.data?.failMeans ?? "");
+  return (
+    <>
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h3 className="font-semibold">
           {first ? "Next: " : ""}
@@ -164,6 +183,6 @@ export function PlanStep({ step, first, folded, onOpen, currency, record, busy, 
         </p>
       ) : null}
       {failMeans ? <p className="meta mt-1">{`A fail means: ${failMeans}`}</p> : null}
-    </li>
+    </>
   );
 }
