@@ -110,6 +110,20 @@ export const CAUTIONS = [
 ] as const;
 export type Caution = (typeof CAUTIONS)[number];
 
+/** A caution's name in a sentence ("its work calls for a caution: hot parts"). */
+export const CAUTION_LABEL: Record<Caution, string> = {
+  lifting: "lifting",
+  hot_parts: "hot parts",
+  fuel: "fuel",
+  brake_hydraulics: "brake hydraulics",
+  airbag: "airbags",
+  high_voltage: "high voltage",
+  rotating_parts: "rotating parts",
+  pressurised_cooling: "cooling system under pressure",
+  exhaust_fumes: "exhaust fumes",
+  battery_acid: "battery acid",
+};
+
 // Shown with every check that carries the caution, in a form that cannot be missed. They point to
 // the maker's procedure and local rules: Ramplight suggests; a qualified person decides.
 export const CAUTION_TEXT: Record<Caution, string> = {

@@ -1,5 +1,6 @@
 import { randomUUID } from "node:crypto";
-import { eq } from "drizzle-orm";
+import { eq, getTableColumns, type SQL, sql } from "drizzle-orm";
+import type { PgTable } from "drizzle-orm/pg-core";
 import type { Db, Tx } from "~/db/client.server";
 import { causes, checkLinks, checks, kbTemplates, symptomLinks, symptoms } from "~/db/schema";
 import { refuse } from "~/http/errors.server";
@@ -12,14 +13,17 @@ export type IdFor = (kind: KbItemKind, key: string) => string;
 const randomIds: IdFor = () => randomUUID();
 
 /**
- * Copies a knowledge base into one workshop's own tables, in the caller's transaction. Rows that
- * exist already are left as they are, so a senior's curation survives a re-seed.
+ * Copies a knowledge base into one workshop's own tables, in the caller's transaction. By default
+ * rows that exist already are left as they are, so a senior's curation survives a re-seed; an
+ * import passes `onExisting: "update"`, and the document's version of an item replaces the row of
+ * the same key (its id, and so every case that refers to it, stays).
  */
 export async function copyKnowledgeBase(
   tx: Tx,
   workshopId: string,
   kb: KnowledgeItems,
   idFor: IdFor = randomIds,
+  onExisting: "keep" | "update" = "keep",
 ) {
   // One id per key, however often the key is named by links.
   const ids = new Map<string, string>();
@@ -29,76 +33,110 @@ export async function copyKnowledgeBase(
     if (!v) ids.set(k, (v = idFor(kind, key)));
     return v;
   };
+  const update = onExisting === "update";
   if (kb.symptoms.length) {
-    await tx
+    const q = tx
       .insert(symptoms)
       // code: the DTC itself for trouble-code symptoms, null for the rest.
-      .values(kb.symptoms.map((s) => ({ ...s, id: id("symptom", s.key), workshopId, code: s.code ?? null })))
-      .onConflictDoNothing();
+      .values(
+        kb.symptoms.map((s) => ({
+          ...s,
+          id: id("symptom", s.key),
+          workshopId,
+          code: s.code ?? null,
+          unlisted: s.unlisted ?? null,
+        })),
+      );
+    await (update
+      ? q.onConflictDoUpdate({ target: [symptoms.workshopId, symptoms.key], set: replaced(symptoms) })
+      : q.onConflictDoNothing());
   }
   // Parents before children: the tree's foreign key needs them in that order.
   for (const level of ["system", "component", "failure_mode"] as const) {
     const rows = kb.causes.filter((c) => c.level === level);
     if (rows.length === 0) continue;
-    await tx
-      .insert(causes)
-      .values(
-        rows.map(({ parentKey, applicability, ...c }) => ({
-          ...c,
-          id: id("cause", c.key),
-          workshopId,
-          parentId: parentKey ? id("cause", parentKey) : null,
-          applicability: applicability ?? {},
-          // The owner summary's plain words: required on failure modes, empty on tree nodes.
-          ownerDescription: c.ownerDescription ?? "",
-          ifLeft: c.ifLeft ?? "",
-        })),
-      )
-      .onConflictDoNothing();
+    const q = tx.insert(causes).values(
+      rows.map(({ parentKey, applicability, ...c }) => ({
+        ...c,
+        id: id("cause", c.key),
+        workshopId,
+        parentId: parentKey ? id("cause", parentKey) : null,
+        applicability: applicability ?? {},
+        // The owner summary's plain words: required on failure modes, empty on tree nodes.
+        ownerDescription: c.ownerDescription ?? "",
+        ifLeft: c.ifLeft ?? "",
+        baseRate: c.baseRate ?? null,
+        repairMinutes: c.repairMinutes ?? null,
+        partsCost: c.partsCost ?? null,
+        priority: c.priority ?? null,
+      })),
+    );
+    await (update
+      ? q.onConflictDoUpdate({ target: [causes.workshopId, causes.key], set: replaced(causes) })
+      : q.onConflictDoNothing());
   }
   if (kb.checks.length) {
-    await tx
-      .insert(checks)
-      .values(
-        kb.checks.map(({ result, ...c }) => ({
-          ...c,
-          id: id("check", c.key),
-          workshopId,
-          resultKind: result.kind,
-          quantity: result.kind === "measurement" ? result.quantity : null,
-          unit: result.kind === "measurement" ? result.unit : null,
-          rule: result.kind === "measurement" ? result.rule : null,
-          failMeans: result.failMeans,
-        })),
-      )
-      .onConflictDoNothing();
+    const q = tx.insert(checks).values(
+      kb.checks.map(({ result, ...c }) => ({
+        ...c,
+        id: id("check", c.key),
+        workshopId,
+        resultKind: result.kind,
+        quantity: result.kind === "measurement" ? result.quantity : null,
+        unit: result.kind === "measurement" ? result.unit : null,
+        rule: result.kind === "measurement" ? result.rule : null,
+        gradeScale: result.kind === "measurement" ? (result.gradeScale ?? null) : null,
+        failMeans: result.failMeans,
+      })),
+    );
+    await (update
+      ? q.onConflictDoUpdate({ target: [checks.workshopId, checks.key], set: replaced(checks) })
+      : q.onConflictDoNothing());
   }
   if (kb.symptomLinks.length) {
-    await tx
-      .insert(symptomLinks)
-      .values(
-        kb.symptomLinks.map((l) => ({
-          workshopId,
-          symptomId: id("symptom", l.symptom),
-          causeId: id("cause", l.cause),
-          p: l.p,
-        })),
-      )
-      .onConflictDoNothing();
+    const q = tx.insert(symptomLinks).values(
+      kb.symptomLinks.map((l) => ({
+        workshopId,
+        symptomId: id("symptom", l.symptom),
+        causeId: id("cause", l.cause),
+        p: l.p,
+        when: l.when ?? [],
+      })),
+    );
+    await (update
+      ? q.onConflictDoUpdate({
+          target: [symptomLinks.symptomId, symptomLinks.causeId],
+          set: replaced(symptomLinks),
+        })
+      : q.onConflictDoNothing());
   }
   if (kb.checkLinks.length) {
-    await tx
-      .insert(checkLinks)
-      .values(
-        kb.checkLinks.map((l) => ({
-          workshopId,
-          checkId: id("check", l.check),
-          causeId: id("cause", l.cause),
-          pFail: l.pFail,
-        })),
-      )
-      .onConflictDoNothing();
+    const q = tx.insert(checkLinks).values(
+      kb.checkLinks.map((l) => ({
+        workshopId,
+        checkId: id("check", l.check),
+        causeId: id("cause", l.cause),
+        pFail: l.pFail,
+        graded: l.graded ?? null,
+      })),
+    );
+    await (update
+      ? q.onConflictDoUpdate({
+          target: [checkLinks.checkId, checkLinks.causeId],
+          set: replaced(checkLinks),
+        })
+      : q.onConflictDoNothing());
   }
+}
+
+// The columns an import replaces on a row of the same key: everything but its identity and birth.
+const KEEP = new Set(["id", "workshop_id", "key", "created_at", "symptom_id", "cause_id", "check_id"]);
+function replaced(table: PgTable) {
+  const set: Record<string, SQL> = {};
+  for (const [field, column] of Object.entries(getTableColumns(table)))
+    if (!KEEP.has(column.name))
+      set[field] = column.name === "updated_at" ? sql`now()` : sql.raw(`excluded."${column.name}"`);
+  return set;
 }
 
 /** The knowledge base a new workshop starts from: written by the seed (seeds/run.ts). */

@@ -15,6 +15,7 @@ import {
 } from "drizzle-orm/pg-core";
 import type { Applicability } from "../../domain/knowledge";
 import type { KnowledgeDocument } from "../../domain/knowledge-document";
+import type { BandFigures } from "../../domain/readings";
 import {
   causeLevelEnum,
   priorityEnum,
@@ -51,12 +52,18 @@ export const symptoms = pgTable(
       .notNull()
       .default(sql`'{}'::text[]`),
     leak: doublePrecision("leak").notNull(),
+    // P(symptom | the fault is not in the knowledge base), where it differs from the engine's default.
+    unlisted: doublePrecision("unlisted"),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
   (t) => [
     unique("symptoms_workshop_key").on(t.workshopId, t.key),
     probability("symptoms_leak_range", t.leak),
+    check(
+      "symptoms_unlisted_range",
+      sql`${t.unlisted} is null or (${t.unlisted} >= 0 and ${t.unlisted} <= 1)`,
+    ),
   ],
 );
 
@@ -134,6 +141,7 @@ export const checks = pgTable(
     unit: text("unit"),
     rule: text("rule"), // a mathjs comparison over `value`, true when the reading passes
     failMeans: text("fail_means").notNull().default(""),
+    gradeScale: text("grade_scale"), // measurements: the distance from the limit that counts as one whole miss
     falseAlarm: doublePrecision("false_alarm").notNull(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
@@ -162,6 +170,11 @@ export const symptomLinks = pgTable(
       .notNull()
       .references(() => causes.id, { onDelete: "cascade" }),
     p: doublePrecision("p").notNull(),
+    // The conditions under which the cause shows this symptom at all ("under braking"); empty: always.
+    when: text("when")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
   },
   (t) => [
     primaryKey({ columns: [t.symptomId, t.causeId] }),
@@ -184,6 +197,8 @@ export const checkLinks = pgTable(
       .notNull()
       .references(() => causes.id, { onDelete: "cascade" }),
     pFail: doublePrecision("p_fail").notNull(),
+    // A measurement's reading graded in four bands (docs/reasoning.md); null: pass or fail only.
+    graded: jsonb("graded").$type<BandFigures>(),
   },
   (t) => [
     primaryKey({ columns: [t.checkId, t.causeId] }),

@@ -4,6 +4,7 @@ import { readdirSync, readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { all, create, type MathNode } from "mathjs";
 import { describe, expect, it } from "vitest";
+import { HAZARD_WORDS, missingCautions } from "~/domain/hazards";
 import { parseDtc } from "../../../app/measure/dtc";
 import { starterKnowledgeBase as kb } from "../../../seeds/kb/index";
 import {
@@ -507,6 +508,11 @@ describe("symptoms and checks", () => {
 });
 
 describe("safety cautions", () => {
+  it("leaves no check without a caution its work calls for (the rule the editor and the import apply)", () => {
+    const lacking = kb.checks.filter((c) => missingCautions(c).length > 0).map((c) => c.key);
+    expect(lacking).toEqual([]);
+  });
+
   it("puts 'lifting' on every check that uses the ramp or takes wheels off", () => {
     for (const c of kb.checks.filter((x) => x.access.includes("ramp") || x.access.includes("wheels_off"))) {
       expect(c.cautions, c.key).toContain("lifting");
@@ -514,21 +520,7 @@ describe("safety cautions", () => {
   });
 
   // Word rules: what the check makes the technician do (its name and steps) decides its cautions.
-  const HAZARD_WORDS: [Caution, RegExp][] = [
-    ["lifting", /\bramp\b|\bjack(ed)?\b|axle stands?|lifting points?/i],
-    ["brake_hydraulics", /bleed|brake fluid|brake pipe|brake line/i],
-    [
-      "fuel",
-      /fuel (line|pipe|rail|pump|filter|pressure|system|work|tank)|(unplug|remove|disconnect|open|fit)[^.]{0,40}injector|injector (pipe|seal|return|coil)|back-leak|water trap/i,
-    ],
-    [
-      "hot_parts",
-      /\bhot\b|warm engine|fully warm|working temperature|exhaust (manifold|pipe|system|joint|parts)|tailpipe|\bcatalyst\b|\bturbo\b/i,
-    ],
-    ["airbag", /airbag|clock.spring|yellow plugs?|belt.tensioner/i],
-    ["high_voltage", /high.voltage|hybrid|orange cable|gas-discharge/i],
-    ["battery_acid", /battery (post|terminal|clamp|lead)s?|battery work/i],
-  ];
+  // The word rules live in app/domain/hazards.ts, which the editor and the import use too.
   for (const [caution, words] of HAZARD_WORDS) {
     it(`puts '${caution}' on every check whose steps involve it (${words.source.slice(0, 40)}…)`, () => {
       const hits = kb.checks.filter((c) => words.test(doing(c)));
