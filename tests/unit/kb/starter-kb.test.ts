@@ -9,7 +9,6 @@ import { parseDtc } from "../../../app/measure/dtc";
 import { starterKnowledgeBase as kb } from "../../../seeds/kb/index";
 import {
   ACCESS,
-  type Caution,
   CAUTIONS,
   type CauseSeed,
   type CheckSeed,
