@@ -13,6 +13,8 @@ export default [
     route("cases/new", "routes/cases/new.tsx"),
     route("cases/:caseId", "routes/cases/workbench.tsx"),
     route("kb", "routes/kb/overview.tsx"),
+    route("kb/export", "routes/kb/export.ts"),
+    route("kb/transfer", "routes/kb/transfer.tsx"),
     route("settings", "routes/settings/workshop.tsx"),
     route("settings/members", "routes/settings/members.tsx"),
     route("settings/audit", "routes/settings/audit.tsx"),

@@ -54,6 +54,24 @@ function settingsChange(before: Fields, after: Fields): string {
   return `changed the workshop's ${changed.map((k) => SETTING_WORDS[k](after[k])).join(", ")}`;
 }
 
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
+
+/** "imported the knowledge base “X” (version 4): 2 symptoms added, 219 updated; …". */
+function importSentence(a: Fields): string {
+  const counts = obj(a.counts);
+  const part = (k: string, word: string) => {
+    const c = obj(counts[k]);
+    const added = Number(c.added ?? 0);
+    const updated = Number(c.updated ?? 0);
+    return `${plural(added, word)} added, ${updated} updated`;
+  };
+  return `imported the knowledge base${quoted(a.name)}${a.kbVersion ? ` as version ${a.kbVersion}` : ""}: ${[
+    part("symptoms", "symptom"),
+    part("causes", "cause"),
+    part("checks", "check"),
+  ].join("; ")}`;
+}
+
 // Each action's sentence; entries of actions not listed read as their code, never as raw JSON.
 const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = {
   "case.open": (a) => `opened the case${quoted(a.complaint)}`,
@@ -72,6 +90,7 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
   "case.reopen": (a, b) => `reopened it (it was ${STATE[String(b.state)] ?? b.state})${quoted(a.reason)}`,
   "case.close": () => "closed the case",
   "settings.update": (a, b) => settingsChange(b, a),
+  "kb.import": (a) => importSentence(a),
   "workshop.create": (a) => `created the workshop ${a.name ?? ""}`.trim(),
   "member.invite": (a, _b, s) =>
     `invited ${s.invitee ?? a.email ?? a.githubLogin ?? "someone"} as ${role(a.role)}`,
@@ -99,5 +118,6 @@ export function describeAudit(entry: AuditLine): Described {
   if (entry.action.startsWith("member."))
     return { text, href: href("/settings/members"), linkText: "members" };
   if (entry.action === "settings.update") return { text, href: href("/settings"), linkText: "settings" };
+  if (entry.action.startsWith("kb.")) return { text, href: href("/kb"), linkText: "knowledge base" };
   return { text, href: null, linkText: null };
 }

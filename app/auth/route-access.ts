@@ -28,6 +28,8 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/board/board.tsx": { path: "/board", GET: "case:read" },
   "routes/cases/list.tsx": { path: "/cases", GET: "case:read" },
   "routes/kb/overview.tsx": { path: "/kb", GET: "kb:read" },
+  "routes/kb/export.ts": { path: "/kb/export", GET: "kb:read" },
+  "routes/kb/transfer.tsx": { path: "/kb/transfer", GET: "kb:edit", POST: "kb:edit" },
   "routes/settings/workshop.tsx": { path: "/settings", GET: "member", POST: "settings:manage" },
   "routes/settings/members.tsx": {
     path: "/settings/members",

@@ -52,6 +52,7 @@ export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
   admin: [
     "case:read",
     "kb:read",
+    "kb:edit",
     "member:manage",
     "settings:manage",
     "audit:read",

@@ -13,7 +13,11 @@ export const API_RULE: BodyRule = { kind: "json", maxBytes: 16 * KiB };
 /** A what-if model: a whole knowledge base of the size a screen shows (see app/routes/api/what-if.ts). */
 export const WHAT_IF_RULE: BodyRule = { kind: "json", maxBytes: 1024 * KiB };
 
+/** A whole knowledge base as a file: the starter base exports to well under 1 MB. */
+export const KB_IMPORT_RULE: BodyRule = { kind: "form", maxBytes: 8 * 1024 * KiB };
+
 const BY_PATH: [RegExp, BodyRule][] = [
+  [/^\/kb\/transfer(\.data)?$/, KB_IMPORT_RULE],
   [/^\/api\/what-if$/, WHAT_IF_RULE],
   [/^\/api\//, API_RULE],
 ];

@@ -1,6 +1,6 @@
 import { asc, count, eq } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
-import { causes, checkLinks, checks, symptomLinks, symptoms } from "~/db/schema";
+import { causes, checkLinks, checks, symptomLinks, symptoms, workshops } from "~/db/schema";
 
 /** The knowledge base at a glance: counts, and the systems with their failure-mode counts. */
 export async function kbOverview(db: Db, workshopId: string) {
@@ -38,4 +38,23 @@ export async function kbOverview(db: Db, workshopId: string) {
     tree,
     symptoms: symptomList,
   };
+}
+
+/** How many items of each kind the workshop's knowledge base holds, and its version. */
+export async function kbCounts(db: Db, workshopId: string) {
+  const n = (t: typeof symptoms | typeof causes | typeof checks | typeof symptomLinks | typeof checkLinks) =>
+    db
+      .select({ n: count() })
+      .from(t)
+      .where(eq(t.workshopId, workshopId))
+      .then(([r]) => r.n);
+  const [s, c, k, sl, cl, [w]] = await Promise.all([
+    n(symptoms),
+    n(causes),
+    n(checks),
+    n(symptomLinks),
+    n(checkLinks),
+    db.select({ v: workshops.kbVersion }).from(workshops).where(eq(workshops.id, workshopId)),
+  ]);
+  return { symptoms: s, causes: c, checks: k, symptomLinks: sl, checkLinks: cl, kbVersion: w?.v ?? 0 };
 }

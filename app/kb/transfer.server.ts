@@ -130,21 +130,37 @@ export function problemsOf(raw: unknown): { doc: KnowledgeDocument | null; probl
   const parsed = KnowledgeDocumentSchema.safeParse(raw);
   if (!parsed.success) {
     const items = (raw ?? {}) as Record<string, { key?: unknown }[] | undefined>;
-    return {
-      doc: null,
-      problems: parsed.error.issues.map((i) => {
-        const [list, index, ...rest] = i.path;
-        const item = typeof list === "string" && typeof index === "number" ? items[list]?.[index] : undefined;
-        const where =
-          typeof list === "string" && typeof index === "number"
-            ? `${list}.${index}${typeof item?.key === "string" ? ` (${item.key})` : ""}${rest.length ? `.${rest.join(".")}` : ""}`
-            : i.path.join(".") || "the document";
-        return { where, message: i.message };
-      }),
-    };
+    const shape = parsed.error.issues.map((i) => {
+      const [list, index, ...rest] = i.path;
+      const item = typeof list === "string" && typeof index === "number" ? items[list]?.[index] : undefined;
+      const where =
+        typeof list === "string" && typeof index === "number"
+          ? `${list}.${index}${typeof item?.key === "string" ? ` (${item.key})` : ""}${rest.length ? `.${rest.join(".")}` : ""}`
+          : i.path.join(".") || "the document";
+      return { where, message: i.message };
+    });
+    return { doc: null, problems: [...shape, ...acrossItems(raw, shape)] };
   }
   const doc = parsed.data as KnowledgeDocument;
   return { doc, problems: documentProblems(doc) };
+}
+
+/**
+ * The rules across items, tried on a document whose shape is wrong somewhere, so one pass names
+ * every problem; an item too malformed for them to read is already named by its shape.
+ */
+function acrossItems(raw: unknown, shape: Problem[]): Problem[] {
+  const lists = ["symptoms", "causes", "checks", "symptomLinks", "checkLinks"] as const;
+  const r = raw as Record<string, unknown> | null;
+  if (!r || typeof r !== "object" || lists.some((l) => !Array.isArray(r[l]))) return [];
+  const flagged = new Set(shape.map((p) => p.where.split(" ")[0].split(".").slice(0, 2).join(".")));
+  try {
+    return documentProblems(r as unknown as KnowledgeDocument).filter(
+      (p) => !flagged.has(p.where.split(" ")[0]),
+    );
+  } catch {
+    return [];
+  }
 }
 
 /** Imports a document into the member's workshop, or answers its problems and writes nothing. */
@@ -238,7 +254,11 @@ export async function importKnowledge(
 /** A file's text as a document to import, or the one problem that it is not JSON at all. */
 export function readDocumentText(text: string): { raw: unknown } | { problem: Problem } {
   try {
-    return { raw: JSON.parse(text) };
+    const raw: unknown = JSON.parse(text);
+    // PostgreSQL stores no NUL character in text; say so rather than fail while writing.
+    if (JSON.stringify(raw).includes("\\u0000"))
+      return { problem: { where: "the file", message: "part of it holds a NUL character (\\0); remove it" } };
+    return { raw };
   } catch (e) {
     return {
       problem: {

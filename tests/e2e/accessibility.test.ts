@@ -16,7 +16,7 @@ const VISITS: { login: string | null; paths: string[] }[] = [
     paths: ["/board", "/cases", "/cases?q=DEMO", "/cases/new", CASE("b1"), "/kb", "/settings"],
   },
   { login: "ollie-mbeki", paths: [CASE("b2")] },
-  { login: "tomas-varga", paths: [CASE("b3"), "/settings/audit"] },
+  { login: "tomas-varga", paths: [CASE("b3"), "/settings/audit", "/kb/transfer"] },
   { login: "dana-reyes", paths: [CASE("b4"), CASE("b5")] },
   { login: "ines-okafor", paths: ["/settings", "/settings/members", "/settings/audit"] },
 ];

@@ -3,11 +3,16 @@ import { PriorityMark } from "~/components/priority";
 import { dbContext } from "~/http/context";
 import { kbOverview } from "~/kb/overview.server";
 import { SYSTEM_LABEL } from "~/domain/knowledge";
+import { can } from "~/domain/permissions";
+import { href, Link } from "react-router";
 import type { Route } from "./+types/overview";
 
 export async function loader({ context }: Route.LoaderArgs) {
   const member = context.get(memberContext);
-  return kbOverview(context.get(dbContext), member.workshopId);
+  return {
+    ...(await kbOverview(context.get(dbContext), member.workshopId)),
+    mayEdit: can(member.role, "kb:edit"),
+  };
 }
 
 export function meta() {
@@ -20,7 +25,27 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
   const childrenOf = (id: string) => tree.filter((n) => n.parentId === id);
   return (
     <div>
-      <h1 className="text-2xl font-semibold">Knowledge base</h1>
+      <div className="flex flex-wrap items-baseline justify-between gap-3">
+        <h1 className="text-2xl font-semibold">Knowledge base</h1>
+        <nav aria-label="Knowledge-base files" className="flex flex-wrap gap-3">
+          {loaderData.mayEdit ? (
+            <Link
+              className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+              to={href("/kb/transfer")}
+            >
+              Import or export a file
+            </Link>
+          ) : (
+            <a
+              className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+              href={href("/kb/export")}
+              download
+            >
+              Download as a file
+            </a>
+          )}
+        </nav>
+      </div>
       <dl className="mt-4 grid grid-cols-2 gap-3 sm:grid-cols-5">
         {[
           ["Symptoms", counts.symptoms],

@@ -190,6 +190,23 @@ describe("knowledge-base export and import", () => {
       });
     }
 
+    it("names every problem in one pass: a shape problem does not hide a missing caution", async () => {
+      const senior = await memberFor(db(), "tomas-varga");
+      const doc = await exportKnowledge(db(), BRAMBLEGATE);
+      doc.symptomLinks[0].p = 1.7;
+      const bleed = doc.checks.find((x) => x.cautions.includes("brake_hydraulics"))!;
+      bleed.cautions = bleed.cautions.filter((x) => x !== "brake_hydraulics");
+      const answer = await importKnowledge(db(), senior, doc);
+      expect(answer.ok).toBe(false);
+      const said = answer.ok ? [] : answer.problems.map((p) => `${p.where}: ${p.message}`);
+      expect(said).toEqual(
+        expect.arrayContaining([
+          expect.stringMatching(/^symptomLinks\.0.*a probability is at most 1/),
+          expect.stringMatching(new RegExp(`^checks\\.\\d+ \\(${bleed.key}\\): .*brake hydraulics`)),
+        ]),
+      );
+    });
+
     it("a file that is not JSON", () => {
       const read = readDocumentText("{ this is not json");
       expect("problem" in read && read.problem.message).toMatch(/not JSON/);
