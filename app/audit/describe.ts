@@ -1,4 +1,5 @@
 import { href } from "react-router";
+import { describeStrength } from "~/domain/link-strength";
 // Audit entries in the words of the workshop floor: a sentence that starts after the actor's name
 // ("Priya Hale recorded a fault: …") and, where the entry concerns a record, a link to it. Shared by
 // the case history and the workshop's audit log, browser-safe.
@@ -65,7 +66,7 @@ function importSentence(a: Fields): string {
     const updated = Number(c.updated ?? 0);
     return `${plural(added, word)} added, ${updated} updated`;
   };
-  return `imported the knowledge base${quoted(a.name)}${a.kbVersion ? ` as version ${a.kbVersion}` : ""}: ${[
+  return `imported the knowledge base${typeof a.name === "string" && a.name.trim() ? ` “${a.name.trim()}”` : ""}${a.kbVersion ? ` as version ${a.kbVersion}` : ""}: ${[
     part("symptoms", "symptom"),
     part("causes", "cause"),
     part("checks", "check"),
@@ -91,6 +92,8 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
   "case.close": () => "closed the case",
   "settings.update": (a, b) => settingsChange(b, a),
   "kb.import": (a) => importSentence(a),
+  "kb.link": (a, b) =>
+    `${a.link === "check" ? `changed how often “${a.other}” fails when the cause is “${a.cause}”` : `changed how often “${a.cause}” shows as “${a.other}”`}: from ${describeStrength(Number(b.p))} to ${describeStrength(Number(a.p))}`,
   "workshop.create": (a) => `created the workshop ${a.name ?? ""}`.trim(),
   "member.invite": (a, _b, s) =>
     `invited ${s.invitee ?? a.email ?? a.githubLogin ?? "someone"} as ${role(a.role)}`,

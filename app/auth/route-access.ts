@@ -10,7 +10,7 @@ import type { Permission } from "~/domain/permissions";
 export type RouteAccessLevel = "public" | "account" | "no-workshop" | "member" | Permission;
 
 export type RouteAccess = {
-  path: string; // a concrete URL to try; {case} is an open demo case of the Bramblegate workshop, {check} one of its checks
+  path: string; // a concrete URL to try; {case} is an open demo case of the Bramblegate workshop, {check} one of its checks, {cause} one of its failure modes
   api?: true; // JSON route: 401/403 answers instead of redirects
   record?: true; // the URL names a record of one workshop: members of another get 404
   GET?: RouteAccessLevel;
@@ -29,6 +29,12 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/cases/list.tsx": { path: "/cases", GET: "case:read" },
   "routes/kb/overview.tsx": { path: "/kb", GET: "kb:read" },
   "routes/kb/export.ts": { path: "/kb/export", GET: "kb:read" },
+  "routes/kb/cause.tsx": {
+    path: "/kb/causes/{cause}",
+    record: true,
+    GET: "kb:read",
+    POST: { strength: "kb:edit" },
+  },
   "routes/kb/transfer.tsx": { path: "/kb/transfer", GET: "kb:edit", POST: "kb:edit" },
   "routes/settings/workshop.tsx": { path: "/settings", GET: "member", POST: "settings:manage" },
   "routes/settings/members.tsx": {

@@ -72,6 +72,11 @@ export const PRIORITY_COPY: Record<Priority, { label: string; description: strin
 
 export const CAUSE_LEVELS = ["system", "component", "failure_mode"] as const;
 export type CauseLevel = (typeof CAUSE_LEVELS)[number];
+export const CAUSE_LEVEL_LABEL: Record<CauseLevel, string> = {
+  system: "System",
+  component: "Component",
+  failure_mode: "Failure mode",
+};
 
 /** What a check needs to be done: its access, shown with its tools. */
 export const CHECK_ACCESS = [

@@ -3,6 +3,8 @@
 // The words and figures are ours (docs/knowledge-format.md): a scale of six that a technician can
 // tell apart, spaced so that each step changes a ranking visibly. Any figure in between may be
 // typed as a number; it is then shown with the nearest word, marked "about".
+import type { BandFigures } from "./readings";
+
 export const STRENGTHS = [
   { word: "almost always", p: 0.95 },
   { word: "usually", p: 0.8 },
@@ -51,4 +53,17 @@ export function readStrength(input: string): { p: number } | { error: string } {
   if (!(value > 0 && value < 1))
     return { error: "A strength lies between 0% and 100%: never certain, never impossible." };
   return { p: value };
+}
+
+/**
+ * A graded check link given a new P(fail): the two failing bands scaled to add up to it and the
+ * two passing bands to the rest, each keeping its share of its side (an even split where a side
+ * had nothing), so the four still sum to 1 and the link's shape survives the edit.
+ */
+export function rescaleBands(bands: BandFigures, pFail: number): BandFigures {
+  const side = (a: number, b: number, total: number): [number, number] =>
+    a + b > 0 ? [(a / (a + b)) * total, (b / (a + b)) * total] : [total / 2, total / 2];
+  const [wellWithin, near] = side(bands.well_within, bands.near, 1 - pFail);
+  const [beyond, farBeyond] = side(bands.beyond, bands.far_beyond, pFail);
+  return { well_within: wellWithin, near, beyond, far_beyond: farBeyond };
 }

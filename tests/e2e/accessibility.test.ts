@@ -2,10 +2,12 @@
 // in the dark theme: no serious or critical violation (WCAG 2.2 A and AA rules).
 import { describe, expect, it } from "vitest";
 import { seedId } from "../../seeds/ids";
+import { kbId } from "../../seeds/knowledge";
 import { seriousViolations } from "./axe";
 import { baseUrl, signInAs, useBrowser } from "./browser";
 
 const CASE = (key: string) => `/cases/${seedId(`case:${key}`)}`;
+const CAUSE = (key: string) => `/kb/causes/${kbId("bramblegate", "cause", key)}`;
 
 // Who sees which pages: every route with a screen appears at least once.
 const VISITS: { login: string | null; paths: string[] }[] = [
@@ -13,10 +15,22 @@ const VISITS: { login: string | null; paths: string[] }[] = [
   { login: "sam-newcomer", paths: ["/welcome"] },
   {
     login: "priya-hale",
-    paths: ["/board", "/cases", "/cases?q=DEMO", "/cases/new", CASE("b1"), "/kb", "/settings"],
+    paths: [
+      "/board",
+      "/cases",
+      "/cases?q=DEMO",
+      "/cases/new",
+      CASE("b1"),
+      "/kb",
+      CAUSE("brake_pad_noise"),
+      "/settings",
+    ],
   },
   { login: "ollie-mbeki", paths: [CASE("b2")] },
-  { login: "tomas-varga", paths: [CASE("b3"), "/settings/audit", "/kb/transfer"] },
+  {
+    login: "tomas-varga",
+    paths: [CASE("b3"), "/settings/audit", "/kb/transfer", CAUSE("brake_disc_runout_dtv")],
+  },
   { login: "dana-reyes", paths: [CASE("b4"), CASE("b5")] },
   { login: "ines-okafor", paths: ["/settings", "/settings/members", "/settings/audit"] },
 ];

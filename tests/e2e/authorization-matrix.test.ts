@@ -35,6 +35,8 @@ function routeFiles(list: { file: string; children?: unknown[] }[]): string[] {
 const OPEN_CASE = seedId("case:b1");
 // A check of the Bramblegate knowledge base (seeds/kb/brakes.ts).
 const A_CHECK = kbId("bramblegate", "check", "brake_road_test");
+// A failure mode of the same knowledge base (seeds/kb/brakes.ts).
+const A_CAUSE = kbId("bramblegate", "cause", "brake_pad_noise");
 const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 2 });
 const actors: Actor[] = [{ name: "anonymous", kind: "anonymous" }];
 
@@ -129,7 +131,7 @@ describe("authorization matrix", () => {
               ? `rl_session=${await createSession(db, actor.userId, "spare")}`
               : actor.cookie;
           const res = await fetch(
-            `${base}${rule.path.replace("{case}", OPEN_CASE).replace("{check}", A_CHECK)}`,
+            `${base}${rule.path.replace("{case}", OPEN_CASE).replace("{check}", A_CHECK).replace("{cause}", A_CAUSE)}`,
             {
               method,
               redirect: "manual",

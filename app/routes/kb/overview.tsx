@@ -1,5 +1,6 @@
 import { memberContext } from "~/auth/guards.server";
 import { PriorityMark } from "~/components/priority";
+import { Fold } from "~/components/fold";
 import { dbContext } from "~/http/context";
 import { kbOverview } from "~/kb/overview.server";
 import { SYSTEM_LABEL } from "~/domain/knowledge";
@@ -66,10 +67,13 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
             Cause tree
           </h2>
           {systems.map((sys) => (
-            <details key={sys.id} className="mt-3 rounded-card border border-rule bg-card p-3">
-              <summary className="min-h-tap cursor-pointer content-center font-semibold">
-                {SYSTEM_LABEL[sys.system as keyof typeof SYSTEM_LABEL] ?? sys.name}
-              </summary>
+            // A system's branch is drawn once it is opened: the whole tree is hundreds of rows.
+            <Fold
+              key={sys.id}
+              className="mt-3 rounded-card border border-rule bg-card p-3"
+              summaryClassName="min-h-tap cursor-pointer content-center font-semibold"
+              summary={SYSTEM_LABEL[sys.system as keyof typeof SYSTEM_LABEL] ?? sys.name}
+            >
               <ul className="mt-2 grid gap-2">
                 {childrenOf(sys.id).map((comp) => (
                   <li key={comp.id}>
@@ -81,7 +85,12 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
                           id={`cause-${fm.id}`}
                           className="flex items-center justify-between gap-2 text-graphite-800"
                         >
-                          <span>{fm.name}</span>
+                          <Link
+                            className="inline-flex min-h-tap items-center underline decoration-rule underline-offset-2"
+                            to={href("/kb/causes/:causeId", { causeId: fm.id })}
+                          >
+                            {fm.name}
+                          </Link>
                           {fm.priority ? <PriorityMark priority={fm.priority} /> : null}
                         </li>
                       ))}
@@ -89,7 +98,7 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
                   </li>
                 ))}
               </ul>
-            </details>
+            </Fold>
           ))}
         </section>
         <section aria-labelledby="symptoms">

@@ -2,7 +2,15 @@
 // probability, a figure reads back as its nearest word, and what a senior types is read or refused.
 // The scale is ours (docs/knowledge-format.md), not a published one: these checks hold it to itself.
 import { describe, expect, it } from "vitest";
-import { describeStrength, readStrength, STRENGTHS, strengthOf, wordFor } from "~/domain/link-strength";
+import { describeAudit } from "~/audit/describe";
+import {
+  describeStrength,
+  readStrength,
+  rescaleBands,
+  STRENGTHS,
+  strengthOf,
+  wordFor,
+} from "~/domain/link-strength";
 
 describe("link strengths in words", () => {
   it("runs from almost always to rarely, strictly falling, inside (0, 1)", () => {
@@ -37,5 +45,49 @@ describe("link strengths in words", () => {
     expect(readStrength("very")).toEqual({
       error: expect.stringMatching(/one of the words \(almost always, usually/),
     });
+  });
+
+  it("keeps a graded link's bands in proportion when its strength changes (sums checked by arithmetic)", () => {
+    const b = rescaleBands({ well_within: 0.3, near: 0.1, beyond: 0.4, far_beyond: 0.2 }, 0.3);
+    expect(b.beyond + b.far_beyond).toBeCloseTo(0.3, 12);
+    expect(b.well_within + b.near + b.beyond + b.far_beyond).toBeCloseTo(1, 12);
+    expect(b.beyond / b.far_beyond).toBeCloseTo(2, 12);
+    expect(b.well_within / b.near).toBeCloseTo(3, 12);
+    expect(rescaleBands({ well_within: 1, near: 0, beyond: 0, far_beyond: 0 }, 0.4)).toEqual({
+      well_within: 0.6,
+      near: 0,
+      beyond: 0.2,
+      far_beyond: 0.2,
+    });
+  });
+
+  it("says a strength change in the audit log in words, before and after", () => {
+    const text = describeAudit({
+      action: "kb.link",
+      before: { p: 0.8 },
+      after: { p: 0.6, link: "symptom", cause: "Warped front disc", other: "Vibration under braking" },
+    }).text;
+    expect(text).toBe(
+      "changed how often “Warped front disc” shows as “Vibration under braking”: from usually (80%) to often (60%)",
+    );
+  });
+
+  it("says an import in the audit log in words, with what it added and updated", () => {
+    const text = describeAudit({
+      action: "kb.import",
+      before: null,
+      after: {
+        name: "Shared base",
+        kbVersion: 4,
+        counts: {
+          symptoms: { added: 1, updated: 220 },
+          causes: { added: 0, updated: 215 },
+          checks: { added: 2, updated: 0 },
+        },
+      },
+    }).text;
+    expect(text).toBe(
+      "imported the knowledge base “Shared base” as version 4: 1 symptom added, 220 updated; 0 causes added, 215 updated; 2 checks added, 0 updated",
+    );
   });
 });
