@@ -14,6 +14,7 @@ export default [
     route("cases/:caseId", "routes/cases/workbench.tsx"),
     route("kb", "routes/kb/overview.tsx"),
     route("kb/export", "routes/kb/export.ts"),
+    route("kb/proposals", "routes/kb/proposals.tsx"),
     route("kb/causes/:causeId", "routes/kb/cause.tsx"),
     route("kb/transfer", "routes/kb/transfer.tsx"),
     route("settings", "routes/settings/workshop.tsx"),

@@ -92,6 +92,14 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
   "case.close": () => "closed the case",
   "settings.update": (a, b) => settingsChange(b, a),
   "kb.import": (a) => importSentence(a),
+  "kb.propose": (a) =>
+    a.kind === "cause"
+      ? `proposed a new cause “${a.cause}” beside the others under “${a.under}”, shown as “${a.symptom}” ${describeStrength(Number(a.p))}`
+      : `proposed that “${a.cause}” shows as “${a.symptom}” ${describeStrength(Number(a.p))}`,
+  "kb.proposal.accept": (a) =>
+    `accepted the proposal ${a.kind === "cause" ? `of a new cause “${a.cause}”` : `that “${a.cause}” shows as “${a.symptom}”`} ${describeStrength(Number(a.p))}${quoted(a.comment)}`,
+  "kb.proposal.reject": (a) =>
+    `rejected the proposal ${a.kind === "cause" ? `of a new cause “${a.cause}”` : `that “${a.cause}” shows as “${a.symptom}”`}${quoted(a.comment)}`,
   "kb.link": (a, b) =>
     `${a.link === "check" ? `changed how often “${a.other}” fails when the cause is “${a.cause}”` : `changed how often “${a.cause}” shows as “${a.other}”`}: from ${describeStrength(Number(b.p))} to ${describeStrength(Number(a.p))}`,
   "workshop.create": (a) => `created the workshop ${a.name ?? ""}`.trim(),
@@ -121,6 +129,8 @@ export function describeAudit(entry: AuditLine): Described {
   if (entry.action.startsWith("member."))
     return { text, href: href("/settings/members"), linkText: "members" };
   if (entry.action === "settings.update") return { text, href: href("/settings"), linkText: "settings" };
+  if (entry.action.startsWith("kb.propos"))
+    return { text, href: href("/kb/proposals"), linkText: "proposals" };
   if (entry.action.startsWith("kb.")) return { text, href: href("/kb"), linkText: "knowledge base" };
   return { text, href: null, linkText: null };
 }

@@ -29,6 +29,11 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/cases/list.tsx": { path: "/cases", GET: "case:read" },
   "routes/kb/overview.tsx": { path: "/kb", GET: "kb:read" },
   "routes/kb/export.ts": { path: "/kb/export", GET: "kb:read" },
+  "routes/kb/proposals.tsx": {
+    path: "/kb/proposals",
+    GET: "kb:read",
+    POST: { propose: "kb:propose", accept: "kb:approve", reject: "kb:approve" },
+  },
   "routes/kb/cause.tsx": {
     path: "/kb/causes/{cause}",
     record: true,

@@ -29,7 +29,7 @@ const VISITS: { login: string | null; paths: string[] }[] = [
   { login: "ollie-mbeki", paths: [CASE("b2")] },
   {
     login: "tomas-varga",
-    paths: [CASE("b3"), "/settings/audit", "/kb/transfer", CAUSE("brake_disc_runout_dtv")],
+    paths: [CASE("b3"), "/settings/audit", "/kb/transfer", "/kb/proposals", CAUSE("brake_disc_runout_dtv")],
   },
   { login: "dana-reyes", paths: [CASE("b4"), CASE("b5")] },
   { login: "ines-okafor", paths: ["/settings", "/settings/members", "/settings/audit"] },

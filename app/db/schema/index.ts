@@ -5,4 +5,5 @@ export * from "./vehicles";
 export * from "./knowledge";
 export * from "./cases";
 export * from "./audit";
+export * from "./proposals";
 export * from "./relations";

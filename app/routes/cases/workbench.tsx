@@ -16,6 +16,7 @@ import { UndoNotice } from "~/components/case/undo-notice";
 import { Fold } from "~/components/fold";
 import { FormMessages } from "~/components/ui/form-errors";
 import { EvidenceList } from "~/components/case/evidence-list";
+import { ProposePanel } from "~/components/case/propose-panel";
 import { LikelyCauses } from "~/components/case/likely-causes";
 import { CaseQuickFind } from "~/components/case/case-quick-find";
 import { RouteErrorPage } from "~/components/error-page";
@@ -52,6 +53,7 @@ export async function loader({ params, context }: Route.LoaderArgs) {
       mayReopen: can(member.role, "case:reopen"),
       mayClose: can(member.role, "case:close"),
       mayEditComplaint: can(member.role, "case:open") && bundle.state !== "closed",
+      mayPropose: canWork && can(member.role, "kb:propose"),
     },
   };
 }
@@ -121,7 +123,16 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
     causes
   );
   const evidenceList = (
-    <EvidenceList c={c} canWork={me.canWork} remove={(kind, itemId) => change({ kind, id: itemId })} />
+    <>
+      <EvidenceList c={c} canWork={me.canWork} remove={(kind, itemId) => change({ kind, id: itemId })} />
+      {me.mayPropose ? (
+        <ProposePanel
+          caseId={c.id}
+          symptoms={c.observations.filter((o) => o.present).map((o) => ({ id: o.symptomId, name: o.name }))}
+          causes={d.causes}
+        />
+      ) : null}
+    </>
   );
   const conclusion = (
     <ConclusionPanel

@@ -28,7 +28,13 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
     <div>
       <div className="flex flex-wrap items-baseline justify-between gap-3">
         <h1 className="text-2xl font-semibold">Knowledge base</h1>
-        <nav aria-label="Knowledge-base files" className="flex flex-wrap gap-3">
+        <nav aria-label="Knowledge-base files and proposals" className="flex flex-wrap gap-3">
+          <Link
+            className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+            to={href("/kb/proposals")}
+          >
+            Proposals
+          </Link>
           {loaderData.mayEdit ? (
             <Link
               className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"

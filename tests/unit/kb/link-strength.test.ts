@@ -90,4 +90,21 @@ describe("link strengths in words", () => {
       "imported the knowledge base “Shared base” as version 4: 1 symptom added, 220 updated; 0 causes added, 215 updated; 2 checks added, 0 updated",
     );
   });
+
+  it("says a proposal and its review in the audit log in words", () => {
+    const after = {
+      kind: "link",
+      symptom: "Vibration under braking",
+      cause: "Glazed pads",
+      p: 0.35,
+      comment: "Seen it.",
+    };
+    expect(describeAudit({ action: "kb.propose", before: null, after }).text).toBe(
+      "proposed that “Glazed pads” shows as “Vibration under braking” sometimes (35%)",
+    );
+    expect(describeAudit({ action: "kb.proposal.accept", before: null, after }).text).toBe(
+      "accepted the proposal that “Glazed pads” shows as “Vibration under braking” sometimes (35%): “Seen it.”",
+    );
+    expect(describeAudit({ action: "kb.proposal.reject", before: null, after }).href).toBe("/kb/proposals");
+  });
 });

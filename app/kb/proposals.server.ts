@@ -1,0 +1,229 @@
+// Proposals to change the knowledge base, and their review. A technician proposes from a case
+// ("the knowledge base did not have this"): a symptom should point to a cause, at a strength, or a
+// cause is missing altogether. A senior accepts (the change is made with a new knowledge-base
+// version) or rejects, with a comment; both are audited in words.
+import { randomUUID } from "node:crypto";
+import { and, desc, eq, sql } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+import { audit } from "~/audit/write.server";
+import type { CurrentMember } from "~/auth/guards.server";
+import type { Db } from "~/db/client.server";
+import { cases, causes, kbProposals, members, symptomLinks, symptoms, users, workshops } from "~/db/schema";
+import type { Priority } from "~/domain/knowledge";
+import type { ProposalKind } from "~/domain/proposals";
+import { refuse, requireId } from "~/http/errors.server";
+
+type Member = Pick<CurrentMember, "workshopId" | "userId" | "memberId">;
+
+export type ProposalInput = {
+  caseId: string;
+  kind: ProposalKind;
+  symptomId: string;
+  // kind "link": the failure mode the symptom should point to; kind "cause": a failure mode in the
+  // same part of the car (or the component itself) the new one goes beside.
+  causeId: string;
+  causeName?: string;
+  p: number;
+  note: string;
+};
+
+export async function propose(db: Db, member: Member, input: ProposalInput) {
+  requireId(input.caseId, "No such case in this workshop.");
+  requireId(input.symptomId, "Choose one of the case's symptoms.");
+  requireId(input.causeId, "Choose a cause of this knowledge base.");
+  return db.transaction(async (tx) => {
+    const [c] = await tx
+      .select({ number: cases.number })
+      .from(cases)
+      .where(and(eq(cases.id, input.caseId), eq(cases.workshopId, member.workshopId)));
+    if (!c) refuse(404, "No such case in this workshop.");
+    const [s] = await tx
+      .select({ name: symptoms.name })
+      .from(symptoms)
+      .where(and(eq(symptoms.id, input.symptomId), eq(symptoms.workshopId, member.workshopId)));
+    if (!s) refuse(400, "Choose one of the case's symptoms.");
+    const [picked] = await tx
+      .select({ id: causes.id, name: causes.name, level: causes.level, parentId: causes.parentId })
+      .from(causes)
+      .where(and(eq(causes.id, input.causeId), eq(causes.workshopId, member.workshopId)));
+    if (!picked) refuse(400, "Choose a cause of this knowledge base.");
+    // A new cause goes beside the one picked: under its component.
+    const [cause] =
+      input.kind === "cause" && picked.level === "failure_mode" && picked.parentId
+        ? await tx
+            .select({ id: causes.id, name: causes.name, level: causes.level, parentId: causes.parentId })
+            .from(causes)
+            .where(eq(causes.id, picked.parentId))
+        : [picked];
+    if (input.kind === "link" && cause.level !== "failure_mode")
+      refuse(400, "A symptom points to a failure mode: choose one of the likely causes.");
+    if (input.kind === "cause" && cause.level !== "component")
+      refuse(400, "A new cause goes beside a likely cause: choose the one nearest to it.");
+    const [row] = await tx
+      .insert(kbProposals)
+      .values({
+        workshopId: member.workshopId,
+        caseId: input.caseId,
+        kind: input.kind,
+        symptomId: input.symptomId,
+        causeId: cause.id,
+        causeName: input.kind === "cause" ? input.causeName!.trim() : null,
+        p: input.p,
+        note: input.note.trim(),
+        proposedById: member.memberId,
+      })
+      .returning({ id: kbProposals.id });
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "kb.propose",
+      entity: "kb_proposal",
+      entityId: row.id,
+      after: {
+        kind: input.kind,
+        symptom: s.name,
+        cause: input.kind === "cause" ? input.causeName!.trim() : cause.name,
+        under: input.kind === "cause" ? cause.name : undefined,
+        p: input.p,
+        caseNumber: c.number,
+      },
+    });
+    return { id: row.id, caseNumber: c.number };
+  });
+}
+
+const proposer = alias(members, "proposer");
+const proposerUser = alias(users, "proposer_user");
+
+/** The workshop's proposals, open ones first, each with the names it concerns and the link as it stands. */
+export async function listProposals(db: Db, workshopId: string) {
+  return db
+    .select({
+      id: kbProposals.id,
+      kind: kbProposals.kind,
+      state: kbProposals.state,
+      p: kbProposals.p,
+      note: kbProposals.note,
+      causeName: kbProposals.causeName,
+      reviewComment: kbProposals.reviewComment,
+      createdAt: kbProposals.createdAt,
+      symptomName: symptoms.name,
+      targetName: causes.name,
+      targetId: causes.id,
+      currentP: symptomLinks.p,
+      caseId: cases.id,
+      caseNumber: cases.number,
+      proposedBy: proposerUser.name,
+    })
+    .from(kbProposals)
+    .innerJoin(symptoms, eq(symptoms.id, kbProposals.symptomId))
+    .innerJoin(causes, eq(causes.id, kbProposals.causeId))
+    .leftJoin(
+      symptomLinks,
+      and(eq(symptomLinks.symptomId, kbProposals.symptomId), eq(symptomLinks.causeId, kbProposals.causeId)),
+    )
+    .leftJoin(cases, eq(cases.id, kbProposals.caseId))
+    .leftJoin(proposer, eq(proposer.id, kbProposals.proposedById))
+    .leftJoin(proposerUser, eq(proposerUser.id, proposer.userId))
+    .where(eq(kbProposals.workshopId, workshopId))
+    .orderBy(sql`${kbProposals.state} = 'open' desc`, desc(kbProposals.createdAt))
+    .limit(200);
+}
+
+export type Review =
+  | { decision: "accept"; comment: string; baseRate?: number; priority?: Priority }
+  | { decision: "reject"; comment: string };
+
+/** Accepts or rejects an open proposal; accepting makes its change with a new version. */
+export async function reviewProposal(db: Db, member: Member, proposalId: string, review: Review) {
+  requireId(proposalId, "No such proposal in this workshop.");
+  return db.transaction(async (tx) => {
+    const [p] = await tx
+      .select()
+      .from(kbProposals)
+      .where(and(eq(kbProposals.id, proposalId), eq(kbProposals.workshopId, member.workshopId)))
+      .for("update");
+    if (!p) refuse(404, "No such proposal in this workshop.");
+    if (p.state !== "open") refuse(409, `This proposal was ${p.state} already; nothing changed.`);
+    const [{ symptomName }] = await tx
+      .select({ symptomName: symptoms.name })
+      .from(symptoms)
+      .where(eq(symptoms.id, p.symptomId));
+    const [target] = await tx
+      .select({ name: causes.name, system: causes.system })
+      .from(causes)
+      .where(eq(causes.id, p.causeId));
+    let made: { cause: string; before: number | null; causeId: string } | null = null;
+    if (review.decision === "accept") {
+      let causeId = p.causeId;
+      let causeName = target.name;
+      if (p.kind === "cause") {
+        causeName = p.causeName!;
+        const [fm] = await tx
+          .insert(causes)
+          .values({
+            workshopId: member.workshopId,
+            key: `${
+              causeName
+                .toLowerCase()
+                .replace(/[^a-z0-9]+/g, "_")
+                .replace(/^_+|_+$/g, "")
+                .slice(0, 60) || "cause"
+            }_${randomUUID().slice(0, 6)}`,
+            parentId: p.causeId,
+            level: "failure_mode",
+            name: causeName,
+            system: target.system,
+            description: p.note,
+            baseRate: review.baseRate ?? 1,
+            priority: review.priority ?? "soon",
+          })
+          .returning({ id: causes.id });
+        causeId = fm.id;
+      }
+      const [existing] = await tx
+        .select({ p: symptomLinks.p })
+        .from(symptomLinks)
+        .where(and(eq(symptomLinks.symptomId, p.symptomId), eq(symptomLinks.causeId, causeId)));
+      await tx
+        .insert(symptomLinks)
+        .values({ workshopId: member.workshopId, symptomId: p.symptomId, causeId, p: p.p })
+        .onConflictDoUpdate({ target: [symptomLinks.symptomId, symptomLinks.causeId], set: { p: p.p } });
+      await tx
+        .update(workshops)
+        .set({ kbVersion: sql`${workshops.kbVersion} + 1` })
+        .where(eq(workshops.id, member.workshopId));
+      made = { cause: causeName, before: existing?.p ?? null, causeId };
+    }
+    await tx
+      .update(kbProposals)
+      .set({
+        state: review.decision === "accept" ? "accepted" : "rejected",
+        reviewedById: member.memberId,
+        reviewComment: review.comment.trim() || null,
+        reviewedAt: new Date(),
+      })
+      .where(eq(kbProposals.id, p.id));
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: review.decision === "accept" ? "kb.proposal.accept" : "kb.proposal.reject",
+      entity: "kb_proposal",
+      entityId: p.id,
+      before: made ? { p: made.before } : null,
+      after: {
+        kind: p.kind,
+        symptom: symptomName,
+        cause: p.kind === "cause" ? p.causeName : target.name,
+        p: p.p,
+        comment: review.comment.trim(),
+      },
+    });
+    return {
+      decision: review.decision,
+      symptom: symptomName,
+      cause: made?.cause ?? target.name,
+      causeId: made?.causeId,
+    };
+  });
+}
