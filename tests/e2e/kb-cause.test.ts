@@ -1,10 +1,43 @@
 // A senior finds a failure mode in the cause tree, reads its links in words and figures, and
 // changes how often it shows a symptom by a word; a wrong word gets its message at that link's
 // field and changes nothing. A technician reads the same page without the forms.
-import { describe, expect, it } from "vitest";
+import { afterAll, describe, expect, inject, it } from "vitest";
+import { loadAccount } from "~/auth/accounts.server";
+import { asMember } from "~/auth/guards.server";
+import { loadCaseForChange } from "~/cases/case.server";
+import { recordObservation } from "~/cases/evidence.server";
+import { openCase } from "~/cases/open-case.server";
+import { conclude } from "~/cases/workflow.server";
+import { createDb } from "~/db/client.server";
+import { seedId } from "../../seeds/ids";
+import { kbId } from "../../seeds/knowledge";
 import { baseUrl, hydrated, signInAs, useBrowser } from "./browser";
 
 const browser = useBrowser();
+const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 2 });
+afterAll(() => pool.end());
+
+/** A concluded case of its own: the owner's squeal, confirmed as pads missing their shims. */
+async function concludedSquealCase() {
+  const priya = asMember((await loadAccount(db, seedId("user:priya-hale")))!);
+  const opened = await openCase(db, priya, {
+    vehicleId: seedId("vehicle:orlan-brisk"),
+    mileageKm: 70_000,
+    complaint: "Squeals every time I brake.",
+  });
+  await recordObservation(db, priya, await loadCaseForChange(db, priya, opened.id), {
+    symptomId: kbId("bramblegate", "symptom", "squeal_braking"),
+    present: true,
+    source: "owner",
+  });
+  const c = await loadCaseForChange(db, priya, opened.id);
+  await conclude(db, priya, c, {
+    causeId: kbId("bramblegate", "cause", "brake_pad_noise"),
+    notes: "Shims missing; quiet after refit.",
+    version: c.version,
+  });
+  return c.number;
+}
 
 describe("a cause's links in words", () => {
   it("a senior changes a symptom link by word, and a wrong word is refused at its field", async () => {
@@ -20,7 +53,17 @@ describe("a cause's links in words", () => {
     await page.getByRole("heading", { level: 1, name: /Pad vibration from missing shims/ }).waitFor();
     await hydrated(page);
 
+    // The impact preview: weakening the squeal link moves the case confirmed as this cause.
+    const number = await concludedSquealCase();
     const shows = page.getByRole("list", { name: "Symptoms it shows" });
+    const link = shows.getByRole("listitem", { name: /squeal/i }).first();
+    await link.getByLabel(/^New strength for/).fill("rarely");
+    await link.getByRole("button", { name: "Preview the effect" }).click();
+    const effect = page.getByRole("status", { name: "Effect on cases with a confirmed cause" });
+    await effect.getByText(/At rarely \(5%\), of \d+ cases with a confirmed cause/).waitFor();
+    await effect.getByRole("list", { name: "Cases that moved" }).getByText(`case #${number}`).waitFor();
+    await effect.getByText(/confirmed cause ranked first: \d+ → \d+/).waitFor();
+
     const squeal = shows.getByRole("listitem").first();
     const name = (await squeal.getAttribute("aria-label"))!;
     const field = squeal.getByLabel(`New strength for ${name}`);

@@ -11,6 +11,8 @@ import type { FormErrors } from "~/http/forms";
 import { dbContext } from "~/http/context";
 import { invalid, onForm, zodErrors } from "~/http/forms.server";
 import { causeWithLinks, setLinkStrength } from "~/kb/cause-links.server";
+import type { Impact } from "~/kb/impact";
+import { previewChange } from "~/kb/impact.server";
 import { getWorkshop } from "~/workshop/settings.server";
 import type { Route } from "./+types/cause";
 
@@ -28,7 +30,7 @@ export async function loader({ params, context }: Route.LoaderArgs) {
 const fieldOf = (link: string, otherId: string) => `strength-${link}-${otherId}`;
 
 const StrengthForm = z.object({
-  intent: z.literal("strength"),
+  intent: z.enum(["strength", "preview"]),
   link: z.enum(["symptom", "check"], { message: "Say which kind of link this is." }),
   otherId: z.string().uuid("That link is not in this knowledge base."),
   strength: z.string().max(40, "Say it in a word or a figure."),
@@ -41,9 +43,17 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const member = requirePermission(context.get(memberContext), "kb:edit");
   const parsed = StrengthForm.safeParse(Object.fromEntries(await request.formData()));
   if (!parsed.success) return invalid(zodErrors(parsed.error));
-  const { link, otherId, strength } = parsed.data;
+  const { intent, link, otherId, strength } = parsed.data;
   const read = readStrength(strength);
   if ("error" in read) return invalid({ [fieldOf(link, otherId)]: [read.error] });
+  if (intent === "preview") {
+    const change =
+      link === "symptom"
+        ? { link, symptomId: otherId, causeId: params.causeId, p: read.p }
+        : { link, checkId: otherId, causeId: params.causeId, p: read.p };
+    const impact = await previewChange(db, member.workshopId, change);
+    return { errors: {} as FormErrors, notice: null, preview: { link, otherId, p: read.p, impact } };
+  }
   return onForm(async () => {
     const done = await setLinkStrength(db, member, {
       link,
@@ -66,6 +76,43 @@ export function meta({ loaderData }: Route.MetaArgs) {
 }
 
 type Row = { id: string; name: string; p: number; note?: string };
+type Preview = { link: "symptom" | "check"; otherId: string; p: number; impact: Impact };
+
+const ordinal = (n: number | null) =>
+  n === null
+    ? "not ranked"
+    : `${n}${n % 10 === 1 && n % 100 !== 11 ? "st" : n % 10 === 2 && n % 100 !== 12 ? "nd" : n % 10 === 3 && n % 100 !== 13 ? "rd" : "th"}`;
+
+/** The change's effect on the workshop's cases with a confirmed cause, before it is saved. */
+function ImpactPreview({ impact, p }: { impact: Impact; p: number }) {
+  return (
+    <div
+      role="status"
+      aria-label="Effect on cases with a confirmed cause"
+      className="mt-2 rounded-lg border-2 border-uv-500 p-3 text-sm"
+    >
+      <p className="font-medium">{`At ${describeStrength(p)}, of ${impact.cases} cases with a confirmed cause:`}</p>
+      <ul className="tabular mt-1 list-disc pl-6">
+        <li>{`confirmed cause ranked first: ${impact.first.before} → ${impact.first.after}`}</li>
+        <li>{`in the top three: ${impact.topThree.before} → ${impact.topThree.after}`}</li>
+      </ul>
+      {impact.moved.length ? (
+        <ul className="mt-1 grid gap-1" aria-label="Cases that moved">
+          {impact.moved.map((m) => (
+            <li key={m.id}>
+              <Link className="underline" to={href("/cases/:caseId", { caseId: m.id })}>
+                {`case #${m.number}`}
+              </Link>
+              {` (${m.answerName}): ${ordinal(m.before)} → ${ordinal(m.after)}`}
+            </li>
+          ))}
+        </ul>
+      ) : (
+        <p className="mt-1">No case would move. Nothing is saved until you press Save strength.</p>
+      )}
+    </div>
+  );
+}
 
 function LinkList({
   label,
@@ -74,6 +121,7 @@ function LinkList({
   mayEdit,
   errors,
   empty,
+  preview,
 }: {
   label: string;
   link: "symptom" | "check";
@@ -81,6 +129,7 @@ function LinkList({
   mayEdit: boolean;
   errors: FormErrors | undefined;
   empty: string;
+  preview: Preview | null;
 }) {
   const busy = useNavigation().state === "submitting";
   if (rows.length === 0) return <p className="mt-2 text-graphite-700">{empty}</p>;
@@ -99,7 +148,6 @@ function LinkList({
             {r.note ? <p className="meta">{r.note}</p> : null}
             {mayEdit ? (
               <Form method="post" className="mt-2 flex flex-wrap items-end gap-2">
-                <input type="hidden" name="intent" value="strength" />
                 <input type="hidden" name="link" value={link} />
                 <input type="hidden" name="otherId" value={r.id} />
                 <label className="flex flex-col text-sm font-medium" htmlFor={field}>
@@ -113,13 +161,19 @@ function LinkList({
                     {...describedBy(errors, field)}
                   />
                 </label>
-                <button type="submit" className="btn" disabled={busy}>
+                <button type="submit" name="intent" value="preview" className="btn" disabled={busy}>
+                  Preview the effect
+                </button>
+                <button type="submit" name="intent" value="strength" className="btn" disabled={busy}>
                   Save strength
                 </button>
                 <span className="w-full">
                   <FieldError errors={errors} name={field} />
                 </span>
               </Form>
+            ) : null}
+            {preview && preview.link === link && preview.otherId === r.id ? (
+              <ImpactPreview impact={preview.impact} p={preview.p} />
             ) : null}
           </li>
         );
@@ -197,6 +251,7 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
           }))}
           mayEdit={mayEdit}
           errors={errors}
+          preview={actionData && "preview" in actionData ? actionData.preview : null}
           empty="No symptom is linked to it."
         />
       </section>
@@ -216,6 +271,7 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
           }))}
           mayEdit={mayEdit}
           errors={errors}
+          preview={actionData && "preview" in actionData ? actionData.preview : null}
           empty="No check is linked to it."
         />
       </section>

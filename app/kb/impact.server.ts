@@ -1,0 +1,101 @@
+// The workshop's cases with a confirmed cause, as the impact preview ranks them again, and the
+// preview of one link change against them (app/kb/impact.ts does the arithmetic).
+import { and, count, desc, eq, inArray, isNotNull } from "drizzle-orm";
+import type { Db } from "~/db/client.server";
+import { cases, causes, findings, observations, vehicles, workshops } from "~/db/schema";
+import { impactOf, type ImpactCase, type KbChange, withChange } from "./impact";
+import { loadKnowledge } from "./knowledge.server";
+import { vehicleFacts } from "./model";
+
+// The newest cases with a confirmed cause: enough to show a change's effect, few enough that one
+// preview stays well under a second of ranking.
+export const IMPACT_CASES = 100;
+
+async function confirmedCases(db: Db, workshopId: string): Promise<ImpactCase[]> {
+  const rows = await db
+    .select({
+      id: cases.id,
+      number: cases.number,
+      mileageKm: cases.mileageKm,
+      answerId: cases.conclusionCauseId,
+      answerName: causes.name,
+      fuelType: vehicles.fuelType,
+      drivetrain: vehicles.drivetrain,
+      year: vehicles.year,
+    })
+    .from(cases)
+    .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
+    .innerJoin(causes, eq(causes.id, cases.conclusionCauseId))
+    .where(
+      and(
+        eq(cases.workshopId, workshopId),
+        inArray(cases.state, ["concluded", "closed"]),
+        isNotNull(cases.conclusionCauseId),
+      ),
+    )
+    .orderBy(desc(cases.concludedAt), desc(cases.number))
+    .limit(IMPACT_CASES);
+  if (rows.length === 0) return [];
+  const ids = rows.map((r) => r.id);
+  const [obs, found] = await Promise.all([
+    db
+      .select({
+        caseId: observations.caseId,
+        symptomId: observations.symptomId,
+        present: observations.present,
+        source: observations.source,
+      })
+      .from(observations)
+      .where(inArray(observations.caseId, ids)),
+    db
+      .select({ caseId: findings.caseId, checkId: findings.checkId, result: findings.result })
+      .from(findings)
+      .where(inArray(findings.caseId, ids)),
+  ]);
+  return rows.map((r) => ({
+    id: r.id,
+    number: r.number,
+    answerId: r.answerId!,
+    answerName: r.answerName,
+    fuel: r.fuelType,
+    facts: vehicleFacts({
+      fuelType: r.fuelType,
+      drivetrain: r.drivetrain,
+      year: r.year,
+      mileageKm: r.mileageKm,
+    }),
+    evidence: {
+      observations: obs.filter((o) => o.caseId === r.id).map(({ caseId: _c, ...o }) => o),
+      findings: found.filter((f) => f.caseId === r.id).map(({ caseId: _c, ...f }) => f),
+    },
+  }));
+}
+
+/** How often each cause was confirmed on closed cases, by fuel: the priors the live ranking uses. */
+async function outcomesByFuel(db: Db, workshopId: string) {
+  const rows = await db
+    .select({ fuel: vehicles.fuelType, causeId: cases.conclusionCauseId, n: count() })
+    .from(cases)
+    .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
+    .where(
+      and(eq(cases.workshopId, workshopId), eq(cases.state, "closed"), isNotNull(cases.conclusionCauseId)),
+    )
+    .groupBy(vehicles.fuelType, cases.conclusionCauseId);
+  const out: Record<string, Record<string, number>> = {};
+  for (const r of rows) (out[r.fuel] ??= {})[r.causeId!] = r.n;
+  return out;
+}
+
+/** What one link change would do to the workshop's confirmed cases' rankings. */
+export async function previewChange(db: Db, workshopId: string, change: KbChange) {
+  const [w] = await db
+    .select({ kbVersion: workshops.kbVersion, labourRate: workshops.labourRatePerHour })
+    .from(workshops)
+    .where(eq(workshops.id, workshopId));
+  const kb = await loadKnowledge(db, workshopId, w.kbVersion);
+  const [list, outcomes] = await Promise.all([
+    confirmedCases(db, workshopId),
+    outcomesByFuel(db, workshopId),
+  ]);
+  return impactOf(kb, withChange(kb, change), list, w.labourRate, outcomes);
+}
