@@ -55,6 +55,32 @@ function settingsChange(before: Fields, after: Fields): string {
   return `changed the workshop's ${changed.map((k) => SETTING_WORDS[k](after[k])).join(", ")}`;
 }
 
+const CAUSE_FIELD_WORDS: Record<string, string> = {
+  description: "the technician's description",
+  ownerDescription: "the words for the owner",
+  ifLeft: "what happens if it is left",
+  baseRate: "the base rate",
+  repairMinutes: "the repair minutes",
+  partsCost: "the parts cost",
+  priority: "the priority",
+};
+
+/** "moved “Warped disc” under “Wheel hubs”, renamed it from “…”, changed the base rate from 6 to 4". */
+function causeEditSentence(a: Fields, b: Fields): string {
+  const changed = Array.isArray(a.changed) ? (a.changed as string[]) : [];
+  if (changed.length === 0) return `saved the cause “${a.name}” without changes`;
+  const parts: string[] = [];
+  if (changed.includes("parentId")) parts.push(`moved it under “${a.movedUnder}”`);
+  if (changed.includes("name")) parts.push(`renamed it from “${b.name}”`);
+  for (const f of changed.filter((x) => x in CAUSE_FIELD_WORDS))
+    parts.push(
+      ["description", "ownerDescription", "ifLeft"].includes(f)
+        ? `changed ${CAUSE_FIELD_WORDS[f]}`
+        : `changed ${CAUSE_FIELD_WORDS[f]} from ${b[f] ?? "none"}`,
+    );
+  return `edited the cause “${a.name}”: ${parts.join(", ")}`;
+}
+
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
 /** "imported the knowledge base “X” (version 4): 2 symptoms added, 219 updated; …". */
@@ -92,6 +118,8 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
   "case.close": () => "closed the case",
   "settings.update": (a, b) => settingsChange(b, a),
   "kb.import": (a) => importSentence(a),
+  "kb.cause.update": (a, b) => causeEditSentence(a, b),
+  "kb.cause.retire": (a) => `retired the cause “${a.name}”: it is no longer ranked`,
   "kb.propose": (a) =>
     a.kind === "cause"
       ? `proposed a new cause “${a.cause}” beside the others under “${a.under}”, shown as “${a.symptom}” ${describeStrength(Number(a.p))}`

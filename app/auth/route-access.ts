@@ -38,7 +38,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
     path: "/kb/causes/{cause}",
     record: true,
     GET: "kb:read",
-    POST: { strength: "kb:edit", preview: "kb:edit" },
+    POST: { strength: "kb:edit", preview: "kb:edit", edit: "kb:edit", retire: "kb:edit" },
   },
   "routes/kb/transfer.tsx": { path: "/kb/transfer", GET: "kb:edit", POST: "kb:edit" },
   "routes/settings/workshop.tsx": { path: "/settings", GET: "member", POST: "settings:manage" },

@@ -42,6 +42,7 @@ async function readKnowledge(db: Db, workshopId: string, version: number): Promi
         priority: causes.priority,
         repairMinutes: causes.repairMinutes,
         partsCost: causes.partsCost,
+        retiredAt: causes.retiredAt,
       })
       .from(causes)
       .where(eq(causes.workshopId, workshopId)),
@@ -73,7 +74,22 @@ async function readKnowledge(db: Db, workshopId: string, version: number): Promi
       .from(checkLinks)
       .where(eq(checkLinks.workshopId, workshopId)),
   ]);
-  return { kbVersion: version, symptoms: s, causes: c, checks: k, symptomLinks: sl, checkLinks: cl };
+  // Retired causes, and everything under them, are not ranked: leave them and their links out.
+  const retired = new Set(c.filter((x) => x.retiredAt).map((x) => x.id));
+  for (let grew = true; grew;) {
+    grew = false;
+    for (const x of c)
+      if (!retired.has(x.id) && x.parentId && retired.has(x.parentId)) grew = Boolean(retired.add(x.id));
+  }
+  const live = c.filter((x) => !retired.has(x.id)).map(({ retiredAt: _r, ...x }) => x);
+  return {
+    kbVersion: version,
+    symptoms: s,
+    causes: live,
+    checks: k,
+    symptomLinks: sl.filter((l) => !retired.has(l.causeId)),
+    checkLinks: cl.filter((l) => !retired.has(l.causeId)),
+  };
 }
 
 /** One check as the plan shows it, from the cached knowledge base; another workshop's is "not found". */

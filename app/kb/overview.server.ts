@@ -1,4 +1,4 @@
-import { asc, count, eq } from "drizzle-orm";
+import { asc, count, eq, sql } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { causes, checkLinks, checks, symptomLinks, symptoms, workshops } from "~/db/schema";
 
@@ -18,6 +18,7 @@ export async function kbOverview(db: Db, workshopId: string) {
       name: causes.name,
       system: causes.system,
       priority: causes.priority,
+      retired: sql<boolean>`${causes.retiredAt} is not null`,
     })
     .from(causes)
     .where(eq(causes.workshopId, workshopId))

@@ -4,7 +4,7 @@
 // key the workshop already has is replaced in place (cases that refer to it keep their link); the
 // import never deletes, because closed cases refer to what was there.
 import { randomUUID } from "node:crypto";
-import { eq, sql } from "drizzle-orm";
+import { and, eq, isNull, sql } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
@@ -30,7 +30,11 @@ export async function exportKnowledge(db: Db, workshopId: string): Promise<Knowl
   const [[w], s, c, k, sl, cl] = await Promise.all([
     db.select({ name: workshops.name }).from(workshops).where(eq(workshops.id, workshopId)),
     db.select().from(symptoms).where(eq(symptoms.workshopId, workshopId)),
-    db.select().from(causes).where(eq(causes.workshopId, workshopId)),
+    // A retired cause is not exported: a file brings in what a workshop ranks with.
+    db
+      .select()
+      .from(causes)
+      .where(and(eq(causes.workshopId, workshopId), isNull(causes.retiredAt))),
     db.select().from(checks).where(eq(checks.workshopId, workshopId)),
     db.select().from(symptomLinks).where(eq(symptomLinks.workshopId, workshopId)),
     db.select().from(checkLinks).where(eq(checkLinks.workshopId, workshopId)),
@@ -98,6 +102,7 @@ export async function exportKnowledge(db: Db, workshopId: string): Promise<Knowl
     causes: causeItems,
     checks: checkItems,
     symptomLinks: sl
+      .filter((l) => keyOf.has(l.causeId))
       .map((l) => ({
         symptom: keyOf.get(l.symptomId)!,
         cause: keyOf.get(l.causeId)!,
@@ -106,6 +111,7 @@ export async function exportKnowledge(db: Db, workshopId: string): Promise<Knowl
       }))
       .sort((a, b) => pairOrder([a.symptom, a.cause], [b.symptom, b.cause])),
     checkLinks: cl
+      .filter((l) => keyOf.has(l.causeId))
       .map((l) => ({
         check: keyOf.get(l.checkId)!,
         cause: keyOf.get(l.causeId)!,

@@ -95,6 +95,39 @@ describe("a cause's links in words", () => {
     await page.close();
   });
 
+  it("a senior moves a failure mode under another component, and the tree shows it there", async () => {
+    await browser.clearCookies();
+    const { page, errors } = await browser.newPage();
+    await signInAs(page, "tomas-varga");
+    await page.goto(`${baseUrl()}/kb/causes/${kbId("bramblegate", "cause", "brake_disc_corrosion")}`);
+    await hydrated(page);
+    const name = "Disc face corroded or scored after standing"; // seeds/kb/brakes.ts
+    await page.getByText("Edit this cause").click();
+    const under = page.getByLabel("Belongs under");
+    const current = await under.inputValue();
+    const options = await under
+      .locator("option")
+      .evaluateAll((os) =>
+        os.map((o) => ({ value: (o as HTMLOptionElement).value, text: o.textContent ?? "" })),
+      );
+    const target = options.find((o) => o.value !== current && o.text.startsWith("Brakes ›"))!;
+    await under.selectOption(target.value);
+    await page.getByRole("button", { name: "Save the cause" }).click();
+    const component = target.text.split(" › ")[1];
+    await page
+      .getByRole("status")
+      .filter({ hasText: `now under “${component}”` })
+      .waitFor();
+
+    await page.goto(`${baseUrl()}/kb`);
+    await hydrated(page);
+    await page.getByText("Brakes", { exact: true }).first().click();
+    const branch = page.locator("li", { has: page.locator(`p:text-is("${component}")`) });
+    await branch.getByRole("link", { name }).waitFor();
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it("a technician reads the links without the forms", async () => {
     await browser.clearCookies();
     const { page } = await browser.newPage();
@@ -107,6 +140,7 @@ describe("a cause's links in words", () => {
     await page.getByRole("heading", { name: "Checks that find it" }).waitFor();
     expect(await page.locator("[data-strength]").count()).toBeGreaterThan(1);
     expect(await page.getByRole("button", { name: "Save strength" }).count()).toBe(0);
+    expect(await page.getByText("Edit this cause").count()).toBe(0);
     await page.close();
   });
 });

@@ -10,6 +10,7 @@ import {
   pgTable,
   primaryKey,
   text,
+  timestamp,
   unique,
   uuid,
 } from "drizzle-orm/pg-core";
@@ -87,6 +88,8 @@ export const causes = pgTable(
     partsCost: numeric("parts_cost", { precision: 10, scale: 2, mode: "number" }),
     priority: priorityEnum("priority"),
     applicability: jsonb("applicability").$type<Applicability>().notNull().default({}),
+    // A retired cause is no longer ranked; cases that refer to it keep showing it.
+    retiredAt: timestamp("retired_at", { withTimezone: true }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },

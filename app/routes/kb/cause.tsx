@@ -1,16 +1,19 @@
 import { Form, href, Link, useNavigation } from "react-router";
+import { Fold } from "~/components/fold";
 import { z } from "zod";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { PriorityMark } from "~/components/priority";
 import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";
 import { formatMoney } from "~/domain/format";
-import { CAUSE_LEVEL_LABEL } from "~/domain/knowledge";
+import { CAUSE_LEVEL_LABEL, PRIORITIES, PRIORITY_COPY, SYSTEM_LABEL } from "~/domain/knowledge";
 import { describeStrength, readStrength, STRENGTHS } from "~/domain/link-strength";
 import { can } from "~/domain/permissions";
 import type { FormErrors } from "~/http/forms";
 import { dbContext } from "~/http/context";
 import { invalid, onForm, zodErrors } from "~/http/forms.server";
 import { causeWithLinks, setLinkStrength } from "~/kb/cause-links.server";
+import { possibleParents, retireCause, updateCause } from "~/kb/cause-edit.server";
+import { parseDecimal } from "~/measure";
 import type { Impact } from "~/kb/impact";
 import { previewChange } from "~/kb/impact.server";
 import { getWorkshop } from "~/workshop/settings.server";
@@ -19,10 +22,13 @@ import type { Route } from "./+types/cause";
 export async function loader({ params, context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "kb:read");
   const db = context.get(dbContext);
+  const found = await causeWithLinks(db, member.workshopId, params.causeId);
+  const mayEdit = can(member.role, "kb:edit");
   return {
-    ...(await causeWithLinks(db, member.workshopId, params.causeId)),
+    ...found,
     currency: (await getWorkshop(db, member.workshopId)).currency,
-    mayEdit: can(member.role, "kb:edit"),
+    mayEdit,
+    parents: mayEdit ? await possibleParents(db, member.workshopId, found.cause.level) : [],
   };
 }
 
@@ -36,12 +42,62 @@ const StrengthForm = z.object({
   strength: z.string().max(40, "Say it in a word or a figure."),
 });
 
+const number = (message: string, min: number, max: number) =>
+  z
+    .string()
+    .trim()
+    .transform((v, ctx) => {
+      const n = parseDecimal(v);
+      if (n === null || n < min || n > max) {
+        ctx.addIssue({ code: "custom", message });
+        return z.NEVER;
+      }
+      return n;
+    });
+const EditForm = z.object({
+  intent: z.literal("edit"),
+  name: z.string().trim().min(3, "Name it in at least 3 characters.").max(200),
+  parentId: z.string().optional(),
+  description: z.string().trim().max(2000),
+  ownerDescription: z.string().trim().max(1000),
+  ifLeft: z.string().trim().max(1000),
+  baseRate: number("A base rate is a number above 0, such as 2 or 0.5.", 0.0001, 1000).optional(),
+  repairMinutes: number("Repair minutes are a whole number from 0 to 10,000.", 0, 10_000).optional(),
+  partsCost: number("The parts cost is a number, such as 110 or 1,250.", 0, 1_000_000).optional(),
+  priority: z.enum(PRIORITIES, { message: "Choose a priority." }).optional(),
+});
+
 export async function action({ request, params, context }: Route.ActionArgs) {
   const db = context.get(dbContext);
   // Another workshop's cause does not exist for this member, whatever their role.
-  await causeWithLinks(db, context.get(memberContext).workshopId, params.causeId);
+  const { cause } = await causeWithLinks(db, context.get(memberContext).workshopId, params.causeId);
   const member = requirePermission(context.get(memberContext), "kb:edit");
-  const parsed = StrengthForm.safeParse(Object.fromEntries(await request.formData()));
+  const form = Object.fromEntries(await request.formData());
+  if (form.intent === "retire") {
+    if (form.confirm !== "yes") return invalid({ confirm: ["Tick the box to say you mean to retire it."] });
+    return onForm(async () => {
+      const done = await retireCause(db, member, params.causeId);
+      return `“${done.name}” is retired: it is no longer ranked. Cases that name it still show it.`;
+    });
+  }
+  if (form.intent === "edit") {
+    const edit = EditForm.safeParse(form);
+    if (!edit.success) return invalid(zodErrors(edit.error));
+    const { intent: _i, ...fields } = edit.data;
+    if (cause.level === "failure_mode" && (fields.baseRate === undefined || fields.priority === undefined))
+      return invalid({ baseRate: ["A failure mode needs a base rate and a priority."] });
+    return onForm(async () => {
+      const done = await updateCause(db, member, params.causeId, {
+        ...fields,
+        parentId: fields.parentId || null,
+        repairMinutes: fields.repairMinutes === undefined ? undefined : Math.round(fields.repairMinutes),
+      });
+      return done.changed.length
+        ? `Saved${done.movedUnder ? `, now under “${done.movedUnder}”` : ""}. Knowledge base now at version ${done.kbVersion}.`
+        : "Nothing had changed.";
+    });
+  }
+  const parsed = StrengthForm.safeParse(form);
   if (!parsed.success) return invalid(zodErrors(parsed.error));
   const { intent, link, otherId, strength } = parsed.data;
   const read = readStrength(strength);
@@ -183,7 +239,7 @@ function LinkList({
 }
 
 export default function CausePage({ loaderData, actionData }: Route.ComponentProps) {
-  const { cause, parent, symptoms, checks, currency, mayEdit } = loaderData;
+  const { cause, parent, symptoms, checks, currency, mayEdit, parents } = loaderData;
   const errors = actionData?.errors;
   const leaf = cause.level === "failure_mode";
   const facts: [string, string][] = [
@@ -236,7 +292,13 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
             </div>
           ))}
       </dl>
+      {cause.retiredAt ? (
+        <p className="rounded-lg border-2 border-rule bg-card p-3 font-medium">
+          Retired: no longer ranked. Cases that name it still show it.
+        </p>
+      ) : null}
       <FormMessages errors={errors} notice={actionData?.notice} />
+      {mayEdit && !cause.retiredAt ? <CauseEditor cause={cause} parents={parents} errors={errors} /> : null}
       <section aria-labelledby="shows" className="card">
         <h2 id="shows" className="text-xl font-semibold">
           Symptoms it shows
@@ -293,5 +355,144 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
         </datalist>
       </section>
     </div>
+  );
+}
+
+type CauseRow = Route.ComponentProps["loaderData"]["cause"];
+type Parent = Route.ComponentProps["loaderData"]["parents"][number];
+
+/** A senior's editor of the cause's words, figures and place; folded, so the page reads first. */
+function CauseEditor({
+  cause,
+  parents,
+  errors,
+}: {
+  cause: CauseRow;
+  parents: Parent[];
+  errors: FormErrors | undefined;
+}) {
+  const busy = useNavigation().state === "submitting";
+  const leaf = cause.level === "failure_mode";
+  const text = (name: "name" | "description" | "ownerDescription" | "ifLeft", label: string, rows = 0) => (
+    <label className="grid gap-1 text-sm font-medium" htmlFor={`edit-${name}`}>
+      {label}
+      {rows ? (
+        <textarea
+          id={`edit-${name}`}
+          name={name}
+          rows={rows}
+          defaultValue={cause[name]}
+          className="field py-2"
+          {...describedBy(errors, name)}
+        />
+      ) : (
+        <input
+          id={`edit-${name}`}
+          name={name}
+          defaultValue={cause[name]}
+          className="field"
+          {...describedBy(errors, name)}
+        />
+      )}
+      <FieldError errors={errors} name={name} />
+    </label>
+  );
+  const figure = (name: "baseRate" | "repairMinutes" | "partsCost", label: string) => (
+    <label className="grid gap-1 text-sm font-medium" htmlFor={`edit-${name}`}>
+      {label}
+      <input
+        id={`edit-${name}`}
+        name={name}
+        inputMode="decimal"
+        defaultValue={cause[name] ?? ""}
+        className="field"
+        {...describedBy(errors, name)}
+      />
+      <FieldError errors={errors} name={name} />
+    </label>
+  );
+  return (
+    <section aria-labelledby="edit" className="rounded-card border border-rule bg-card p-4">
+      <Fold
+        summaryClassName="min-h-tap cursor-pointer content-center font-semibold"
+        summary={<span id="edit">Edit this cause</span>}
+      >
+        <Form method="post" className="mt-2 grid gap-3">
+          {text("name", "Name")}
+          {cause.level !== "system" ? (
+            <label className="grid gap-1 text-sm font-medium" htmlFor="edit-parentId">
+              Belongs under
+              <select
+                id="edit-parentId"
+                name="parentId"
+                defaultValue={cause.parentId ?? ""}
+                className="field"
+                {...describedBy(errors, "parentId")}
+              >
+                {parents.map((p) => (
+                  <option key={p.id} value={p.id}>
+                    {`${SYSTEM_LABEL[p.system as keyof typeof SYSTEM_LABEL] ?? p.system} › ${p.name}`}
+                  </option>
+                ))}
+              </select>
+              <FieldError errors={errors} name="parentId" />
+            </label>
+          ) : null}
+          {text("description", "For the technician", 3)}
+          {text("ownerDescription", "For the owner, in plain words", 2)}
+          {text("ifLeft", "If it is left", 2)}
+          {leaf ? (
+            <div className="grid gap-3 sm:grid-cols-2">
+              {figure("baseRate", "Base rate (relative frequency)")}
+              {figure("repairMinutes", "Repair, minutes of labour")}
+              {figure("partsCost", "Parts, typical cost")}
+              <label className="grid gap-1 text-sm font-medium" htmlFor="edit-priority">
+                Priority for the owner
+                <select
+                  id="edit-priority"
+                  name="priority"
+                  defaultValue={cause.priority ?? "soon"}
+                  className="field"
+                >
+                  {PRIORITIES.map((x) => (
+                    <option key={x} value={x}>
+                      {PRIORITY_COPY[x].label}
+                    </option>
+                  ))}
+                </select>
+              </label>
+            </div>
+          ) : null}
+          <div className="flex flex-wrap gap-2">
+            <button type="submit" name="intent" value="edit" className="btn-primary" disabled={busy}>
+              Save the cause
+            </button>
+          </div>
+        </Form>
+        <Form method="post" className="mt-4 border-t border-rule pt-3">
+          <p className="text-sm text-graphite-700">
+            Retiring takes it out of every ranking from the next version on; cases that name it keep showing
+            it.
+          </p>
+          <label
+            className="mt-2 flex min-h-tap items-center gap-2 text-sm font-medium"
+            htmlFor="retire-confirm"
+          >
+            <input
+              id="retire-confirm"
+              type="checkbox"
+              name="confirm"
+              value="yes"
+              {...describedBy(errors, "confirm")}
+            />
+            Yes, retire it
+          </label>
+          <FieldError errors={errors} name="confirm" />
+          <button type="submit" name="intent" value="retire" className="btn mt-2" disabled={busy}>
+            Retire this cause
+          </button>
+        </Form>
+      </Fold>
+    </section>
   );
 }

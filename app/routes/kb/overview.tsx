@@ -97,6 +97,7 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
                           >
                             {fm.name}
                           </Link>
+                          {fm.retired ? <span className="meta">retired</span> : null}
                           {fm.priority ? <PriorityMark priority={fm.priority} /> : null}
                         </li>
                       ))}

@@ -1,0 +1,1 @@
+ALTER TABLE "causes" ADD COLUMN "retired_at" timestamp with time zone;
