@@ -4,7 +4,7 @@ import type { Plan, Ranking, WhatIf } from "~/reasoning";
 import type { Knowledge } from "~/kb/model";
 
 import { PLAN_OPEN, SENT_CAUSES, SENT_STEPS, WHY_CAUSES } from "./shown";
-import { describeRule } from "~/measure";
+import { describeRule, speedsIn } from "~/measure";
 import type { UnitSystem } from "~/domain/vehicles";
 
 // Rules are few and their words do not change: put each into words once per unit system.
@@ -134,7 +134,13 @@ export function presentDiagnosis(
     // when such a check is opened): `detailed` says which.
     if (i >= DETAILED_STEPS)
       return { ...shown, detailed: false, instructions: [] as string[], failMeans: "" };
-    return { ...shown, detailed: true, instructions: k?.instructions ?? [], failMeans: k?.failMeans ?? "" };
+    return {
+      ...shown,
+      detailed: true,
+      // Road speeds in the steps are read in the workshop's units.
+      instructions: (k?.instructions ?? []).map((line) => speedsIn(line, units)),
+      failMeans: speedsIn(k?.failMeans ?? "", units),
+    };
   };
   const whatIfFor = (w: WhatIf | null) =>
     w ? { checkId: w.checkId, pFail: w.pFail, ifFail: outcome(w.ifFail), ifPass: outcome(w.ifPass) } : null;

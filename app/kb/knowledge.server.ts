@@ -2,6 +2,7 @@ import { eq } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { causes, checkLinks, checks, symptomLinks, symptoms, workshops } from "~/db/schema";
 import { refuse, requireId } from "~/http/errors.server";
+import { speedsIn } from "~/measure";
 import { kbCache } from "./cache";
 import type { Knowledge } from "./model";
 
@@ -95,15 +96,20 @@ async function readKnowledge(db: Db, workshopId: string, version: number): Promi
 /** One check as the plan shows it, from the cached knowledge base; another workshop's is "not found". */
 export async function checkDetails(db: Db, workshopId: string, checkId: string) {
   requireId(checkId, "No such check in this workshop's knowledge base.");
-  const kb = await loadKnowledge(db, workshopId, await kbVersion(db, workshopId));
+  const [w] = await db
+    .select({ v: workshops.kbVersion, units: workshops.units })
+    .from(workshops)
+    .where(eq(workshops.id, workshopId));
+  const kb = await loadKnowledge(db, workshopId, w?.v ?? 0);
   const k = kb.checks.find((c) => c.id === checkId);
   if (!k) refuse(404, "No such check in this workshop's knowledge base.");
   return {
     id: k.id,
     name: k.name,
-    instructions: k.instructions,
+    // Road speeds in the steps are read in the workshop's units.
+    instructions: (k.instructions ?? []).map((line) => speedsIn(line, w.units)),
     tools: k.tools,
     cautions: k.cautions,
-    failMeans: k.failMeans,
+    failMeans: speedsIn(k.failMeans ?? "", w.units),
   };
 }

@@ -28,3 +28,4 @@ export {
   showQuantity,
 } from "./unit-system";
 export type { Parsed, UnitSystem } from "./unit-system";
+export { speedsIn } from "./speeds";
