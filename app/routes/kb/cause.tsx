@@ -203,29 +203,29 @@ function LinkList({
             </div>
             {r.note ? <p className="meta">{r.note}</p> : null}
             {mayEdit ? (
-              <Form method="post" className="mt-2 flex flex-wrap items-end gap-2">
+              <Form method="post" className="mt-2 grid gap-1">
                 <input type="hidden" name="link" value={link} />
                 <input type="hidden" name="otherId" value={r.id} />
-                <label className="flex flex-col text-sm font-medium" htmlFor={field}>
+                <label className="text-sm font-medium" htmlFor={field}>
                   {`New strength for ${r.name}`}
+                </label>
+                <div className="flex flex-wrap items-center gap-2">
                   <input
                     id={field}
                     name="strength"
                     list="strength-words"
                     placeholder="a word, or 40%"
-                    className="field mt-1 w-56 max-w-full"
+                    className="field w-44 max-w-full"
                     {...describedBy(errors, field)}
                   />
-                </label>
-                <button type="submit" name="intent" value="preview" className="btn" disabled={busy}>
-                  Preview the effect
-                </button>
-                <button type="submit" name="intent" value="strength" className="btn" disabled={busy}>
-                  Save strength
-                </button>
-                <span className="w-full">
-                  <FieldError errors={errors} name={field} />
-                </span>
+                  <button type="submit" name="intent" value="preview" className="btn" disabled={busy}>
+                    Preview the effect
+                  </button>
+                  <button type="submit" name="intent" value="strength" className="btn" disabled={busy}>
+                    Save strength
+                  </button>
+                </div>
+                <FieldError errors={errors} name={field} />
               </Form>
             ) : null}
             {preview && preview.link === link && preview.otherId === r.id ? (

@@ -87,7 +87,7 @@ export default function KnowledgeTransfer({ loaderData, actionData }: Route.Comp
           Version {counts.kbVersion}: {counts.symptoms} symptoms, {counts.causes} causes, {counts.checks}{" "}
           checks, {counts.symptomLinks + counts.checkLinks} links.
         </p>
-        <a className="btn mt-3" href={href("/kb/export")} download>
+        <a className="btn mt-3 inline-flex items-center" href={href("/kb/export")} download>
           Download as a file (JSON)
         </a>
       </section>
