@@ -4,10 +4,11 @@
 import { and, eq, isNull, sql } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
-import type { Db, Tx } from "~/db/client.server";
-import { causes, workshops } from "~/db/schema";
+import type { Db } from "~/db/client.server";
+import { causes } from "~/db/schema";
 import type { Priority } from "~/domain/knowledge";
 import { refuse, requireId } from "~/http/errors.server";
+import { nextKbVersion } from "./version.server";
 
 type Member = Pick<CurrentMember, "workshopId" | "userId">;
 const NOT_FOUND = "No such cause in this workshop's knowledge base.";
@@ -41,14 +42,7 @@ export async function possibleParents(
     .orderBy(causes.system, causes.name);
 }
 
-const bump = async (tx: Tx, workshopId: string) =>
-  (
-    await tx
-      .update(workshops)
-      .set({ kbVersion: sql`${workshops.kbVersion} + 1` })
-      .where(eq(workshops.id, workshopId))
-      .returning({ v: workshops.kbVersion })
-  )[0].v;
+const bump = nextKbVersion;
 
 export async function updateCause(db: Db, member: Member, causeId: string, edit: CauseEdit) {
   requireId(causeId, NOT_FOUND);

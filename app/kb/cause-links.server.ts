@@ -5,9 +5,10 @@ import { and, asc, eq, sql } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
-import { causes, checkLinks, checks, symptomLinks, symptoms, workshops } from "~/db/schema";
+import { causes, checkLinks, checks, symptomLinks, symptoms } from "~/db/schema";
 import { rescaleBands } from "~/domain/link-strength";
 import { refuse, requireId } from "~/http/errors.server";
+import { nextKbVersion } from "./version.server";
 
 const NOT_FOUND = "No such cause in this workshop's knowledge base.";
 
@@ -97,12 +98,7 @@ export async function setLinkStrength(
         .set({ pFail: change.p, graded: row.graded ? rescaleBands(row.graded, change.p) : null })
         .where(and(eq(checkLinks.causeId, change.causeId), eq(checkLinks.checkId, change.otherId)));
     }
-    // A new version: the cached models and Quick find indexes of the old one are dropped.
-    const [w] = await tx
-      .update(workshops)
-      .set({ kbVersion: sql`${workshops.kbVersion} + 1` })
-      .where(eq(workshops.id, member.workshopId))
-      .returning({ kbVersion: workshops.kbVersion });
+    const kbVersion = await nextKbVersion(tx, member.workshopId);
     await audit(tx, {
       workshopId: member.workshopId,
       actorUserId: member.userId,
@@ -110,8 +106,8 @@ export async function setLinkStrength(
       entity: change.link === "symptom" ? "symptom_link" : "check_link",
       entityId: change.causeId,
       before: { p: before },
-      after: { p: change.p, link: change.link, cause: cause.name, other: otherName, kbVersion: w.kbVersion },
+      after: { p: change.p, link: change.link, cause: cause.name, other: otherName, kbVersion },
     });
-    return { before, after: change.p, causeName: cause.name, otherName, kbVersion: w.kbVersion };
+    return { before, after: change.p, causeName: cause.name, otherName, kbVersion };
   });
 }

@@ -8,10 +8,11 @@ import { alias } from "drizzle-orm/pg-core";
 import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
-import { cases, causes, kbProposals, members, symptomLinks, symptoms, users, workshops } from "~/db/schema";
+import { cases, causes, kbProposals, members, symptomLinks, symptoms, users } from "~/db/schema";
 import type { Priority } from "~/domain/knowledge";
 import type { ProposalKind } from "~/domain/proposals";
 import { refuse, requireId } from "~/http/errors.server";
+import { nextKbVersion } from "./version.server";
 
 type Member = Pick<CurrentMember, "workshopId" | "userId" | "memberId">;
 
@@ -189,10 +190,7 @@ export async function reviewProposal(db: Db, member: Member, proposalId: string,
         .insert(symptomLinks)
         .values({ workshopId: member.workshopId, symptomId: p.symptomId, causeId, p: p.p })
         .onConflictDoUpdate({ target: [symptomLinks.symptomId, symptomLinks.causeId], set: { p: p.p } });
-      await tx
-        .update(workshops)
-        .set({ kbVersion: sql`${workshops.kbVersion} + 1` })
-        .where(eq(workshops.id, member.workshopId));
+      await nextKbVersion(tx, member.workshopId);
       made = { cause: causeName, before: existing?.p ?? null, causeId };
     }
     await tx

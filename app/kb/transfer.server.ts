@@ -4,7 +4,7 @@
 // key the workshop already has is replaced in place (cases that refer to it keep their link); the
 // import never deletes, because closed cases refer to what was there.
 import { randomUUID } from "node:crypto";
-import { and, eq, isNull, sql } from "drizzle-orm";
+import { and, eq, isNull } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
@@ -20,6 +20,7 @@ import {
 } from "~/domain/knowledge-document";
 import { documentProblems, type Problem } from "~/domain/knowledge-integrity";
 import { copyKnowledgeBase, type KbItemKind } from "./copy.server";
+import { nextKbVersion } from "./version.server";
 
 const LEVEL_ORDER = { system: 0, component: 1, failure_mode: 2 } as const;
 const byKey = (a: { key: string }, b: { key: string }) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0);
@@ -218,20 +219,15 @@ export async function importKnowledge(
         (kind, key) => existing.get(`${kind}:${key}`) ?? randomUUID(),
         "update",
       );
-      // A new version: cached models and Quick find indexes of the old one are dropped.
-      const [w] = await tx
-        .update(workshops)
-        .set({ kbVersion: sql`${workshops.kbVersion} + 1` })
-        .where(eq(workshops.id, member.workshopId))
-        .returning({ kbVersion: workshops.kbVersion });
+      const kbVersion = await nextKbVersion(tx, member.workshopId);
       await audit(tx, {
         workshopId: member.workshopId,
         actorUserId: member.userId,
         action: "kb.import",
         entity: "knowledge_base",
-        after: { name: doc.name, counts, kbVersion: w.kbVersion },
+        after: { name: doc.name, counts, kbVersion },
       });
-      return { ok: true as const, name: doc.name, counts, kbVersion: w.kbVersion };
+      return { ok: true as const, name: doc.name, counts, kbVersion };
     });
   } catch (error) {
     // A rule of the workshop's own tables (a tree node of this workshop made a failure mode while
