@@ -55,6 +55,22 @@ function settingsChange(before: Fields, after: Fields): string {
   return `changed the workshop's ${changed.map((k) => SETTING_WORDS[k](after[k])).join(", ")}`;
 }
 
+const CHECK_FIELD_WORDS: Record<string, string> = {
+  name: "its name",
+  instructions: "its steps",
+  tools: "its tools",
+  minutes: "its minutes",
+  consumablesCost: "its consumables cost",
+  access: "the access it needs",
+  skill: "who may do it",
+  cautions: "its cautions",
+  quantity: "the quantity measured",
+  unit: "its unit",
+  rule: "its rule",
+  failMeans: "what a fail means",
+  falseAlarm: "its false-alarm rate",
+};
+
 const CAUSE_FIELD_WORDS: Record<string, string> = {
   description: "the technician's description",
   ownerDescription: "the words for the owner",
@@ -119,6 +135,10 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
   "settings.update": (a, b) => settingsChange(b, a),
   "kb.import": (a) => importSentence(a),
   "kb.cause.update": (a, b) => causeEditSentence(a, b),
+  "kb.check.update": (a) => {
+    const changed = Array.isArray(a.changed) ? (a.changed as string[]) : [];
+    return `edited the check “${a.name}”: changed ${changed.map((f) => CHECK_FIELD_WORDS[f] ?? f).join(", ") || "nothing"}`;
+  },
   "kb.cause.retire": (a) => `retired the cause “${a.name}”: it is no longer ranked`,
   "kb.propose": (a) =>
     a.kind === "cause"

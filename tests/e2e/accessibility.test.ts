@@ -29,7 +29,14 @@ const VISITS: { login: string | null; paths: string[] }[] = [
   { login: "ollie-mbeki", paths: [CASE("b2")] },
   {
     login: "tomas-varga",
-    paths: [CASE("b3"), "/settings/audit", "/kb/transfer", "/kb/proposals", CAUSE("brake_disc_runout_dtv")],
+    paths: [
+      CASE("b3"),
+      "/settings/audit",
+      "/kb/transfer",
+      "/kb/proposals",
+      CAUSE("brake_disc_runout_dtv"),
+      `/kb/checks/${kbId("bramblegate", "check", "disc_runout_dial_gauge")}`,
+    ],
   },
   { login: "dana-reyes", paths: [CASE("b4"), CASE("b5")] },
   { login: "ines-okafor", paths: ["/settings", "/settings/members", "/settings/audit"] },

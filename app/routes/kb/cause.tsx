@@ -196,7 +196,13 @@ function LinkList({
         return (
           <li key={r.id} aria-label={r.name} className="rounded-lg border border-rule p-3">
             <div className="flex flex-wrap items-baseline justify-between gap-2">
-              <span className="font-medium">{r.name}</span>
+              {link === "check" ? (
+                <Link className="font-medium underline" to={href("/kb/checks/:checkId", { checkId: r.id })}>
+                  {r.name}
+                </Link>
+              ) : (
+                <span className="font-medium">{r.name}</span>
+              )}
               <span className="tabular" data-strength>
                 {describeStrength(r.p)}
               </span>
