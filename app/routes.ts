@@ -17,6 +17,7 @@ export default [
     route("kb/proposals", "routes/kb/proposals.tsx"),
     route("kb/causes/:causeId", "routes/kb/cause.tsx"),
     route("kb/checks/:checkId", "routes/kb/check.tsx"),
+    route("kb/symptoms/:symptomId", "routes/kb/symptom.tsx"),
     route("kb/transfer", "routes/kb/transfer.tsx"),
     route("settings", "routes/settings/workshop.tsx"),
     route("settings/members", "routes/settings/members.tsx"),

@@ -55,6 +55,15 @@ function settingsChange(before: Fields, after: Fields): string {
   return `changed the workshop's ${changed.map((k) => SETTING_WORDS[k](after[k])).join(", ")}`;
 }
 
+const SYMPTOM_FIELD_WORDS: Record<string, string> = {
+  name: "its name",
+  synonyms: "the words people use for it",
+  kind: "its kind",
+  code: "its trouble code",
+  conditions: "when it shows",
+  leak: "how often it shows without a listed cause",
+};
+
 const CHECK_FIELD_WORDS: Record<string, string> = {
   name: "its name",
   instructions: "its steps",
@@ -138,6 +147,10 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
   "kb.check.update": (a) => {
     const changed = Array.isArray(a.changed) ? (a.changed as string[]) : [];
     return `edited the check “${a.name}”: changed ${changed.map((f) => CHECK_FIELD_WORDS[f] ?? f).join(", ") || "nothing"}`;
+  },
+  "kb.symptom.update": (a) => {
+    const changed = Array.isArray(a.changed) ? (a.changed as string[]) : [];
+    return `edited the symptom “${a.name}”: changed ${changed.map((f) => SYMPTOM_FIELD_WORDS[f] ?? f).join(", ") || "nothing"}`;
   },
   "kb.cause.retire": (a) => `retired the cause “${a.name}”: it is no longer ranked`,
   "kb.propose": (a) =>

@@ -10,7 +10,7 @@ import type { Permission } from "~/domain/permissions";
 export type RouteAccessLevel = "public" | "account" | "no-workshop" | "member" | Permission;
 
 export type RouteAccess = {
-  path: string; // a concrete URL to try; {case} is an open demo case of the Bramblegate workshop, {check} one of its checks, {cause} one of its failure modes
+  path: string; // a concrete URL to try; {case} is an open demo case of the Bramblegate workshop, {check} one of its checks, {cause} one of its failure modes, {symptom} one of its symptoms
   api?: true; // JSON route: 401/403 answers instead of redirects
   record?: true; // the URL names a record of one workshop: members of another get 404
   GET?: RouteAccessLevel;
@@ -29,6 +29,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/cases/list.tsx": { path: "/cases", GET: "case:read" },
   "routes/kb/overview.tsx": { path: "/kb", GET: "kb:read" },
   "routes/kb/export.ts": { path: "/kb/export", GET: "kb:read" },
+  "routes/kb/symptom.tsx": { path: "/kb/symptoms/{symptom}", record: true, GET: "kb:read", POST: "kb:edit" },
   "routes/kb/check.tsx": { path: "/kb/checks/{check}", record: true, GET: "kb:read", POST: "kb:edit" },
   "routes/kb/proposals.tsx": {
     path: "/kb/proposals",

@@ -37,6 +37,7 @@ const OPEN_CASE = seedId("case:b1");
 const A_CHECK = kbId("bramblegate", "check", "brake_road_test");
 // A failure mode of the same knowledge base (seeds/kb/brakes.ts).
 const A_CAUSE = kbId("bramblegate", "cause", "brake_pad_noise");
+const A_SYMPTOM = kbId("bramblegate", "symptom", "squeal_braking");
 const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 2 });
 const actors: Actor[] = [{ name: "anonymous", kind: "anonymous" }];
 
@@ -131,7 +132,7 @@ describe("authorization matrix", () => {
               ? `rl_session=${await createSession(db, actor.userId, "spare")}`
               : actor.cookie;
           const res = await fetch(
-            `${base}${rule.path.replace("{case}", OPEN_CASE).replace("{check}", A_CHECK).replace("{cause}", A_CAUSE)}`,
+            `${base}${rule.path.replace("{case}", OPEN_CASE).replace("{check}", A_CHECK).replace("{cause}", A_CAUSE).replace("{symptom}", A_SYMPTOM)}`,
             {
               method,
               redirect: "manual",

@@ -115,7 +115,12 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
           <ul className="mt-3 grid gap-2">
             {symptoms.map((s) => (
               <li key={s.id} id={`symptom-${s.id}`} className="rounded-lg border border-rule bg-card p-3">
-                <p className="font-medium">{s.name}</p>
+                <Link
+                  className="inline-flex min-h-tap items-center font-medium underline decoration-rule underline-offset-2"
+                  to={href("/kb/symptoms/:symptomId", { symptomId: s.id })}
+                >
+                  {s.name}
+                </Link>
                 {s.synonyms.length ? (
                   <p className="text-sm text-graphite-600">Also: {s.synonyms.join(", ")}</p>
                 ) : null}
