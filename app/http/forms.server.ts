@@ -1,5 +1,6 @@
 import { data } from "react-router";
 import { z, type ZodError } from "zod";
+import { parseDecimal } from "~/measure";
 import { refusalMessage } from "./errors.server";
 import type { FormAnswer, FormErrors } from "./forms";
 
@@ -18,6 +19,20 @@ export function zodErrors(error: ZodError): FormErrors {
     ...(flat.formErrors.length ? { form: flat.formErrors } : {}),
   };
 }
+
+/**
+ * A number typed in a form field, as people type it ("1,250.50", "12 %"), within [min, max]; the
+ * message says what is wanted. Thousands separators are allowed (app/measure's parseDecimal).
+ */
+export const figureBetween = (message: string, min: number, max: number) =>
+  z.string().transform((v, ctx) => {
+    const n = parseDecimal(v.replace(/%$/, "").trim());
+    if (n === null || n < min || n > max) {
+      ctx.addIssue({ code: "custom", message });
+      return z.NEVER;
+    }
+    return n;
+  });
 
 /** Parses a form with a schema: the values, or the refusal to return. */
 export async function readForm<S extends z.ZodType>(

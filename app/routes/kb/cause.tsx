@@ -10,10 +10,9 @@ import { describeStrength, readStrength, STRENGTHS } from "~/domain/link-strengt
 import { can } from "~/domain/permissions";
 import type { FormErrors } from "~/http/forms";
 import { dbContext } from "~/http/context";
-import { invalid, onForm, zodErrors } from "~/http/forms.server";
+import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
 import { causeWithLinks, setLinkStrength } from "~/kb/cause-links.server";
 import { possibleParents, retireCause, updateCause } from "~/kb/cause-edit.server";
-import { parseDecimal } from "~/measure";
 import type { Impact } from "~/kb/impact";
 import { previewChange } from "~/kb/impact.server";
 import { getWorkshop } from "~/workshop/settings.server";
@@ -42,18 +41,7 @@ const StrengthForm = z.object({
   strength: z.string().max(40, "Say it in a word or a figure."),
 });
 
-const number = (message: string, min: number, max: number) =>
-  z
-    .string()
-    .trim()
-    .transform((v, ctx) => {
-      const n = parseDecimal(v);
-      if (n === null || n < min || n > max) {
-        ctx.addIssue({ code: "custom", message });
-        return z.NEVER;
-      }
-      return n;
-    });
+const number = figureBetween;
 const EditForm = z.object({
   intent: z.literal("edit"),
   name: z.string().trim().min(3, "Name it in at least 3 characters.").max(200),

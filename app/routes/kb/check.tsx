@@ -3,7 +3,7 @@ import { Form, href, Link, useNavigation } from "react-router";
 import { z } from "zod";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { Cautions } from "~/components/case/cautions";
-import { Fold } from "~/components/fold";
+import { BackToKb, EditorFold, TextField } from "~/components/kb/editor";
 import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";
 import { CAUTION_LABEL, CAUTIONS, CHECK_ACCESS, CHECK_ACCESS_LABEL } from "~/domain/knowledge";
 import { describeStrength } from "~/domain/link-strength";
@@ -11,9 +11,9 @@ import { SKILLS } from "~/domain/people";
 import { can } from "~/domain/permissions";
 import type { FormErrors } from "~/http/forms";
 import { dbContext } from "~/http/context";
-import { invalid, onForm, zodErrors } from "~/http/forms.server";
+import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
 import { checkEditProblems, checkWithLinks, updateCheck } from "~/kb/check-edit.server";
-import { compileRule, parseDecimal } from "~/measure";
+import { compileRule } from "~/measure";
 import type { Route } from "./+types/check";
 
 export async function loader({ params, context }: Route.LoaderArgs) {
@@ -29,15 +29,7 @@ const lines = (v: string) =>
     .split(/\r?\n/)
     .map((l) => l.trim())
     .filter(Boolean);
-const figure = (message: string, min: number, max: number) =>
-  z.string().transform((v, ctx) => {
-    const n = parseDecimal(v.replace(/%$/, "").trim());
-    if (n === null || n < min || n > max) {
-      ctx.addIssue({ code: "custom", message });
-      return z.NEVER;
-    }
-    return n;
-  });
+const figure = figureBetween;
 const EditForm = z.object({
   name: z.string().trim().min(3, "Name it in at least 3 characters.").max(200),
   instructions: z
@@ -105,11 +97,7 @@ export default function CheckPage({ loaderData, actionData }: Route.ComponentPro
   const errors = actionData?.errors;
   return (
     <div className="grid max-w-3xl gap-5">
-      <p>
-        <Link className="inline-flex min-h-tap items-center text-sm text-uv-700 underline" to={href("/kb")}>
-          Knowledge base
-        </Link>
-      </p>
+      <BackToKb />
       <div>
         <p className="meta">Check</p>
         <h1 className="text-2xl font-semibold">{check.name}</h1>
@@ -162,125 +150,101 @@ function CheckEditor({ check, errors }: { check: CheckRow; errors: FormErrors | 
     } catch (e) {
       ruleProblem = (e as Error).message;
     }
-  const input = (
-    name: string,
-    label: string,
-    value: string | number,
-    extra: Record<string, unknown> = {},
-  ) => (
-    <label className="grid gap-1 text-sm font-medium" htmlFor={`check-${name}`}>
-      {label}
-      <input
-        id={`check-${name}`}
-        name={name}
-        defaultValue={value}
-        className="field"
-        {...describedBy(errors, name)}
-        {...extra}
-      />
-      <FieldError errors={errors} name={name} />
-    </label>
+  const input = (name: string, label: string, value: string | number, inputMode?: "numeric" | "decimal") => (
+    <TextField prefix="check" name={name} label={label} value={value} errors={errors} inputMode={inputMode} />
   );
   return (
-    <section aria-labelledby="edit-check" className="rounded-card border border-rule bg-card p-4">
-      <Fold
-        open={Boolean(errors && Object.keys(errors).length)}
-        summaryClassName="min-h-tap cursor-pointer content-center font-semibold"
-        summary={<span id="edit-check">Edit this check</span>}
-      >
-        <Form method="post" className="mt-2 grid gap-3">
-          {input("name", "Name", check.name)}
-          <label className="grid gap-1 text-sm font-medium" htmlFor="check-instructions">
-            Steps, one per line
-            <textarea
-              id="check-instructions"
-              name="instructions"
-              rows={Math.min(12, check.instructions.length + 2)}
-              defaultValue={check.instructions.join("\n")}
-              className="field py-2"
-              {...describedBy(errors, "instructions")}
-            />
-            <FieldError errors={errors} name="instructions" />
-          </label>
-          {input("tools", "Tools, separated by commas", check.tools.join(", "))}
-          <div className="grid gap-3 sm:grid-cols-3">
-            {input("minutes", "Minutes", check.minutes, { inputMode: "numeric" })}
-            {input("consumablesCost", "Consumables cost", check.consumablesCost, { inputMode: "decimal" })}
-            {input("falseAlarmPercent", "False alarms, %", Math.round(check.falseAlarm * 1000) / 10, {
-              inputMode: "decimal",
-            })}
-          </div>
-          <label className="grid gap-1 text-sm font-medium" htmlFor="check-skill">
-            Who may do it
-            <select id="check-skill" name="skill" defaultValue={check.skill} className="field">
-              {SKILLS.map((s) => (
-                <option key={s} value={s}>
-                  {s}
-                </option>
-              ))}
-            </select>
-          </label>
-          <fieldset className="grid gap-1">
-            <legend className="text-sm font-medium">Access it needs</legend>
-            <div className="flex flex-wrap gap-x-4">
-              {CHECK_ACCESS.map((a) => (
-                <label key={a} className="flex min-h-tap items-center gap-2">
-                  <input type="checkbox" name="access" value={a} defaultChecked={check.access.includes(a)} />
-                  {CHECK_ACCESS_LABEL[a]}
-                </label>
-              ))}
-            </div>
-          </fieldset>
-          <fieldset className="grid gap-1" aria-describedby={errors?.cautions ? "cautions-error" : undefined}>
-            <legend className="text-sm font-medium">Cautions shown with it</legend>
-            <div className="flex flex-wrap gap-x-4">
-              {CAUTIONS.map((c) => (
-                <label key={c} className="flex min-h-tap items-center gap-2">
-                  <input
-                    type="checkbox"
-                    name="cautions"
-                    value={c}
-                    defaultChecked={check.cautions.includes(c)}
-                  />
-                  {CAUTION_LABEL[c]}
-                </label>
-              ))}
-            </div>
-            <FieldError errors={errors} name="cautions" />
-          </fieldset>
-          {check.resultKind === "measurement" ? (
-            <div className="grid gap-3 sm:grid-cols-3">
-              {input("quantity", "Quantity measured", check.quantity ?? "")}
-              {input("unit", "Unit", check.unit ?? "")}
-              <label className="grid gap-1 text-sm font-medium" htmlFor="check-rule">
-                Passes when
-                <input
-                  id="check-rule"
-                  name="rule"
-                  value={rule}
-                  onChange={(e) => setRule(e.target.value)}
-                  className="field font-mono"
-                  aria-invalid={ruleProblem || errors?.rule ? true : undefined}
-                  aria-describedby={ruleProblem || errors?.rule ? "rule-error" : undefined}
-                />
-                {ruleProblem ? (
-                  <span id="rule-error" className="mt-1 block text-sm font-medium text-stop">
-                    {ruleProblem}
-                  </span>
-                ) : (
-                  <FieldError errors={errors} name="rule" />
-                )}
+    <EditorFold id="edit-check" title="Edit this check" errors={errors}>
+      <Form method="post" className="mt-2 grid gap-3">
+        {input("name", "Name", check.name)}
+        <label className="grid gap-1 text-sm font-medium" htmlFor="check-instructions">
+          Steps, one per line
+          <textarea
+            id="check-instructions"
+            name="instructions"
+            rows={Math.min(12, check.instructions.length + 2)}
+            defaultValue={check.instructions.join("\n")}
+            className="field py-2"
+            {...describedBy(errors, "instructions")}
+          />
+          <FieldError errors={errors} name="instructions" />
+        </label>
+        {input("tools", "Tools, separated by commas", check.tools.join(", "))}
+        <div className="grid gap-3 sm:grid-cols-3">
+          {input("minutes", "Minutes", check.minutes, "numeric")}
+          {input("consumablesCost", "Consumables cost", check.consumablesCost, "decimal")}
+          {input("falseAlarmPercent", "False alarms, %", Math.round(check.falseAlarm * 1000) / 10, "decimal")}
+        </div>
+        <label className="grid gap-1 text-sm font-medium" htmlFor="check-skill">
+          Who may do it
+          <select id="check-skill" name="skill" defaultValue={check.skill} className="field">
+            {SKILLS.map((s) => (
+              <option key={s} value={s}>
+                {s}
+              </option>
+            ))}
+          </select>
+        </label>
+        <fieldset className="grid gap-1">
+          <legend className="text-sm font-medium">Access it needs</legend>
+          <div className="flex flex-wrap gap-x-4">
+            {CHECK_ACCESS.map((a) => (
+              <label key={a} className="flex min-h-tap items-center gap-2">
+                <input type="checkbox" name="access" value={a} defaultChecked={check.access.includes(a)} />
+                {CHECK_ACCESS_LABEL[a]}
               </label>
-            </div>
-          ) : null}
-          {input("failMeans", "A fail means", check.failMeans)}
-          <div>
-            <button type="submit" className="btn-primary" disabled={busy}>
-              Save the check
-            </button>
+            ))}
           </div>
-        </Form>
-      </Fold>
-    </section>
+        </fieldset>
+        <fieldset className="grid gap-1" aria-describedby={errors?.cautions ? "cautions-error" : undefined}>
+          <legend className="text-sm font-medium">Cautions shown with it</legend>
+          <div className="flex flex-wrap gap-x-4">
+            {CAUTIONS.map((c) => (
+              <label key={c} className="flex min-h-tap items-center gap-2">
+                <input
+                  type="checkbox"
+                  name="cautions"
+                  value={c}
+                  defaultChecked={check.cautions.includes(c)}
+                />
+                {CAUTION_LABEL[c]}
+              </label>
+            ))}
+          </div>
+          <FieldError errors={errors} name="cautions" />
+        </fieldset>
+        {check.resultKind === "measurement" ? (
+          <div className="grid gap-3 sm:grid-cols-3">
+            {input("quantity", "Quantity measured", check.quantity ?? "")}
+            {input("unit", "Unit", check.unit ?? "")}
+            <label className="grid gap-1 text-sm font-medium" htmlFor="check-rule">
+              Passes when
+              <input
+                id="check-rule"
+                name="rule"
+                value={rule}
+                onChange={(e) => setRule(e.target.value)}
+                className="field font-mono"
+                aria-invalid={ruleProblem || errors?.rule ? true : undefined}
+                aria-describedby={ruleProblem || errors?.rule ? "rule-error" : undefined}
+              />
+              {ruleProblem ? (
+                <span id="rule-error" className="mt-1 block text-sm font-medium text-stop">
+                  {ruleProblem}
+                </span>
+              ) : (
+                <FieldError errors={errors} name="rule" />
+              )}
+            </label>
+          </div>
+        ) : null}
+        {input("failMeans", "A fail means", check.failMeans)}
+        <div>
+          <button type="submit" className="btn-primary" disabled={busy}>
+            Save the check
+          </button>
+        </div>
+      </Form>
+    </EditorFold>
   );
 }

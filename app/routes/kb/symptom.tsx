@@ -1,16 +1,15 @@
 import { Form, href, Link, useNavigation } from "react-router";
 import { z } from "zod";
 import { memberContext, requirePermission } from "~/auth/guards.server";
-import { Fold } from "~/components/fold";
-import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";
+import { BackToKb, EditorFold, TextField } from "~/components/kb/editor";
+import { FormMessages } from "~/components/ui/form-errors";
 import { SYMPTOM_KIND_LABEL, SYMPTOM_KINDS } from "~/domain/knowledge";
 import { describeStrength } from "~/domain/link-strength";
 import { can } from "~/domain/permissions";
 import type { FormErrors } from "~/http/forms";
 import { dbContext } from "~/http/context";
-import { invalid, onForm, zodErrors } from "~/http/forms.server";
+import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
 import { symptomEditProblems, symptomWithLinks, updateSymptom } from "~/kb/symptom-edit.server";
-import { parseDecimal } from "~/measure";
 import type { Route } from "./+types/symptom";
 
 export async function loader({ params, context }: Route.LoaderArgs) {
@@ -44,14 +43,7 @@ const EditForm = z.object({
   kind: z.enum(SYMPTOM_KINDS, { message: "Choose the kind of symptom." }),
   code: z.string().trim().max(10).optional(),
   conditions: list(20),
-  leakPercent: z.string().transform((v, ctx) => {
-    const n = parseDecimal(v.replace(/%$/, "").trim());
-    if (n === null || n < 0 || n > 100) {
-      ctx.addIssue({ code: "custom", message: "The leak is a percentage from 0 to 100." });
-      return z.NEVER;
-    }
-    return n;
-  }),
+  leakPercent: figureBetween("The leak is a percentage from 0 to 100.", 0, 100),
 });
 
 export async function action({ request, params, context }: Route.ActionArgs) {
@@ -88,11 +80,7 @@ export default function SymptomPage({ loaderData, actionData }: Route.ComponentP
   const errors = actionData?.errors;
   return (
     <div className="grid max-w-3xl gap-5">
-      <p>
-        <Link className="inline-flex min-h-tap items-center text-sm text-uv-700 underline" to={href("/kb")}>
-          Knowledge base
-        </Link>
-      </p>
+      <BackToKb />
       <div>
         <p className="meta">{`Symptom · ${SYMPTOM_KIND_LABEL[symptom.kind]}${symptom.code ? ` · ${symptom.code}` : ""}`}</p>
         <h1 className="text-2xl font-semibold">{symptom.name}</h1>
@@ -127,63 +115,36 @@ type SymptomRow = Route.ComponentProps["loaderData"]["symptom"];
 function SymptomEditor({ symptom, errors }: { symptom: SymptomRow; errors: FormErrors | undefined }) {
   const busy = useNavigation().state === "submitting";
   const field = (name: string, label: string, value: string, rows = 0) => (
-    <label className="grid gap-1 text-sm font-medium" htmlFor={`symptom-${name}`}>
-      {label}
-      {rows ? (
-        <textarea
-          id={`symptom-${name}`}
-          name={name}
-          rows={rows}
-          defaultValue={value}
-          className="field py-2"
-          {...describedBy(errors, name)}
-        />
-      ) : (
-        <input
-          id={`symptom-${name}`}
-          name={name}
-          defaultValue={value}
-          className="field"
-          {...describedBy(errors, name)}
-        />
-      )}
-      <FieldError errors={errors} name={name} />
-    </label>
+    <TextField prefix="symptom" name={name} label={label} value={value} errors={errors} rows={rows} />
   );
   return (
-    <section aria-labelledby="edit-symptom" className="rounded-card border border-rule bg-card p-4">
-      <Fold
-        open={Boolean(errors && Object.keys(errors).length)}
-        summaryClassName="min-h-tap cursor-pointer content-center font-semibold"
-        summary={<span id="edit-symptom">Edit this symptom</span>}
-      >
-        <Form method="post" className="mt-2 grid gap-3">
-          {field("name", "Name, as a technician says it", symptom.name)}
-          {field("synonyms", "Other words people use, separated by commas", symptom.synonyms.join(", "), 3)}
-          <label className="grid gap-1 text-sm font-medium" htmlFor="symptom-kind">
-            Kind
-            <select id="symptom-kind" name="kind" defaultValue={symptom.kind} className="field">
-              {SYMPTOM_KINDS.map((k) => (
-                <option key={k} value={k}>
-                  {SYMPTOM_KIND_LABEL[k]}
-                </option>
-              ))}
-            </select>
-          </label>
-          {field("code", "Trouble code (trouble-code symptoms only), such as P0420", symptom.code ?? "")}
-          {field("conditions", "When it shows, separated by commas", symptom.conditions.join(", "))}
-          {field(
-            "leakPercent",
-            "Shows without any listed cause, %",
-            String(Math.round(symptom.leak * 1000) / 10),
-          )}
-          <div>
-            <button type="submit" className="btn-primary" disabled={busy}>
-              Save the symptom
-            </button>
-          </div>
-        </Form>
-      </Fold>
-    </section>
+    <EditorFold id="edit-symptom" title="Edit this symptom" errors={errors}>
+      <Form method="post" className="mt-2 grid gap-3">
+        {field("name", "Name, as a technician says it", symptom.name)}
+        {field("synonyms", "Other words people use, separated by commas", symptom.synonyms.join(", "), 3)}
+        <label className="grid gap-1 text-sm font-medium" htmlFor="symptom-kind">
+          Kind
+          <select id="symptom-kind" name="kind" defaultValue={symptom.kind} className="field">
+            {SYMPTOM_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {SYMPTOM_KIND_LABEL[k]}
+              </option>
+            ))}
+          </select>
+        </label>
+        {field("code", "Trouble code (trouble-code symptoms only), such as P0420", symptom.code ?? "")}
+        {field("conditions", "When it shows, separated by commas", symptom.conditions.join(", "))}
+        {field(
+          "leakPercent",
+          "Shows without any listed cause, %",
+          String(Math.round(symptom.leak * 1000) / 10),
+        )}
+        <div>
+          <button type="submit" className="btn-primary" disabled={busy}>
+            Save the symptom
+          </button>
+        </div>
+      </Form>
+    </EditorFold>
   );
 }

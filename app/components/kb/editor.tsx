@@ -1,0 +1,88 @@
+// The parts every knowledge-base page and editor shares: the way back to the base, a folded editor
+// section that opens by itself when its form came back with messages, and a labelled field with its
+// message under it.
+import type { ReactNode } from "react";
+import { href, Link } from "react-router";
+import type { FormErrors } from "~/http/forms";
+import { Fold } from "../fold";
+import { describedBy, FieldError } from "../ui/form-errors";
+
+export function BackToKb() {
+  return (
+    <p>
+      <Link className="inline-flex min-h-tap items-center text-sm text-uv-700 underline" to={href("/kb")}>
+        Knowledge base
+      </Link>
+    </p>
+  );
+}
+
+export function EditorFold({
+  id,
+  title,
+  errors,
+  children,
+}: {
+  id: string;
+  title: string;
+  errors: FormErrors | undefined;
+  children: ReactNode;
+}) {
+  return (
+    <section aria-labelledby={id} className="rounded-card border border-rule bg-card p-4">
+      <Fold
+        open={Boolean(errors && Object.keys(errors).length)}
+        summaryClassName="min-h-tap cursor-pointer content-center font-semibold"
+        summary={<span id={id}>{title}</span>}
+      >
+        {children}
+      </Fold>
+    </section>
+  );
+}
+
+/** A text field (or, with rows, a text area) named `name`, its id prefixed, its message under it. */
+export function TextField({
+  prefix,
+  name,
+  label,
+  value,
+  errors,
+  rows = 0,
+  inputMode,
+}: {
+  prefix: string;
+  name: string;
+  label: string;
+  value: string | number;
+  errors: FormErrors | undefined;
+  rows?: number;
+  inputMode?: "numeric" | "decimal";
+}) {
+  const id = `${prefix}-${name}`;
+  return (
+    <label className="grid gap-1 text-sm font-medium" htmlFor={id}>
+      {label}
+      {rows ? (
+        <textarea
+          id={id}
+          name={name}
+          rows={rows}
+          defaultValue={value}
+          className="field py-2"
+          {...describedBy(errors, name)}
+        />
+      ) : (
+        <input
+          id={id}
+          name={name}
+          defaultValue={value}
+          inputMode={inputMode}
+          className="field"
+          {...describedBy(errors, name)}
+        />
+      )}
+      <FieldError errors={errors} name={name} />
+    </label>
+  );
+}
