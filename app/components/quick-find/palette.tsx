@@ -61,7 +61,16 @@ export default function QuickFindPalette(props: PaletteProps) {
     // eslint-disable-next-line react-hooks/set-state-in-effect
     if (held) setQuery(held);
     inputRef.current?.focus();
+    // The dialog's focus handling selects the box's text as it takes the focus; with keys handed
+    // over, the next key would replace them. Once the held text is in the box, the caret goes after it.
+    const frame = held
+      ? requestAnimationFrame(() => {
+          const box = inputRef.current;
+          if (box) box.setSelectionRange(box.value.length, box.value.length);
+        })
+      : 0;
     onReady();
+    return () => cancelAnimationFrame(frame);
   }, [takeTypedAhead, inputRef, onReady]);
   const [selection, setSelection] = useState<{ query: string; value: string } | null>(null);
   const [arrowed, setArrowed] = useState<string | null>(null); // the query the user moved the highlight in
