@@ -4,7 +4,10 @@
 // table, so "judder when braking" meets "Vibration … under braking" without either side having to
 // list the other's words. Keep groups tight: a loose group drags unrelated faults into the list.
 
-export type SynonymGroup = { concept: string; members: string[] };
+import { CONDITION_GROUPS } from "./synonym-conditions";
+import type { SynonymGroup } from "./synonym-group";
+
+export type { SynonymGroup };
 
 export const SYNONYM_GROUPS: SynonymGroup[] = [
   // Noises and feelings
@@ -259,173 +262,8 @@ export const SYNONYM_GROUPS: SynonymGroup[] = [
       "mil",
     ],
   },
-  // Conditions (part of a symptom's meaning) and the owner's ways of saying them
-  {
-    concept: "brake",
-    members: [
-      "brake",
-      "brakes",
-      "braking",
-      "when i brake",
-      "when i stop",
-      "slowing down",
-      "coming to a stop",
-      "on the brakes",
-      "stopping",
-    ],
-  },
-  {
-    concept: "bump",
-    members: [
-      "bump",
-      "bumps",
-      "bumpy",
-      "pothole",
-      "potholes",
-      "speed bump",
-      "speed bumps",
-      "rough road",
-      "rough roads",
-      "uneven road",
-    ],
-  },
-  {
-    concept: "cornering",
-    members: [
-      "cornering",
-      "corner",
-      "corners",
-      "turning",
-      "turn",
-      "turns",
-      "bend",
-      "bends",
-      "roundabout",
-      "going round corners",
-    ],
-  },
-  {
-    concept: "at_speed",
-    members: [
-      "at speed",
-      "high speed",
-      "motorway speed",
-      "on the motorway",
-      "motorway",
-      "highway",
-      "dual carriageway",
-      "cruising",
-      "from speed",
-    ],
-  },
-  { concept: "idle", members: ["idle", "idling", "at idle", "tickover", "ticking over", "sitting still"] },
-  {
-    concept: "cold_start",
-    members: [
-      "cold start",
-      "from cold",
-      "when cold",
-      "cold morning",
-      "cold mornings",
-      "first thing in the morning",
-      "starting from cold",
-      "cold engine",
-    ],
-  },
-  {
-    concept: "accelerating",
-    members: [
-      "accelerating",
-      "accelerate",
-      "acceleration",
-      "foot down",
-      "put my foot down",
-      "under load",
-      "under power",
-      "on the throttle",
-    ],
-  },
-  {
-    concept: "bounce",
-    members: ["bounce", "bounces", "bouncy", "bouncing", "floaty", "float", "floats", "wallow", "wallowing"],
-  },
-  { concept: "crank", members: ["crank", "cranks", "cranking", "turn over", "turns over", "turning over"] },
-  {
-    concept: "warm",
-    members: [
-      "when warm",
-      "when hot",
-      "warmed up",
-      "once warm",
-      "hot engine",
-      "warm engine",
-      "fully warm",
-      "up to temperature",
-    ],
-  },
-  {
-    concept: "low_speed",
-    members: ["low speed", "slow speed", "walking pace", "crawling", "car park", "car parks"],
-  },
-  {
-    concept: "uphill",
-    members: [
-      "uphill",
-      "up hills",
-      "up hill",
-      "going up hills",
-      "climbing",
-      "climbing hills",
-      "on hills",
-      "hill",
-      "hills",
-    ],
-  },
-  {
-    concept: "hunting",
-    members: [
-      "hunts",
-      "hunting",
-      "hunt",
-      "surges",
-      "surging",
-      "up and down",
-      "goes up and down",
-      "going up and down",
-    ],
-  },
-  { concept: "parked", members: ["parked", "standing", "stood", "sits", "sat", "left parked", "laid up"] },
-  { concept: "wet", members: ["wet", "damp", "rain", "rainy", "raining", "wet weather"] },
-  {
-    concept: "with_road_speed",
-    members: [
-      "with road speed",
-      "with speed",
-      "the faster i go",
-      "faster i go",
-      "louder the faster",
-      "gets louder with speed",
-      "rises with speed",
-    ],
-  },
-  { concept: "traffic", members: ["traffic", "queue", "queues", "queueing", "stop start"] },
-  {
-    concept: "pulling_away",
-    members: [
-      "pulling away",
-      "pull away",
-      "pulls away",
-      "setting off",
-      "moving off",
-      "take off",
-      "take-off",
-      "set off",
-      "sets off",
-      "pull off",
-      "pulls off",
-      "drive off",
-    ],
-  },
+  // Conditions (part of a symptom's meaning) and the owner's ways of saying them: their own file
+  ...CONDITION_GROUPS,
   // Parts and gauges by their everyday names
   { concept: "lamp", members: ["lamp", "lamps", "light", "lights", "tell tale"] },
   { concept: "headlamp", members: ["headlamp", "headlamps", "headlight", "headlights"] },
