@@ -12,14 +12,20 @@ import { nextKbVersion } from "./version.server";
 
 const NOT_FOUND = "No such cause in this workshop's knowledge base.";
 
-/** The cause, its place in the tree, and its links to symptoms and checks, strongest first. */
-export async function causeWithLinks(db: Db, workshopId: string, causeId: string) {
+/** One cause of the workshop, or a 404: what an action checks before it reads its form. */
+export async function findCause(db: Db, workshopId: string, causeId: string) {
   requireId(causeId, NOT_FOUND);
   const [cause] = await db
     .select()
     .from(causes)
     .where(and(eq(causes.id, causeId), eq(causes.workshopId, workshopId)));
   if (!cause) refuse(404, NOT_FOUND);
+  return cause;
+}
+
+/** The cause, its place in the tree, and its links to symptoms and checks, strongest first. */
+export async function causeWithLinks(db: Db, workshopId: string, causeId: string) {
+  const cause = await findCause(db, workshopId, causeId);
   const [parent] = cause.parentId
     ? await db
         .select({ id: causes.id, name: causes.name, parentId: causes.parentId })

@@ -1,0 +1,132 @@
+// A senior's editor of one cause: its words, figures and place in the tree, and its retirement.
+// Folded, so the page reads first.
+import { Form, useNavigation } from "react-router";
+import {
+  type CAUSE_LEVELS,
+  PRIORITIES,
+  PRIORITY_COPY,
+  type Priority,
+  SYSTEM_LABEL,
+} from "~/domain/knowledge";
+import type { FormErrors } from "~/http/forms";
+import { describedBy, FieldError } from "../ui/form-errors";
+import { EditorFold, TextField } from "./editor";
+
+type CauseRow = {
+  level: (typeof CAUSE_LEVELS)[number];
+  name: string;
+  parentId: string | null;
+  description: string;
+  ownerDescription: string;
+  ifLeft: string;
+  baseRate: number | null;
+  repairMinutes: number | null;
+  partsCost: number | null;
+  priority: Priority | null;
+};
+type Parent = { id: string; name: string; system: string };
+
+/** A senior's editor of the cause's words, figures and place; folded, so the page reads first. */
+export function CauseEditor({
+  cause,
+  parents,
+  errors,
+}: {
+  cause: CauseRow;
+  parents: Parent[];
+  errors: FormErrors | undefined;
+}) {
+  const busy = useNavigation().state === "submitting";
+  const leaf = cause.level === "failure_mode";
+  const text = (name: "name" | "description" | "ownerDescription" | "ifLeft", label: string, rows = 0) => (
+    <TextField prefix="edit" name={name} label={label} value={cause[name]} errors={errors} rows={rows} />
+  );
+  const figure = (name: "baseRate" | "repairMinutes" | "partsCost", label: string) => (
+    <TextField
+      prefix="edit"
+      name={name}
+      label={label}
+      value={cause[name] ?? ""}
+      errors={errors}
+      inputMode="decimal"
+    />
+  );
+  return (
+    <EditorFold id="edit" title="Edit this cause" errors={errors}>
+      <Form method="post" className="mt-2 grid gap-3">
+        {text("name", "Name")}
+        {cause.level !== "system" ? (
+          <label className="grid gap-1 text-sm font-medium" htmlFor="edit-parentId">
+            Belongs under
+            <select
+              id="edit-parentId"
+              name="parentId"
+              defaultValue={cause.parentId ?? ""}
+              className="field"
+              {...describedBy(errors, "parentId")}
+            >
+              {parents.map((p) => (
+                <option key={p.id} value={p.id}>
+                  {`${SYSTEM_LABEL[p.system as keyof typeof SYSTEM_LABEL] ?? p.system} › ${p.name}`}
+                </option>
+              ))}
+            </select>
+            <FieldError errors={errors} name="parentId" />
+          </label>
+        ) : null}
+        {text("description", "For the technician", 3)}
+        {text("ownerDescription", "For the owner, in plain words", 2)}
+        {text("ifLeft", "If it is left", 2)}
+        {leaf ? (
+          <div className="grid gap-3 sm:grid-cols-2">
+            {figure("baseRate", "Base rate (relative frequency)")}
+            {figure("repairMinutes", "Repair, minutes of labour")}
+            {figure("partsCost", "Parts, typical cost")}
+            <label className="grid gap-1 text-sm font-medium" htmlFor="edit-priority">
+              Priority for the owner
+              <select
+                id="edit-priority"
+                name="priority"
+                defaultValue={cause.priority ?? "soon"}
+                className="field"
+              >
+                {PRIORITIES.map((x) => (
+                  <option key={x} value={x}>
+                    {PRIORITY_COPY[x].label}
+                  </option>
+                ))}
+              </select>
+            </label>
+          </div>
+        ) : null}
+        <div className="flex flex-wrap gap-2">
+          <button type="submit" name="intent" value="edit" className="btn-primary" disabled={busy}>
+            Save the cause
+          </button>
+        </div>
+      </Form>
+      <Form method="post" className="mt-4 border-t border-rule pt-3">
+        <p className="text-sm text-graphite-700">
+          Retiring takes it out of every ranking from the next version on; cases that name it keep showing it.
+        </p>
+        <label
+          className="mt-2 flex min-h-tap items-center gap-2 text-sm font-medium"
+          htmlFor="retire-confirm"
+        >
+          <input
+            id="retire-confirm"
+            type="checkbox"
+            name="confirm"
+            value="yes"
+            {...describedBy(errors, "confirm")}
+          />
+          Yes, retire it
+        </label>
+        <FieldError errors={errors} name="confirm" />
+        <button type="submit" name="intent" value="retire" className="btn mt-2" disabled={busy}>
+          Retire this cause
+        </button>
+      </Form>
+    </EditorFold>
+  );
+}
