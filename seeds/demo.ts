@@ -122,6 +122,7 @@ export async function seedDemo(db: Db, now = new Date()) {
           workshopId,
           number: c.number,
           vehicleId: seedId(`vehicle:${c.vehicle}`),
+          kbVersion: sql`(select ${workshops.kbVersion} from ${workshops} where ${workshops.id} = ${workshopId})`,
           complaint: c.complaint,
           mileageKm: vehicle.mileageKm.at(-1),
           state: c.state,

@@ -1,6 +1,7 @@
 import type { Db, Tx } from "../app/db/client.server";
 import { copyKnowledgeBase, saveTemplate, STARTER_TEMPLATE } from "../app/kb/copy.server";
 import { toDocument } from "../app/domain/knowledge-document";
+import { keepCurrentVersion } from "../app/kb/version.server";
 import { seedId } from "./ids";
 import { starterKnowledgeBase } from "./kb";
 import type { KnowledgeBaseSeed } from "./kb/types";
@@ -18,6 +19,7 @@ export async function seedKnowledgeBase(
   kb: KnowledgeBaseSeed,
 ) {
   await copyKnowledgeBase(tx, workshop.id, kb, (kind, key) => kbId(workshop.slug, kind, key));
+  await keepCurrentVersion(tx, workshop.id, "Starter knowledge base, as seeded");
 }
 
 /** The starter base as the template every workshop created in the app starts from. */

@@ -141,6 +141,8 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
   "case.complaint": (a) => `edited the complaint${quoted(a.complaint)}`,
   "case.reopen": (a, b) => `reopened it (it was ${STATE[String(b.state)] ?? b.state})${quoted(a.reason)}`,
   "case.close": () => "closed the case",
+  "case.kb_version": (a, b) =>
+    `ranked it again with knowledge-base version ${a.kbVersion} (it was ranked with version ${b.kbVersion})`,
   "settings.update": (a, b) => settingsChange(b, a),
   "kb.import": (a) => importSentence(a),
   "kb.cause.update": (a, b) => causeEditSentence(a, b),

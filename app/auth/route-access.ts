@@ -69,6 +69,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
       complaint: "case:open",
       reopen: "case:reopen",
       close: "case:close",
+      "newest-knowledge": "case:work",
     },
   },
   "routes/api/search.ts": { path: "/api/search?q=brake", api: true, GET: "case:read" },

@@ -126,6 +126,7 @@ function caseQuery(db: Db) {
       mileageKm: cases.mileageKm,
       needsSenior: cases.needsSenior,
       version: cases.version,
+      kbVersion: cases.kbVersion,
       openedAt: cases.openedAt,
       concludedAt: cases.concludedAt,
       conclusionCauseId: cases.conclusionCauseId,

@@ -4,6 +4,7 @@ import { compileModel, diagnose, type CompiledModel, type Model, type Skill } fr
 import { buildModel, vehicleFacts } from "~/kb/model";
 import { caseFields, evidenceOf, type CaseBundle } from "./case.server";
 import { presentDiagnosis } from "./present-diagnosis";
+import { knownEvidence, type KnowledgeUsed } from "./known-evidence";
 import { SHOWN_FINDINGS } from "./shown";
 import { kbCache } from "~/kb/cache";
 import { loadKnowledge } from "~/kb/knowledge.server";
@@ -19,7 +20,9 @@ export async function diagnoseCase(
   member: Pick<CurrentMember, "role" | "skill" | "workshopId">,
   bundle: CaseBundle,
 ) {
-  const kb = await loadKnowledge(db, bundle.workshop.id, bundle.workshop.kbVersion);
+  // The version the case is ranked with, not the newest: a change to the base re-ranks a case
+  // only when someone asks (moveCaseToNewestKnowledge).
+  const kb = await loadKnowledge(db, bundle.workshop.id, bundle.kbVersion);
   // Read with the case (loadCase), so the page costs no extra query for them.
   const outcomes = bundle.outcomes;
   const facts = vehicleFacts({ ...bundle.vehicle, mileageKm: bundle.mileageKm });
@@ -33,13 +36,14 @@ export async function diagnoseCase(
     },
   );
   const { model } = entry;
-  const evidence = evidenceOf(bundle);
+  const { evidence, setAside } = knownEvidence(kb, evidenceOf(bundle));
   // An apprentice's plan holds only what they may do; everyone else sees every check.
   const maxSkill: Skill = member.role === "apprentice" ? "apprentice" : "senior";
   const { ranking, plan } = diagnose(entry.compiled, evidence, { maxSkill });
   // The tree's node shares are for the API's diagnosis; the case screens do not draw them.
   return {
     ...presentDiagnosis(kb, ranking, plan, bundle, bundle.workshop.units),
+    knowledge: { version: kb.kbVersion, setAside } satisfies KnowledgeUsed,
     nodes: ranking.nodes,
     model,
     evidence,

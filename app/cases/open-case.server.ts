@@ -3,7 +3,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
-import { cases, mileageReadings, owners, vehicles } from "~/db/schema";
+import { cases, mileageReadings, owners, vehicles, workshops } from "~/db/schema";
 import type { Drivetrain, FuelType } from "~/domain/vehicles";
 import { can } from "~/domain/permissions";
 import { refuse } from "~/http/errors.server";
@@ -83,6 +83,8 @@ export async function openCase(db: Db, member: CurrentMember, input: OpenCaseInp
         mileageKm: input.mileageKm,
         openedById: member.memberId,
         assignedMemberId: member.role === "advisor" ? null : member.memberId,
+        // Ranked with the knowledge base as it is when the case opens.
+        kbVersion: sql`(select ${workshops.kbVersion} from ${workshops} where ${workshops.id} = ${member.workshopId})`,
       })
       .returning({ id: cases.id, number: cases.number });
     await tx

@@ -2,6 +2,7 @@
 // the technician's words. Pure.
 import type { Plan, Ranking, WhatIf } from "~/reasoning";
 import type { Knowledge } from "~/kb/model";
+import type { KnowledgeUsed } from "./known-evidence";
 
 import { PLAN_OPEN, SENT_CAUSES, SENT_STEPS, WHY_CAUSES } from "./shown";
 import { describeRule, speedsIn } from "~/measure";
@@ -162,4 +163,5 @@ export function presentDiagnosis(
   };
 }
 
-export type Diagnosis = ReturnType<typeof presentDiagnosis>;
+/** What the case screens get: the presented ranking, and which knowledge-base version ranked it. */
+export type Diagnosis = ReturnType<typeof presentDiagnosis> & { knowledge: KnowledgeUsed };

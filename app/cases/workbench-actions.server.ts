@@ -1,10 +1,11 @@
 import { z } from "zod";
 import type { CurrentMember } from "~/auth/guards.server";
-import { mayConclude } from "~/domain/case-access";
+import { mayConclude, mayWorkOn } from "~/domain/case-access";
 import { can } from "~/domain/permissions";
 import { refuse } from "~/http/errors.server";
 import type { Db } from "~/db/client.server";
 import type { CaseFields } from "./case.server";
+import { moveToNewestKnowledge } from "./knowledge-version.server";
 import { askSenior, close, conclude, reopen, signOff, updateComplaint } from "./workflow.server";
 
 // The forms of the case workbench, told apart by their intent.
@@ -35,6 +36,7 @@ export const WorkbenchForm = z.discriminatedUnion("intent", [
     version: z.coerce.number().int(),
   }),
   z.object({ intent: z.literal("close"), version: z.coerce.number().int() }),
+  z.object({ intent: z.literal("newest-knowledge") }),
 ]);
 
 /** The role check comes before the form is read, so a refused role learns nothing from validation. */
@@ -56,7 +58,9 @@ export function assertIntentAllowed(
               ? can(member.role, "case:reopen")
               : intent === "close"
                 ? can(member.role, "case:close")
-                : true; // unknown intents fail validation with a 400
+                : intent === "newest-knowledge"
+                  ? mayWorkOn(member, c)
+                  : true; // unknown intents fail validation with a 400
   if (!allowed) refuse(403, `Your role (${member.role}) cannot do this on a case.`);
 }
 
@@ -91,5 +95,11 @@ export async function runWorkbenchForm(
     case "close":
       await close(db, member, c, form);
       return "Case closed.";
+    case "newest-knowledge": {
+      const { from, to, moved } = await moveToNewestKnowledge(db, member, c);
+      return moved
+        ? `Ranked again with knowledge-base version ${to} (it was ranked with version ${from}).`
+        : `Already ranked with the newest knowledge-base version, ${to}.`;
+    }
   }
 }

@@ -1,8 +1,8 @@
 // One cache for everything built from a workshop's knowledge base: the loaded rows, Quick find's
-// entries, compiled models. Keyed by workshop and knowledge-base version (bumped on every change
-// to the base), plus what else the value depends on; a newer version drops the workshop's older
-// entries at once. Bounded per cache; the oldest entry goes first. Per process: app servers share
-// nothing, and a stale version is never read because the version is part of the key.
+// entries, compiled models. Keyed by workshop and knowledge-base version, plus what else the value
+// depends on. Versions never change once made, so an entry is never stale; cases ranked under an
+// older version keep theirs warm beside the newest. Bounded per cache; the least recently used
+// entry goes first. Per process: app servers share nothing.
 
 export type KbCache<T> = {
   get(workshopId: string, kbVersion: number, part: string, build: () => Promise<T> | T): Promise<T>;
@@ -11,18 +11,16 @@ export type KbCache<T> = {
 };
 
 export function kbCache<T>(name: string, maxEntries = 200): KbCache<T> {
+  // A Map iterates in insertion order: re-inserting on a hit makes the first key the least recent.
   const entries = new Map<string, Promise<T>>();
-  const latest = new Map<string, number>(); // the newest version seen per workshop
   return {
     async get(workshopId, kbVersion, part, build) {
       const key = `${name}|${workshopId}|${kbVersion}|${part}`;
       const hit = entries.get(key);
-      if (hit) return hit;
-      if ((latest.get(workshopId) ?? -Infinity) < kbVersion) {
-        latest.set(workshopId, kbVersion);
-        const stale = `${name}|${workshopId}|`;
-        for (const k of entries.keys())
-          if (k.startsWith(stale) && !k.startsWith(`${stale}${kbVersion}|`)) entries.delete(k);
+      if (hit) {
+        entries.delete(key);
+        entries.set(key, hit);
+        return hit;
       }
       // The promise is cached, so requests arriving together build once; a failed build is forgotten.
       const value = Promise.resolve().then(build);
@@ -33,7 +31,6 @@ export function kbCache<T>(name: string, maxEntries = 200): KbCache<T> {
     },
     clear() {
       entries.clear();
-      latest.clear();
     },
     get size() {
       return entries.size;

@@ -10,7 +10,7 @@ import type { Priority } from "~/domain/knowledge";
 import { refuse, requireId } from "~/http/errors.server";
 import { nextKbVersion } from "./version.server";
 
-type Member = Pick<CurrentMember, "workshopId" | "userId">;
+type Member = Pick<CurrentMember, "workshopId" | "userId" | "memberId">;
 const NOT_FOUND = "No such cause in this workshop's knowledge base.";
 const PARENT_LEVEL = { component: "system", failure_mode: "component" } as const;
 
@@ -41,8 +41,6 @@ export async function possibleParents(
     )
     .orderBy(causes.system, causes.name);
 }
-
-const bump = nextKbVersion;
 
 export async function updateCause(db: Db, member: Member, causeId: string, edit: CauseEdit) {
   requireId(causeId, NOT_FOUND);
@@ -107,7 +105,12 @@ export async function updateCause(db: Db, member: Member, causeId: string, edit:
     // A component that moves to another system takes its failure modes along.
     if (was.level === "component" && system !== was.system)
       await tx.update(causes).set({ system }).where(eq(causes.parentId, causeId));
-    const kbVersion = await bump(tx, member.workshopId);
+    const kbVersion = await nextKbVersion(
+      tx,
+      member.workshopId,
+      `Cause “${edit.name}” edited`,
+      member.memberId,
+    );
     const fields = [
       "name",
       "parentId",
@@ -158,7 +161,12 @@ export async function retireCause(db: Db, member: Member, causeId: string) {
       .limit(1);
     if (live) refuse(409, "Retire or move what is under it first.");
     await tx.update(causes).set({ retiredAt: new Date() }).where(eq(causes.id, causeId));
-    const kbVersion = await bump(tx, member.workshopId);
+    const kbVersion = await nextKbVersion(
+      tx,
+      member.workshopId,
+      `Cause “${was.name}” retired`,
+      member.memberId,
+    );
     await audit(tx, {
       workshopId: member.workshopId,
       actorUserId: member.userId,

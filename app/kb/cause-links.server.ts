@@ -6,7 +6,7 @@ import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
 import { causes, checkLinks, checks, symptomLinks, symptoms } from "~/db/schema";
-import { rescaleBands } from "~/domain/link-strength";
+import { describeStrength, rescaleBands } from "~/domain/link-strength";
 import { refuse, requireId } from "~/http/errors.server";
 import { nextKbVersion } from "./version.server";
 
@@ -64,7 +64,7 @@ export type LinkChange = { link: "symptom" | "check"; causeId: string; otherId: 
 /** Sets one link's strength; a graded check link keeps its bands in proportion (rescaleBands). */
 export async function setLinkStrength(
   db: Db,
-  member: Pick<CurrentMember, "workshopId" | "userId">,
+  member: Pick<CurrentMember, "workshopId" | "userId" | "memberId">,
   change: LinkChange,
 ): Promise<{ before: number; after: number; causeName: string; otherName: string; kbVersion: number }> {
   requireId(change.causeId, NOT_FOUND);
@@ -104,7 +104,12 @@ export async function setLinkStrength(
         .set({ pFail: change.p, graded: row.graded ? rescaleBands(row.graded, change.p) : null })
         .where(and(eq(checkLinks.causeId, change.causeId), eq(checkLinks.checkId, change.otherId)));
     }
-    const kbVersion = await nextKbVersion(tx, member.workshopId);
+    const kbVersion = await nextKbVersion(
+      tx,
+      member.workshopId,
+      `Link “${cause.name}” – “${otherName}”: ${describeStrength(before)} → ${describeStrength(change.p)}`,
+      member.memberId,
+    );
     await audit(tx, {
       workshopId: member.workshopId,
       actorUserId: member.userId,

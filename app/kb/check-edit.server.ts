@@ -70,7 +70,7 @@ export function checkEditProblems(edit: CheckEdit, measurement: boolean): Record
 
 export async function updateCheck(
   db: Db,
-  member: Pick<CurrentMember, "workshopId" | "userId">,
+  member: Pick<CurrentMember, "workshopId" | "userId" | "memberId">,
   checkId: string,
   edit: CheckEdit,
 ) {
@@ -106,7 +106,9 @@ export async function updateCheck(
       .update(checks)
       .set({ ...set, updatedAt: new Date() })
       .where(eq(checks.id, checkId));
-    const kbVersion = changed.length ? await nextKbVersion(tx, member.workshopId) : null;
+    const kbVersion = changed.length
+      ? await nextKbVersion(tx, member.workshopId, `Check “${edit.name}” edited`, member.memberId)
+      : null;
     if (changed.length)
       await audit(tx, {
         workshopId: member.workshopId,

@@ -190,7 +190,12 @@ export async function reviewProposal(db: Db, member: Member, proposalId: string,
         .insert(symptomLinks)
         .values({ workshopId: member.workshopId, symptomId: p.symptomId, causeId, p: p.p })
         .onConflictDoUpdate({ target: [symptomLinks.symptomId, symptomLinks.causeId], set: { p: p.p } });
-      await nextKbVersion(tx, member.workshopId);
+      await nextKbVersion(
+        tx,
+        member.workshopId,
+        `Proposal accepted: “${symptomName}” → “${causeName}”`,
+        member.memberId,
+      );
       made = { cause: causeName, before: existing?.p ?? null, causeId };
     }
     await tx

@@ -49,7 +49,7 @@ export function symptomEditProblems(edit: SymptomEdit): Record<string, string[]>
 
 export async function updateSymptom(
   db: Db,
-  member: Pick<CurrentMember, "workshopId" | "userId">,
+  member: Pick<CurrentMember, "workshopId" | "userId" | "memberId">,
   symptomId: string,
   edit: SymptomEdit,
 ) {
@@ -85,7 +85,12 @@ export async function updateSymptom(
       .update(symptoms)
       .set({ ...set, updatedAt: new Date() })
       .where(eq(symptoms.id, symptomId));
-    const kbVersion = await nextKbVersion(tx, member.workshopId);
+    const kbVersion = await nextKbVersion(
+      tx,
+      member.workshopId,
+      `Symptom “${edit.name}” edited`,
+      member.memberId,
+    );
     await audit(tx, {
       workshopId: member.workshopId,
       actorUserId: member.userId,

@@ -173,7 +173,7 @@ function acrossItems(raw: unknown, shape: Problem[]): Problem[] {
 /** Imports a document into the member's workshop, or answers its problems and writes nothing. */
 export async function importKnowledge(
   db: Db,
-  member: Pick<CurrentMember, "workshopId" | "userId">,
+  member: Pick<CurrentMember, "workshopId" | "userId" | "memberId">,
   raw: unknown,
 ): Promise<ImportAnswer> {
   const { doc, problems } = problemsOf(raw);
@@ -219,7 +219,7 @@ export async function importKnowledge(
         (kind, key) => existing.get(`${kind}:${key}`) ?? randomUUID(),
         "update",
       );
-      const kbVersion = await nextKbVersion(tx, member.workshopId);
+      const kbVersion = await nextKbVersion(tx, member.workshopId, `Imported “${doc.name}”`, member.memberId);
       await audit(tx, {
         workshopId: member.workshopId,
         actorUserId: member.userId,

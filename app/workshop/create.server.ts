@@ -3,6 +3,7 @@ import type { Db } from "~/db/client.server";
 import { members, workshops } from "~/db/schema";
 import { countryDefaults } from "~/domain/countries";
 import { copyKnowledgeBase, loadTemplate, STARTER_TEMPLATE } from "~/kb/copy.server";
+import { keepCurrentVersion } from "~/kb/version.server";
 
 export type NewWorkshopInput = { name: string; country: string; labourRatePerHour: number };
 
@@ -40,6 +41,7 @@ export async function createWorkshop(db: Db, userId: string, input: NewWorkshopI
       .returning({ id: workshops.id, slug: workshops.slug });
     await tx.insert(members).values({ workshopId: w.id, userId, role: "admin", skill: "technician" });
     await copyKnowledgeBase(tx, w.id, await loadTemplate(tx, STARTER_TEMPLATE));
+    await keepCurrentVersion(tx, w.id, "Starter knowledge base");
     await audit(tx, {
       workshopId: w.id,
       actorUserId: userId,

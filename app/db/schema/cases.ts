@@ -41,6 +41,9 @@ export const cases = pgTable(
     signedOffById: uuid("signed_off_by_id").references(() => members.id, { onDelete: "set null" }),
     // Optimistic concurrency for the shared text fields (complaint, conclusion).
     version: integer("version").notNull().default(1),
+    // The knowledge-base version the case is ranked with: set when it opens, moved on only when
+    // someone asks, so a change to the base never re-ranks a case under a technician's hands.
+    kbVersion: integer("kb_version").notNull().default(1),
     openedAt: timestamp("opened_at", { withTimezone: true }).notNull().defaultNow(),
     concludedAt: timestamp("concluded_at", { withTimezone: true }),
     closedAt: timestamp("closed_at", { withTimezone: true }),

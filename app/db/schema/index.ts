@@ -6,4 +6,5 @@ export * from "./knowledge";
 export * from "./cases";
 export * from "./audit";
 export * from "./proposals";
+export * from "./versions";
 export * from "./relations";

@@ -16,6 +16,7 @@ import { UndoNotice } from "~/components/case/undo-notice";
 import { Fold } from "~/components/fold";
 import { FormMessages } from "~/components/ui/form-errors";
 import { EvidenceList } from "~/components/case/evidence-list";
+import { KnowledgeVersion } from "~/components/case/knowledge-version";
 import { ProposePanel } from "~/components/case/propose-panel";
 import { LikelyCauses } from "~/components/case/likely-causes";
 import { CaseQuickFind } from "~/components/case/case-quick-find";
@@ -165,6 +166,13 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
         }
       />
       <SeniorNotes question={c.question} seniorNote={c.seniorNote} needsSenior={c.needsSenior} />
+      <KnowledgeVersion
+        rankedWith={d.knowledge.version}
+        pinned={c.kbVersion}
+        newest={c.workshop.kbVersion}
+        setAside={d.knowledge.setAside}
+        canWork={me.canWork}
+      />
       <FormMessages errors={actionData?.errors} notice={actionData?.notice} />
       {apprentice ? (
         // Under a car on a phone: the next check, Ask a senior and the evidence come before the statistics.

@@ -3,6 +3,9 @@ import { PriorityMark } from "~/components/priority";
 import { Fold } from "~/components/fold";
 import { dbContext } from "~/http/context";
 import { kbOverview } from "~/kb/overview.server";
+import { listVersions } from "~/kb/version.server";
+import { kbVersion } from "~/kb/knowledge.server";
+import { VersionList } from "~/components/kb/version-list";
 import { SYSTEM_LABEL } from "~/domain/knowledge";
 import { can } from "~/domain/permissions";
 import { href, Link } from "react-router";
@@ -10,10 +13,13 @@ import type { Route } from "./+types/overview";
 
 export async function loader({ context }: Route.LoaderArgs) {
   const member = context.get(memberContext);
-  return {
-    ...(await kbOverview(context.get(dbContext), member.workshopId)),
-    mayEdit: can(member.role, "kb:edit"),
-  };
+  const db = context.get(dbContext);
+  const [overview, versions, current] = await Promise.all([
+    kbOverview(db, member.workshopId),
+    listVersions(db, member.workshopId, 12),
+    kbVersion(db, member.workshopId),
+  ]);
+  return { ...overview, versions, current, mayEdit: can(member.role, "kb:edit") };
 }
 
 export function meta() {
@@ -67,6 +73,7 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
           </div>
         ))}
       </dl>
+      <VersionList versions={loaderData.versions} current={loaderData.current} />
       <div className="mt-8 grid gap-8 lg:grid-cols-2">
         <section aria-labelledby="tree">
           <h2 id="tree" className="text-xl font-semibold">

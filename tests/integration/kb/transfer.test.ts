@@ -59,7 +59,11 @@ describe("knowledge-base export and import", () => {
     expect(first.symptoms.length).toBeGreaterThanOrEqual(110);
     // The empty workshop's own admin: the import acts for a member of the target workshop.
     const target = await emptyWorkshop("empty-round-trip");
-    const answer = await importKnowledge(db(), { workshopId: target, userId: senior.userId }, first);
+    const answer = await importKnowledge(
+      db(),
+      { workshopId: target, userId: senior.userId, memberId: senior.memberId },
+      first,
+    );
     expect(answer.ok, JSON.stringify(answer)).toBe(true);
     if (!answer.ok) return;
     expect(answer.counts.symptoms).toEqual({ added: first.symptoms.length, updated: 0 });

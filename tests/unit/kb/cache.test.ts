@@ -13,13 +13,22 @@ describe("the knowledge-base cache", () => {
     expect(build).toHaveBeenCalledTimes(3);
   });
 
-  it("drops a workshop's older versions when a newer one is read, and keeps other workshops'", async () => {
+  it("keeps older versions beside newer ones, for cases still ranked under them", async () => {
     const cache = kbCache<string>("t");
     await cache.get("w1", 1, "", () => "v1");
-    await cache.get("w2", 1, "", () => "other");
     await cache.get("w1", 2, "", () => "v2");
     expect(cache.size).toBe(2);
-    expect(await cache.get("w2", 1, "", () => "rebuilt")).toBe("other");
+    expect(await cache.get("w1", 1, "", () => "rebuilt")).toBe("v1");
+  });
+
+  it("forgets the least recently used entry first", async () => {
+    const cache = kbCache<string>("t", 2);
+    await cache.get("w", 1, "", () => "one");
+    await cache.get("w", 2, "", () => "two");
+    await cache.get("w", 1, "", () => "again"); // version 1 is now the most recent
+    await cache.get("w", 3, "", () => "three"); // so version 2 goes
+    expect(await cache.get("w", 1, "", () => "rebuilt")).toBe("one");
+    expect(await cache.get("w", 2, "", () => "rebuilt")).toBe("rebuilt");
   });
 
   it("forgets a failed build and stays within its bound", async () => {
