@@ -1,5 +1,6 @@
 import { href } from "react-router";
 import { describeStrength } from "~/domain/link-strength";
+import { CAUSE_FIELD_WORDS, CHECK_FIELD_WORDS, SYMPTOM_FIELD_WORDS } from "./field-words";
 // Audit entries in the words of the workshop floor: a sentence that starts after the actor's name
 // ("Priya Hale recorded a fault: …") and, where the entry concerns a record, a link to it. Shared by
 // the case history and the workshop's audit log, browser-safe.
@@ -55,41 +56,6 @@ function settingsChange(before: Fields, after: Fields): string {
   return `changed the workshop's ${changed.map((k) => SETTING_WORDS[k](after[k])).join(", ")}`;
 }
 
-const SYMPTOM_FIELD_WORDS: Record<string, string> = {
-  name: "its name",
-  synonyms: "the words people use for it",
-  kind: "its kind",
-  code: "its trouble code",
-  conditions: "when it shows",
-  leak: "how often it shows without a listed cause",
-};
-
-const CHECK_FIELD_WORDS: Record<string, string> = {
-  name: "its name",
-  instructions: "its steps",
-  tools: "its tools",
-  minutes: "its minutes",
-  consumablesCost: "its consumables cost",
-  access: "the access it needs",
-  skill: "who may do it",
-  cautions: "its cautions",
-  quantity: "the quantity measured",
-  unit: "its unit",
-  rule: "its rule",
-  failMeans: "what a fail means",
-  falseAlarm: "its false-alarm rate",
-};
-
-const CAUSE_FIELD_WORDS: Record<string, string> = {
-  description: "the technician's description",
-  ownerDescription: "the words for the owner",
-  ifLeft: "what happens if it is left",
-  baseRate: "the base rate",
-  repairMinutes: "the repair minutes",
-  partsCost: "the parts cost",
-  priority: "the priority",
-};
-
 /** "moved “Warped disc” under “Wheel hubs”, renamed it from “…”, changed the base rate from 6 to 4". */
 function causeEditSentence(a: Fields, b: Fields): string {
   const changed = Array.isArray(a.changed) ? (a.changed as string[]) : [];
@@ -101,7 +67,7 @@ function causeEditSentence(a: Fields, b: Fields): string {
     parts.push(
       ["description", "ownerDescription", "ifLeft"].includes(f)
         ? `changed ${CAUSE_FIELD_WORDS[f]}`
-        : `changed ${CAUSE_FIELD_WORDS[f]} from ${b[f] ?? "none"}`,
+        : `changed ${CAUSE_FIELD_WORDS[f]} from ${b[f] ?? "none"}${f in a ? ` to ${a[f] ?? "none"}` : ""}`,
     );
   return `edited the cause “${a.name}”: ${parts.join(", ")}`;
 }

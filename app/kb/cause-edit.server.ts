@@ -133,10 +133,12 @@ export async function updateCause(db: Db, member: Member, causeId: string, edit:
       entityId: causeId,
       before: { name: was.name, ...Object.fromEntries(changed.map((f) => [f, was[f]])) },
       after: {
+        ...Object.fromEntries(changed.map((f) => [f, (set as Record<string, unknown>)[f]])),
         name: edit.name,
         changed,
         movedUnder: changed.includes("parentId") ? parentName : undefined,
         kbVersion,
+        items: [causeId],
       },
     });
     return { changed, kbVersion, movedUnder: changed.includes("parentId") ? parentName : null };
@@ -173,7 +175,7 @@ export async function retireCause(db: Db, member: Member, causeId: string) {
       action: "kb.cause.retire",
       entity: "cause",
       entityId: causeId,
-      after: { name: was.name, kbVersion },
+      after: { name: was.name, kbVersion, items: [causeId] },
     });
     return { name: was.name, kbVersion };
   });

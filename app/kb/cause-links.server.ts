@@ -117,7 +117,14 @@ export async function setLinkStrength(
       entity: change.link === "symptom" ? "symptom_link" : "check_link",
       entityId: change.causeId,
       before: { p: before },
-      after: { p: change.p, link: change.link, cause: cause.name, other: otherName, kbVersion },
+      after: {
+        p: change.p,
+        link: change.link,
+        cause: cause.name,
+        other: otherName,
+        kbVersion,
+        items: [change.causeId, change.otherId],
+      },
     });
     return { before, after: change.p, causeName: cause.name, otherName, kbVersion };
   });

@@ -117,7 +117,13 @@ export async function updateCheck(
         entity: "check",
         entityId: checkId,
         before: Object.fromEntries(changed.map((k) => [k, was[k]])),
-        after: { name: edit.name, changed, kbVersion },
+        after: {
+          ...Object.fromEntries(changed.map((k) => [k, set[k]])),
+          name: edit.name,
+          changed,
+          kbVersion,
+          items: [checkId],
+        },
       });
     return { changed, kbVersion };
   });

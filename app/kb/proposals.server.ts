@@ -87,6 +87,7 @@ export async function propose(db: Db, member: Member, input: ProposalInput) {
         under: input.kind === "cause" ? cause.name : undefined,
         p: input.p,
         caseNumber: c.number,
+        items: [input.symptomId, input.causeId],
       },
     });
     return { id: row.id, caseNumber: c.number };
@@ -220,6 +221,7 @@ export async function reviewProposal(db: Db, member: Member, proposalId: string,
         cause: p.kind === "cause" ? p.causeName : target.name,
         p: p.p,
         comment: review.comment.trim(),
+        items: [p.symptomId, p.causeId, ...(made && made.causeId !== p.causeId ? [made.causeId] : [])],
       },
     });
     return {

@@ -98,7 +98,13 @@ export async function updateSymptom(
       entity: "symptom",
       entityId: symptomId,
       before: Object.fromEntries(changed.map((k) => [k, was[k]])),
-      after: { name: edit.name, changed, kbVersion },
+      after: {
+        ...Object.fromEntries(changed.map((k) => [k, set[k]])),
+        name: edit.name,
+        changed,
+        kbVersion,
+        items: [symptomId],
+      },
     });
     return { changed, kbVersion };
   });

@@ -1,5 +1,6 @@
 // A senior edits a symptom's words: a malformed trouble code is refused at its field, new synonyms
-// save with a new version. A technician reads the symptom and the causes that show it.
+// save with a new version and show in its history, before and after. A technician reads the symptom
+// and the causes that show it.
 import { describe, expect, it } from "vitest";
 import { kbId } from "../../seeds/knowledge";
 import { baseUrl, hydrated, signInAs, useBrowser } from "./browser";
@@ -28,6 +29,14 @@ describe("editing a symptom", () => {
     await page.getByRole("button", { name: "Save the symptom" }).click();
     await page.getByRole("status").filter({ hasText: "Quick find reads the new words at once" }).waitFor();
     await page.getByText(/Also: .*scrapes like metal on metal/).waitFor();
+    // Its history says who changed what, with the words before and after.
+    await page.getByText(/^History \(\d+/).click();
+    const change = page.getByRole("list", { name: "Changes, newest first" }).getByRole("listitem").first();
+    await change.getByText("Tomas Varga", { exact: true }).waitFor();
+    await change
+      .getByText(/edited the symptom “Grinding when braking”: changed the words people use for it/)
+      .waitFor();
+    await change.getByText(/→ .*scrapes like metal on metal/).waitFor();
     expect(errors.filter((e) => !/status of 400/.test(e))).toEqual([]);
     await page.close();
   });

@@ -16,6 +16,8 @@ import { causeWithLinks, findCause, setLinkStrength } from "~/kb/cause-links.ser
 import { possibleParents, retireCause, updateCause } from "~/kb/cause-edit.server";
 import { previewChange } from "~/kb/impact.server";
 import { getWorkshop } from "~/workshop/settings.server";
+import { itemHistory } from "~/audit/item-history.server";
+import { ItemHistory } from "~/components/kb/item-history";
 import type { Route } from "./+types/cause";
 
 export async function loader({ params, context }: Route.LoaderArgs) {
@@ -23,12 +25,12 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const db = context.get(dbContext);
   const found = await causeWithLinks(db, member.workshopId, params.causeId);
   const mayEdit = can(member.role, "kb:edit");
-  return {
-    ...found,
-    currency: (await getWorkshop(db, member.workshopId)).currency,
-    mayEdit,
-    parents: mayEdit ? await possibleParents(db, member.workshopId, found.cause.level) : [],
-  };
+  const [workshop, history, parents] = await Promise.all([
+    getWorkshop(db, member.workshopId),
+    itemHistory(db, member.workshopId, found.cause.id),
+    mayEdit ? possibleParents(db, member.workshopId, found.cause.level) : [],
+  ]);
+  return { ...found, currency: workshop.currency, mayEdit, history, parents };
 }
 
 // The field of one link's strength: its own name, so the message lands beside that link.
@@ -218,6 +220,7 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
           empty="No check is linked to it."
         />
       </section>
+      <ItemHistory lines={loaderData.history} />
       <section aria-labelledby="words" className="card">
         <h2 id="words" className="text-lg font-semibold">
           The words for strength

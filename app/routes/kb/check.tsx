@@ -14,12 +14,17 @@ import { dbContext } from "~/http/context";
 import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
 import { checkEditProblems, checkWithLinks, updateCheck } from "~/kb/check-edit.server";
 import { compileRule } from "~/measure";
+import { itemHistory } from "~/audit/item-history.server";
+import { ItemHistory } from "~/components/kb/item-history";
 import type { Route } from "./+types/check";
 
 export async function loader({ params, context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "kb:read");
+  const db = context.get(dbContext);
+  const found = await checkWithLinks(db, member.workshopId, params.checkId);
   return {
-    ...(await checkWithLinks(context.get(dbContext), member.workshopId, params.checkId)),
+    ...found,
+    history: await itemHistory(db, member.workshopId, found.check.id),
     mayEdit: can(member.role, "kb:edit"),
   };
 }
@@ -133,6 +138,7 @@ export default function CheckPage({ loaderData, actionData }: Route.ComponentPro
       </section>
       <FormMessages errors={errors} notice={actionData?.notice} />
       {mayEdit ? <CheckEditor check={check} errors={errors} /> : null}
+      <ItemHistory lines={loaderData.history} />
     </div>
   );
 }

@@ -10,12 +10,17 @@ import type { FormErrors } from "~/http/forms";
 import { dbContext } from "~/http/context";
 import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
 import { symptomEditProblems, symptomWithLinks, updateSymptom } from "~/kb/symptom-edit.server";
+import { itemHistory } from "~/audit/item-history.server";
+import { ItemHistory } from "~/components/kb/item-history";
 import type { Route } from "./+types/symptom";
 
 export async function loader({ params, context }: Route.LoaderArgs) {
   const member = requirePermission(context.get(memberContext), "kb:read");
+  const db = context.get(dbContext);
+  const found = await symptomWithLinks(db, member.workshopId, params.symptomId);
   return {
-    ...(await symptomWithLinks(context.get(dbContext), member.workshopId, params.symptomId)),
+    ...found,
+    history: await itemHistory(db, member.workshopId, found.symptom.id),
     mayEdit: can(member.role, "kb:edit"),
   };
 }
@@ -106,6 +111,7 @@ export default function SymptomPage({ loaderData, actionData }: Route.ComponentP
       </section>
       <FormMessages errors={errors} notice={actionData?.notice} />
       {mayEdit ? <SymptomEditor symptom={symptom} errors={errors} /> : null}
+      <ItemHistory lines={loaderData.history} />
     </div>
   );
 }

@@ -47,7 +47,7 @@ describe("editing the cause tree", () => {
     expect(await kbVersion(db(), BRAMBLEGATE)).toBe(v0 + 1);
     const [entry] = await db().select().from(auditLog).where(eq(auditLog.entityId, id));
     expect(describeAudit(entry).text).toBe(
-      `edited the cause “${before.name}”: moved it under “${other.name}”, changed the base rate from ${before.baseRate}`,
+      `edited the cause “${before.name}”: moved it under “${other.name}”, changed the base rate from ${before.baseRate} to 5`,
     );
   });
 
