@@ -33,7 +33,11 @@ const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 /** Each changed field with its value before and after; empty for entries that are not edits. */
 export function changesOf(entry: Pick<AuditLine, "action" | "before" | "after">): FieldChange[] {
   const [a, b] = [obj(entry.after), obj(entry.before)];
-  if (entry.action === "kb.link" || (entry.action === "kb.proposal.accept" && typeof b.p === "number"))
+  if (
+    entry.action === "kb.link" ||
+    entry.action === "kb.link.add" ||
+    (entry.action === "kb.proposal.accept" && typeof b.p === "number")
+  )
     return [
       {
         what:

@@ -121,6 +121,14 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
     return `edited the symptom “${a.name}”: changed ${changed.map((f) => SYMPTOM_FIELD_WORDS[f] ?? f).join(", ") || "nothing"}`;
   },
   "kb.cause.retire": (a) => `retired the cause “${a.name}”: it is no longer ranked`,
+  "kb.cause.add": (a) =>
+    `added ${a.level === "component" ? "the component" : "the failure mode"} “${a.name}” under “${a.under}”`,
+  "kb.cause.merge": (a) =>
+    `merged “${a.name}” into “${a.into}”: ${a.level === "component" ? `${a.moved} failure modes moved` : `${a.moved} links moved, ${a.kept} kept as “${a.into}” had them`}`,
+  "kb.link.add": (a) =>
+    a.link === "check"
+      ? `linked the check “${a.other}” to “${a.cause}”: it fails ${describeStrength(Number(a.p))} of the time when that is the cause`
+      : `linked “${a.cause}” to the symptom “${a.other}”: it shows ${describeStrength(Number(a.p))}`,
   "kb.propose": (a) =>
     a.kind === "cause"
       ? `proposed a new cause “${a.cause}” beside the others under “${a.under}”, shown as “${a.symptom}” ${describeStrength(Number(a.p))}`

@@ -17,11 +17,18 @@ export function refuse(status: number, message: string, extra?: Record<string, u
 }
 
 /** The message inside a refusal, for pages that show it on the form instead of an error page. */
-export async function refusalMessage(error: unknown): Promise<{ status: number; message: string } | null> {
+export async function refusalMessage(
+  error: unknown,
+): Promise<{ status: number; message: string; errors?: Record<string, string[]> } | null> {
   if (!(error instanceof Response) || error.status >= 500 || error.status < 400) return null;
   const text = await error.clone().text();
   try {
-    return { status: error.status, message: (JSON.parse(text) as { error?: string }).error ?? text };
+    const body = JSON.parse(text) as { error?: string; errors?: Record<string, string[]> };
+    return {
+      status: error.status,
+      message: body.error ?? text,
+      ...(body.errors ? { errors: body.errors } : {}),
+    };
   } catch {
     return { status: error.status, message: text };
   }

@@ -60,6 +60,8 @@ export async function onForm(work: () => Promise<string>, field = "form") {
 /** A server module's refusal as the form's answer; anything else (a redirect, a fault) is thrown on. */
 export async function refusedOnForm(error: unknown, field = "form") {
   const refused = await refusalMessage(error);
-  if (refused && refused.status !== 404) return invalid({ [field]: [refused.message] }, refused.status);
+  // A refusal that names its fields (refuse(…, { errors })) puts each message beside its field.
+  if (refused && refused.status !== 404)
+    return invalid(refused.errors ?? { [field]: [refused.message] }, refused.status);
   throw error;
 }

@@ -52,7 +52,23 @@ export function CauseEditor({
     />
   );
   return (
-    <EditorFold id="edit" title="Edit this cause" errors={errors}>
+    <EditorFold
+      id="edit"
+      title="Edit this cause"
+      errors={errors}
+      fields={[
+        "name",
+        "parentId",
+        "description",
+        "ownerDescription",
+        "ifLeft",
+        "baseRate",
+        "repairMinutes",
+        "partsCost",
+        "priority",
+        "confirm",
+      ]}
+    >
       <Form method="post" className="mt-2 grid gap-3">
         {text("name", "Name")}
         {cause.level !== "system" ? (

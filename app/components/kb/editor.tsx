@@ -21,17 +21,21 @@ export function EditorFold({
   id,
   title,
   errors,
+  fields,
   children,
 }: {
   id: string;
   title: string;
   errors: FormErrors | undefined;
+  /** The fields of this fold's forms: it opens by itself only for their messages (all, if not given). */
+  fields?: string[];
   children: ReactNode;
 }) {
+  const mine = Object.keys(errors ?? {}).filter((k) => !fields || fields.includes(k));
   return (
     <section aria-labelledby={id} className="rounded-card border border-rule bg-card p-4">
       <Fold
-        open={Boolean(errors && Object.keys(errors).length)}
+        open={mine.length > 0}
         summaryClassName="min-h-tap cursor-pointer content-center font-semibold"
         summary={<span id={id}>{title}</span>}
       >

@@ -7,4 +7,5 @@ export * from "./cases";
 export * from "./audit";
 export * from "./proposals";
 export * from "./versions";
+export * from "./test-cases";
 export * from "./relations";

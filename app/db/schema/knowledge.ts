@@ -90,6 +90,8 @@ export const causes = pgTable(
     applicability: jsonb("applicability").$type<Applicability>().notNull().default({}),
     // A retired cause is no longer ranked; cases that refer to it keep showing it.
     retiredAt: timestamp("retired_at", { withTimezone: true }),
+    // Set when the cause was merged into another (it is then retired too); cases keep naming it.
+    mergedIntoId: uuid("merged_into_id").references((): AnyPgColumn => causes.id, { onDelete: "set null" }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },

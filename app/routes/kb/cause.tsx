@@ -18,6 +18,8 @@ import { previewChange } from "~/kb/impact.server";
 import { getWorkshop } from "~/workshop/settings.server";
 import { itemHistory } from "~/audit/item-history.server";
 import { ItemHistory } from "~/components/kb/item-history";
+import { treeChoices, treeIntent } from "~/kb/tree-forms.server";
+import { AddChildForm, AddLinkForms, MergeForm } from "~/components/kb/tree-forms";
 import type { Route } from "./+types/cause";
 
 export async function loader({ params, context }: Route.LoaderArgs) {
@@ -25,12 +27,20 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const db = context.get(dbContext);
   const found = await causeWithLinks(db, member.workshopId, params.causeId);
   const mayEdit = can(member.role, "kb:edit");
-  const [workshop, history, parents] = await Promise.all([
+  const editable = mayEdit && !found.cause.retiredAt;
+  const [workshop, history, parents, choices] = await Promise.all([
     getWorkshop(db, member.workshopId),
     itemHistory(db, member.workshopId, found.cause.id),
     mayEdit ? possibleParents(db, member.workshopId, found.cause.level) : [],
+    editable ? treeChoices(db, member.workshopId, found.cause) : null,
   ]);
-  return { ...found, currency: workshop.currency, mayEdit, history, parents };
+  const mergedInto = found.cause.mergedIntoId
+    ? await findCause(db, member.workshopId, found.cause.mergedIntoId).then((c) => ({
+        id: c.id,
+        name: c.name,
+      }))
+    : null;
+  return { ...found, currency: workshop.currency, mayEdit, history, parents, choices, mergedInto };
 }
 
 // The field of one link's strength: its own name, so the message lands beside that link.
@@ -63,6 +73,8 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const cause = await findCause(db, context.get(memberContext).workshopId, params.causeId);
   const member = requirePermission(context.get(memberContext), "kb:edit");
   const form = Object.fromEntries(await request.formData());
+  const tree = await treeIntent(db, member, cause, form);
+  if (tree) return tree;
   if (form.intent === "retire") {
     if (form.confirm !== "yes") return invalid({ confirm: ["Tick the box to say you mean to retire it."] });
     return onForm(async () => {
@@ -177,11 +189,37 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
       </dl>
       {cause.retiredAt ? (
         <p className="rounded-lg border-2 border-rule bg-card p-3 font-medium">
-          Retired: no longer ranked. Cases that name it still show it.
+          {loaderData.mergedInto ? (
+            <>
+              Merged into{" "}
+              <Link
+                className="underline"
+                to={href("/kb/causes/:causeId", { causeId: loaderData.mergedInto.id })}
+              >
+                {loaderData.mergedInto.name}
+              </Link>
+              : no longer ranked. Cases that name it still show it.
+            </>
+          ) : (
+            "Retired: no longer ranked. Cases that name it still show it."
+          )}
         </p>
       ) : null}
       <FormMessages errors={errors} notice={actionData?.notice} />
       {mayEdit && !cause.retiredAt ? <CauseEditor cause={cause} parents={parents} errors={errors} /> : null}
+      {loaderData.choices ? (
+        <>
+          <AddChildForm level={cause.level} errors={errors} />
+          {leaf ? (
+            <AddLinkForms
+              symptoms={loaderData.choices.symptoms}
+              checks={loaderData.choices.checks}
+              errors={errors}
+            />
+          ) : null}
+          <MergeForm level={cause.level} into={loaderData.choices.mergeInto} errors={errors} />
+        </>
+      ) : null}
       <section aria-labelledby="shows" className="card">
         <h2 id="shows" className="text-xl font-semibold">
           Symptoms it shows
