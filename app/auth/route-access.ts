@@ -48,6 +48,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
       "add-child": "kb:edit",
       "add-link": "kb:edit",
       merge: "kb:edit",
+      move: "kb:edit",
     },
   },
   "routes/kb/transfer.tsx": { path: "/kb/transfer", GET: "kb:edit", POST: "kb:edit" },

@@ -1,11 +1,13 @@
 // The workshop's cases with a confirmed cause, as the impact preview ranks them again, and the
 // preview of one link change against them (app/kb/impact.ts does the arithmetic).
-import { and, count, desc, eq, inArray, isNotNull } from "drizzle-orm";
+import { and, desc, eq, inArray, isNotNull } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { cases, causes, findings, observations, vehicles, workshops } from "~/db/schema";
 import { impactOf, type ImpactCase, type KbChange, withChange } from "./impact";
 import { loadKnowledge } from "./knowledge.server";
 import { vehicleFacts } from "./model";
+import { outcomesByFuel } from "./outcomes.server";
+import { testImpactCases } from "./test-cases.server";
 
 // The newest cases with a confirmed cause: enough to show a change's effect, few enough that one
 // preview stays well under a second of ranking.
@@ -71,21 +73,6 @@ async function confirmedCases(db: Db, workshopId: string): Promise<ImpactCase[]>
   }));
 }
 
-/** How often each cause was confirmed on closed cases, by fuel: the priors the live ranking uses. */
-async function outcomesByFuel(db: Db, workshopId: string) {
-  const rows = await db
-    .select({ fuel: vehicles.fuelType, causeId: cases.conclusionCauseId, n: count() })
-    .from(cases)
-    .innerJoin(vehicles, eq(vehicles.id, cases.vehicleId))
-    .where(
-      and(eq(cases.workshopId, workshopId), eq(cases.state, "closed"), isNotNull(cases.conclusionCauseId)),
-    )
-    .groupBy(vehicles.fuelType, cases.conclusionCauseId);
-  const out: Record<string, Record<string, number>> = {};
-  for (const r of rows) (out[r.fuel] ??= {})[r.causeId!] = r.n;
-  return out;
-}
-
 /** What one link change would do to the workshop's confirmed cases' rankings. */
 export async function previewChange(db: Db, workshopId: string, change: KbChange) {
   const [w] = await db
@@ -93,9 +80,14 @@ export async function previewChange(db: Db, workshopId: string, change: KbChange
     .from(workshops)
     .where(eq(workshops.id, workshopId));
   const kb = await loadKnowledge(db, workshopId, w.kbVersion);
-  const [list, outcomes] = await Promise.all([
+  const [list, tests, outcomes] = await Promise.all([
     confirmedCases(db, workshopId),
+    testImpactCases(db, workshopId),
     outcomesByFuel(db, workshopId),
   ]);
-  return impactOf(kb, withChange(kb, change), list, w.labourRate, outcomes);
+  const changed = withChange(kb, change);
+  return {
+    ...impactOf(kb, changed, list, w.labourRate, outcomes),
+    tests: impactOf(kb, changed, tests, w.labourRate, outcomes),
+  };
 }

@@ -3,6 +3,7 @@
 // as it would be, and the confirmed cause's place compared. How many have it first and in the top
 // three, before and after, and which cases moved: the knowledge base's regression test. Pure.
 import { type Evidence, rankCauses, type VehicleFacts } from "~/reasoning";
+import { knownEvidence } from "~/cases/known-evidence";
 import { buildModel, type Knowledge } from "./model";
 
 export type KbChange =
@@ -12,6 +13,8 @@ export type KbChange =
 export type ImpactCase = {
   id: string;
   number: number;
+  /** A test case's name; workshop cases are named by their number. */
+  label?: string;
   answerId: string; // the confirmed cause
   answerName: string;
   fuel: string;
@@ -22,6 +25,7 @@ export type ImpactCase = {
 export type Moved = {
   id: string;
   number: number;
+  label?: string;
   answerName: string;
   before: number | null;
   after: number | null;
@@ -52,7 +56,7 @@ export function withChange(kb: Knowledge, change: KbChange): Knowledge {
 }
 
 /** The confirmed cause's place (1 = first) in each case's ranking under `kb`, null when unranked. */
-function places(
+export function places(
   kb: Knowledge,
   cases: ImpactCase[],
   labourRate: number,
@@ -64,7 +68,9 @@ function places(
     const key = JSON.stringify([c.facts, c.fuel]);
     let model = models.get(key);
     if (!model) models.set(key, (model = buildModel(kb, c.facts, labourRate, outcomes[c.fuel] ?? {})));
-    const at = rankCauses(model, c.evidence).causes.findIndex((r) => r.id === c.answerId);
+    // A kept test case may name an item this version lacks: rank it on what the version knows.
+    const evidence = knownEvidence(kb, c.evidence).evidence;
+    const at = rankCauses(model, evidence).causes.findIndex((r) => r.id === c.answerId);
     return at < 0 ? null : at + 1;
   });
 }
@@ -87,6 +93,7 @@ export function impactOf(
       .map((c, i) => ({
         id: c.id,
         number: c.number,
+        ...(c.label ? { label: c.label } : {}),
         answerName: c.answerName,
         before: was[i],
         after: now[i],

@@ -10,9 +10,10 @@ import { causes, checkLinks, checks, symptomLinks, symptoms } from "~/db/schema"
 import { PRIORITIES } from "~/domain/knowledge";
 import { describeStrength, readStrength } from "~/domain/link-strength";
 import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
+import { updateCause } from "./cause-edit.server";
 import { addCause, addLink, mergeCause } from "./tree-edit.server";
 
-type Cause = { id: string; level: "system" | "component" | "failure_mode"; name: string };
+type Cause = typeof causes.$inferSelect;
 
 /** What the tree forms of one cause offer a senior: causes to merge into, items not yet linked. */
 export async function treeChoices(db: Db, workshopId: string, cause: Cause) {
@@ -116,6 +117,27 @@ export async function treeIntent(
       });
       // The new cause's own page, where its links are added next.
       throw redirect(href("/kb/causes/:causeId", { causeId: made.id }));
+    });
+  }
+  if (form.intent === "move") {
+    // From the tree: only its place changes; its words and figures are saved as they are.
+    const parentId = typeof form.parentId === "string" ? form.parentId : "";
+    if (!parentId) return invalid({ parentId: ["Choose where it belongs."] });
+    return onForm(async () => {
+      const done = await updateCause(db, member, cause.id, {
+        name: cause.name,
+        parentId,
+        description: cause.description,
+        ownerDescription: cause.ownerDescription,
+        ifLeft: cause.ifLeft,
+        baseRate: cause.baseRate ?? undefined,
+        repairMinutes: cause.repairMinutes ?? undefined,
+        partsCost: cause.partsCost ?? undefined,
+        priority: cause.priority ?? undefined,
+      });
+      return done.changed.length
+        ? `Moved “${cause.name}” under “${done.movedUnder}”. Knowledge base now at version ${done.kbVersion}.`
+        : `“${cause.name}” is there already.`;
     });
   }
   if (form.intent === "merge") {

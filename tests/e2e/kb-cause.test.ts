@@ -123,7 +123,8 @@ describe("a cause's links in words", () => {
     await page.goto(`${baseUrl()}/kb`);
     await hydrated(page);
     await page.getByText("Brakes", { exact: true }).first().click();
-    const branch = page.locator("li", { has: page.locator(`p:text-is("${component}")`) });
+    // The component's branch: the tree row whose own link is the component.
+    const branch = page.locator("li", { has: page.getByRole("link", { name: component, exact: true }) });
     await branch.getByRole("link", { name }).waitFor();
     expect(errors).toEqual([]);
     await page.close();

@@ -1,12 +1,10 @@
 import { memberContext } from "~/auth/guards.server";
-import { PriorityMark } from "~/components/priority";
-import { Fold } from "~/components/fold";
+import { CauseTree } from "~/components/kb/cause-tree";
 import { dbContext } from "~/http/context";
 import { kbOverview } from "~/kb/overview.server";
 import { listVersions } from "~/kb/version.server";
 import { kbVersion } from "~/kb/knowledge.server";
 import { VersionList } from "~/components/kb/version-list";
-import { SYSTEM_LABEL } from "~/domain/knowledge";
 import { can } from "~/domain/permissions";
 import { href, Link } from "react-router";
 import type { Route } from "./+types/overview";
@@ -28,8 +26,6 @@ export function meta() {
 
 export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
   const { counts, tree, symptoms } = loaderData;
-  const systems = tree.filter((n) => n.level === "system");
-  const childrenOf = (id: string) => tree.filter((n) => n.parentId === id);
   return (
     <div>
       <div className="flex flex-wrap items-baseline justify-between gap-3">
@@ -79,41 +75,7 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
           <h2 id="tree" className="text-xl font-semibold">
             Cause tree
           </h2>
-          {systems.map((sys) => (
-            // A system's branch is drawn once it is opened: the whole tree is hundreds of rows.
-            <Fold
-              key={sys.id}
-              className="mt-3 rounded-card border border-rule bg-card p-3"
-              summaryClassName="min-h-tap cursor-pointer content-center font-semibold"
-              summary={SYSTEM_LABEL[sys.system as keyof typeof SYSTEM_LABEL] ?? sys.name}
-            >
-              <ul className="mt-2 grid gap-2">
-                {childrenOf(sys.id).map((comp) => (
-                  <li key={comp.id}>
-                    <p className="font-medium">{comp.name}</p>
-                    <ul className="ml-4 grid gap-1">
-                      {childrenOf(comp.id).map((fm) => (
-                        <li
-                          key={fm.id}
-                          id={`cause-${fm.id}`}
-                          className="flex items-center justify-between gap-2 text-graphite-800"
-                        >
-                          <Link
-                            className="inline-flex min-h-tap items-center underline decoration-rule underline-offset-2"
-                            to={href("/kb/causes/:causeId", { causeId: fm.id })}
-                          >
-                            {fm.name}
-                          </Link>
-                          {fm.retired ? <span className="meta">retired</span> : null}
-                          {fm.priority ? <PriorityMark priority={fm.priority} /> : null}
-                        </li>
-                      ))}
-                    </ul>
-                  </li>
-                ))}
-              </ul>
-            </Fold>
-          ))}
+          <CauseTree tree={tree} mayEdit={loaderData.mayEdit} />
         </section>
         <section aria-labelledby="symptoms">
           <h2 id="symptoms" className="text-xl font-semibold">
