@@ -15,6 +15,7 @@ export default [
     route("kb", "routes/kb/overview.tsx"),
     route("kb/export", "routes/kb/export.ts"),
     route("kb/proposals", "routes/kb/proposals.tsx"),
+    route("kb/test-cases", "routes/kb/test-cases.tsx"),
     route("kb/causes/:causeId", "routes/kb/cause.tsx"),
     route("kb/checks/:checkId", "routes/kb/check.tsx"),
     route("kb/symptoms/:symptomId", "routes/kb/symptom.tsx"),

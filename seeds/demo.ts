@@ -16,6 +16,7 @@ import { countryDefaults } from "../app/domain/countries";
 import { DEMO_CASES } from "./demo/cases";
 import { DEMO_OWNERS, DEMO_VEHICLES } from "./demo/fleet";
 import { DEMO_PEOPLE, DEMO_WORKSHOPS } from "./demo/people";
+import { seedTestCases } from "./demo/test-cases";
 import { seedId } from "./ids";
 import { starterKnowledgeBase } from "./kb";
 import { kbId, seedKnowledgeBase, seedStarterTemplate } from "./knowledge";
@@ -177,5 +178,6 @@ export async function seedDemo(db: Db, now = new Date()) {
           .onConflictDoNothing();
       }
     }
+    await seedTestCases(tx);
   });
 }

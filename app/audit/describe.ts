@@ -125,6 +125,8 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
     `added ${a.level === "component" ? "the component" : "the failure mode"} “${a.name}” under “${a.under}”`,
   "kb.cause.merge": (a) =>
     `merged “${a.name}” into “${a.into}”: ${a.level === "component" ? `${a.moved} failure modes moved` : `${a.moved} links moved, ${a.kept} kept as “${a.into}” had them`}`,
+  "kb.test_case.keep": (a) => `kept case #${a.caseNumber} as the test case “${a.name}”`,
+  "kb.test_case.remove": (_a, b) => `removed the test case “${b.name}”`,
   "kb.link.add": (a) =>
     a.link === "check"
       ? `linked the check “${a.other}” to “${a.cause}”: it fails ${describeStrength(Number(a.p))} of the time when that is the cause`
@@ -166,6 +168,8 @@ export function describeAudit(entry: AuditLine): Described {
   if (entry.action.startsWith("member."))
     return { text, href: href("/settings/members"), linkText: "members" };
   if (entry.action === "settings.update") return { text, href: href("/settings"), linkText: "settings" };
+  if (entry.action.startsWith("kb.test_case"))
+    return { text, href: href("/kb/test-cases"), linkText: "test cases" };
   if (entry.action.startsWith("kb.propos"))
     return { text, href: href("/kb/proposals"), linkText: "proposals" };
   if (entry.action.startsWith("kb.")) return { text, href: href("/kb"), linkText: "knowledge base" };

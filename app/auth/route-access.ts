@@ -51,6 +51,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
       move: "kb:edit",
     },
   },
+  "routes/kb/test-cases.tsx": { path: "/kb/test-cases", GET: "kb:read", POST: "kb:edit" },
   "routes/kb/transfer.tsx": { path: "/kb/transfer", GET: "kb:edit", POST: "kb:edit" },
   "routes/settings/workshop.tsx": { path: "/settings", GET: "member", POST: "settings:manage" },
   "routes/settings/members.tsx": {
@@ -79,6 +80,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
       reopen: "case:reopen",
       close: "case:close",
       "newest-knowledge": "case:work",
+      "keep-test-case": "kb:edit",
     },
   },
   "routes/api/search.ts": { path: "/api/search?q=brake", api: true, GET: "case:read" },

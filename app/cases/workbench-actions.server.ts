@@ -6,6 +6,7 @@ import { refuse } from "~/http/errors.server";
 import type { Db } from "~/db/client.server";
 import type { CaseFields } from "./case.server";
 import { moveToNewestKnowledge } from "./knowledge-version.server";
+import { keepTestCase } from "~/kb/test-cases.server";
 import { askSenior, close, conclude, reopen, signOff, updateComplaint } from "./workflow.server";
 
 // The forms of the case workbench, told apart by their intent.
@@ -37,6 +38,10 @@ export const WorkbenchForm = z.discriminatedUnion("intent", [
   }),
   z.object({ intent: z.literal("close"), version: z.coerce.number().int() }),
   z.object({ intent: z.literal("newest-knowledge") }),
+  z.object({
+    intent: z.literal("keep-test-case"),
+    testName: z.string().trim().min(3, "Name the test case in a few words").max(200),
+  }),
 ]);
 
 /** The role check comes before the form is read, so a refused role learns nothing from validation. */
@@ -60,7 +65,9 @@ export function assertIntentAllowed(
                 ? can(member.role, "case:close")
                 : intent === "newest-knowledge"
                   ? mayWorkOn(member, c)
-                  : true; // unknown intents fail validation with a 400
+                  : intent === "keep-test-case"
+                    ? can(member.role, "kb:edit")
+                    : true; // unknown intents fail validation with a 400
   if (!allowed) refuse(403, `Your role (${member.role}) cannot do this on a case.`);
 }
 
@@ -95,6 +102,10 @@ export async function runWorkbenchForm(
     case "close":
       await close(db, member, c, form);
       return "Case closed.";
+    case "keep-test-case": {
+      const kept = await keepTestCase(db, member, c.id, form.testName);
+      return `Kept as the test case “${kept.name}”: every preview of a change now ranks it too.`;
+    }
     case "newest-knowledge": {
       const { from, to, moved } = await moveToNewestKnowledge(db, member, c);
       return moved

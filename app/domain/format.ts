@@ -31,3 +31,9 @@ export function formatDate(value: string | Date, locale = "en-GB") {
 }
 
 export const formatPercent = (p: number, digits = 0) => `${(p * 100).toFixed(digits)}%`;
+
+/** A ranking place in words: 1 → "1st", 22 → "22nd"; null (not ranked at all) → "not ranked". */
+export const ordinal = (n: number | null) =>
+  n === null
+    ? "not ranked"
+    : `${n}${n % 10 === 1 && n % 100 !== 11 ? "st" : n % 10 === 2 && n % 100 !== 12 ? "nd" : n % 10 === 3 && n % 100 !== 13 ? "rd" : "th"}`;

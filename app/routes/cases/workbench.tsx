@@ -17,6 +17,7 @@ import { Fold } from "~/components/fold";
 import { FormMessages } from "~/components/ui/form-errors";
 import { EvidenceList } from "~/components/case/evidence-list";
 import { KnowledgeVersion } from "~/components/case/knowledge-version";
+import { KeepTestCase } from "~/components/case/keep-test-case";
 import { ProposePanel } from "~/components/case/propose-panel";
 import { LikelyCauses } from "~/components/case/likely-causes";
 import { CaseQuickFind } from "~/components/case/case-quick-find";
@@ -55,6 +56,7 @@ export async function loader({ params, context }: Route.LoaderArgs) {
       mayClose: can(member.role, "case:close"),
       mayEditComplaint: can(member.role, "case:open") && bundle.state !== "closed",
       mayPropose: canWork && can(member.role, "kb:propose"),
+      mayKeepTest: can(member.role, "kb:edit") && (bundle.state === "concluded" || bundle.state === "closed"),
     },
   };
 }
@@ -111,6 +113,7 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
   const ranking = concluded ? (
     <>
       <ConfirmedCause state={c.state} cause={c.conclusionCause!} notes={c.conclusionNotes} />
+      {me.mayKeepTest ? <KeepTestCase number={c.number} errors={actionData?.errors} /> : null}
       <section className="rounded-card border border-rule bg-card p-4">
         <Fold
           summaryClassName="min-h-tap cursor-pointer content-center font-semibold"

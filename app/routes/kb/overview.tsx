@@ -37,6 +37,12 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
           >
             Proposals
           </Link>
+          <Link
+            className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+            to={href("/kb/test-cases")}
+          >
+            Test cases
+          </Link>
           {loaderData.mayEdit ? (
             <Link
               className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
