@@ -34,7 +34,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/kb/proposals.tsx": {
     path: "/kb/proposals",
     GET: "kb:read",
-    POST: { propose: "kb:propose", accept: "kb:approve", reject: "kb:approve" },
+    POST: { propose: "kb:propose", accept: "kb:approve", reject: "kb:approve", preview: "kb:approve" },
   },
   "routes/kb/cause.tsx": {
     path: "/kb/causes/{cause}",

@@ -8,7 +8,12 @@ import { buildModel, type Knowledge } from "./model";
 
 export type KbChange =
   | { link: "symptom"; symptomId: string; causeId: string; p: number }
-  | { link: "check"; checkId: string; causeId: string; p: number };
+  | { link: "check"; checkId: string; causeId: string; p: number }
+  // A failure mode not in the base yet, shown as one symptom (a technician's proposal of a missing cause).
+  | { link: "new-cause"; parentId: string; name: string; baseRate: number; symptomId: string; p: number };
+
+/** The id the previewed new cause has inside the preview; it is never written. */
+export const PROPOSED_CAUSE = "proposed-cause";
 
 export type ImpactCase = {
   id: string;
@@ -39,6 +44,25 @@ export type Impact = {
 
 /** The base with one link set to a new strength (added when the pair was not linked). */
 export function withChange(kb: Knowledge, change: KbChange): Knowledge {
+  if (change.link === "new-cause")
+    return {
+      ...kb,
+      causes: [
+        ...kb.causes,
+        {
+          id: PROPOSED_CAUSE,
+          parentId: change.parentId,
+          level: "failure_mode",
+          name: change.name,
+          baseRate: change.baseRate,
+          applicability: {},
+        },
+      ],
+      symptomLinks: [
+        ...kb.symptomLinks,
+        { symptomId: change.symptomId, causeId: PROPOSED_CAUSE, p: change.p },
+      ],
+    };
   if (change.link === "symptom") {
     const others = kb.symptomLinks.filter(
       (l) => !(l.symptomId === change.symptomId && l.causeId === change.causeId),

@@ -12,9 +12,14 @@ import { cases, causes, kbProposals, members, symptomLinks, symptoms, users } fr
 import type { Priority } from "~/domain/knowledge";
 import type { ProposalKind } from "~/domain/proposals";
 import { refuse, requireId } from "~/http/errors.server";
+import { previewChange } from "./impact.server";
 import { nextKbVersion } from "./version.server";
 
 type Member = Pick<CurrentMember, "workshopId" | "userId" | "memberId">;
+
+// A cause accepted from a proposal starts rare (relative frequency 1, the low end of the starter
+// base's failure modes) until a senior sets its base rate on its page.
+const NEW_CAUSE_BASE_RATE = 1;
 
 export type ProposalInput = {
   caseId: string;
@@ -132,6 +137,35 @@ export async function listProposals(db: Db, workshopId: string) {
     .limit(200);
 }
 
+/**
+ * What accepting an open proposal would do to the workshop's concluded cases and test cases,
+ * before anyone accepts it: the same impact preview a senior's own link change gets. A proposed
+ * new cause is previewed at the base rate accepting would give it.
+ */
+export async function previewProposal(db: Db, workshopId: string, proposalId: string) {
+  requireId(proposalId, "No such proposal in this workshop.");
+  const [p] = await db
+    .select()
+    .from(kbProposals)
+    .where(and(eq(kbProposals.id, proposalId), eq(kbProposals.workshopId, workshopId)));
+  if (!p) refuse(404, "No such proposal in this workshop.");
+  if (p.state !== "open") refuse(409, `This proposal was ${p.state} already.`);
+  return previewChange(
+    db,
+    workshopId,
+    p.kind === "cause"
+      ? {
+          link: "new-cause",
+          parentId: p.causeId,
+          name: p.causeName!,
+          baseRate: NEW_CAUSE_BASE_RATE,
+          symptomId: p.symptomId,
+          p: p.p,
+        }
+      : { link: "symptom", symptomId: p.symptomId, causeId: p.causeId, p: p.p },
+  );
+}
+
 export type Review =
   | { decision: "accept"; comment: string; baseRate?: number; priority?: Priority }
   | { decision: "reject"; comment: string };
@@ -177,7 +211,7 @@ export async function reviewProposal(db: Db, member: Member, proposalId: string,
             name: causeName,
             system: target.system,
             description: p.note,
-            baseRate: review.baseRate ?? 1,
+            baseRate: review.baseRate ?? NEW_CAUSE_BASE_RATE,
             priority: review.priority ?? "soon",
           })
           .returning({ id: causes.id });

@@ -9,7 +9,8 @@ import { can } from "~/domain/permissions";
 import { PROPOSAL_STATE_LABEL } from "~/domain/proposals";
 import { dbContext } from "~/http/context";
 import { invalid, onForm, zodErrors } from "~/http/forms.server";
-import { listProposals, propose, reviewProposal } from "~/kb/proposals.server";
+import { listProposals, previewProposal, propose, reviewProposal } from "~/kb/proposals.server";
+import type { FormErrors } from "~/http/forms";
 import type { Route } from "./+types/proposals";
 
 export async function loader({ context }: Route.LoaderArgs) {
@@ -60,6 +61,12 @@ export async function action({ request, context }: Route.ActionArgs) {
     });
   }
   requirePermission(member, "kb:approve");
+  if (form.intent === "preview") {
+    const id = z.string().uuid().safeParse(form.id);
+    if (!id.success) return invalid({ form: ["No such proposal."] });
+    const impact = await previewProposal(db, member.workshopId, id.data);
+    return { errors: {} as FormErrors, notice: null, preview: { id: id.data, impact } };
+  }
   const parsed = ReviewForm.safeParse(form);
   if (!parsed.success) return invalid(zodErrors(parsed.error));
   const { intent, id, comment, priority } = parsed.data;
