@@ -125,6 +125,9 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
     `added ${a.level === "component" ? "the component" : "the failure mode"} “${a.name}” under “${a.under}”`,
   "kb.cause.merge": (a) =>
     `merged “${a.name}” into “${a.into}”: ${a.level === "component" ? `${a.moved} failure modes moved` : `${a.moved} links moved, ${a.kept} kept as “${a.into}” had them`}`,
+  "kb.check.add": (a) =>
+    `added the check “${a.name}”${a.resultKind === "measurement" ? ", a measurement" : ""}`,
+  "kb.symptom.add": (a) => `added the symptom “${a.name}”`,
   "kb.test_case.keep": (a) => `kept case #${a.caseNumber} as the test case “${a.name}”`,
   "kb.test_case.remove": (_a, b) => `removed the test case “${b.name}”`,
   "kb.link.add": (a) =>

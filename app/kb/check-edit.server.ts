@@ -11,6 +11,7 @@ import { CAUTION_LABEL, type Caution, type CheckAccess } from "~/domain/knowledg
 import type { Skill } from "~/domain/people";
 import { refuse, requireId } from "~/http/errors.server";
 import { compileRule } from "~/measure";
+import { keyFor } from "./keys";
 import { nextKbVersion } from "./version.server";
 
 const NOT_FOUND = "No such check in this workshop's knowledge base.";
@@ -126,5 +127,61 @@ export async function updateCheck(
         },
       });
     return { changed, kbVersion };
+  });
+}
+
+/** A new check, refused at its fields like an edit; returns its id. It finds nothing until linked. */
+export async function addCheck(
+  db: Db,
+  member: Pick<CurrentMember, "workshopId" | "userId" | "memberId">,
+  edit: CheckEdit & { resultKind: "pass_fail" | "measurement" },
+) {
+  const measurement = edit.resultKind === "measurement";
+  const problems = checkEditProblems(edit, measurement);
+  const first = Object.values(problems)[0];
+  if (first) refuse(400, first[0], { errors: problems });
+  return db.transaction(async (tx) => {
+    const [clash] = await tx
+      .select({ id: checks.id })
+      .from(checks)
+      .where(and(eq(checks.workshopId, member.workshopId), sql`lower(${checks.name}) = lower(${edit.name})`));
+    if (clash)
+      refuse(400, "Another check has that name.", { errors: { name: ["Another check has that name."] } });
+    const [made] = await tx
+      .insert(checks)
+      .values({
+        workshopId: member.workshopId,
+        key: keyFor(edit.name),
+        name: edit.name,
+        instructions: edit.instructions,
+        tools: edit.tools,
+        minutes: edit.minutes,
+        consumablesCost: edit.consumablesCost,
+        access: edit.access,
+        skill: edit.skill,
+        cautions: edit.cautions,
+        resultKind: edit.resultKind,
+        quantity: measurement ? (edit.quantity ?? null) : null,
+        unit: measurement ? edit.unit! : null,
+        rule: measurement ? edit.rule! : null,
+        failMeans: edit.failMeans,
+        falseAlarm: edit.falseAlarm,
+      })
+      .returning({ id: checks.id });
+    const kbVersion = await nextKbVersion(
+      tx,
+      member.workshopId,
+      `Check “${edit.name}” added`,
+      member.memberId,
+    );
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "kb.check.add",
+      entity: "check",
+      entityId: made.id,
+      after: { name: edit.name, resultKind: edit.resultKind, kbVersion, items: [made.id] },
+    });
+    return { id: made.id, kbVersion };
   });
 }

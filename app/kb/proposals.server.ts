@@ -2,7 +2,6 @@
 // ("the knowledge base did not have this"): a symptom should point to a cause, at a strength, or a
 // cause is missing altogether. A senior accepts (the change is made with a new knowledge-base
 // version) or rejects, with a comment; both are audited in words.
-import { randomUUID } from "node:crypto";
 import { and, desc, eq, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { audit } from "~/audit/write.server";
@@ -13,6 +12,7 @@ import type { Priority } from "~/domain/knowledge";
 import type { ProposalKind } from "~/domain/proposals";
 import { refuse, requireId } from "~/http/errors.server";
 import { previewChange } from "./impact.server";
+import { keyFor } from "./keys";
 import { nextKbVersion } from "./version.server";
 
 type Member = Pick<CurrentMember, "workshopId" | "userId" | "memberId">;
@@ -199,13 +199,7 @@ export async function reviewProposal(db: Db, member: Member, proposalId: string,
           .insert(causes)
           .values({
             workshopId: member.workshopId,
-            key: `${
-              causeName
-                .toLowerCase()
-                .replace(/[^a-z0-9]+/g, "_")
-                .replace(/^_+|_+$/g, "")
-                .slice(0, 60) || "cause"
-            }_${randomUUID().slice(0, 6)}`,
+            key: keyFor(causeName),
             parentId: p.causeId,
             level: "failure_mode",
             name: causeName,

@@ -6,9 +6,10 @@ import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
 import { causes, symptomLinks, symptoms } from "~/db/schema";
-import type { SymptomKind } from "~/domain/knowledge";
+import type { SymptomKind, System } from "~/domain/knowledge";
 import { refuse, requireId } from "~/http/errors.server";
 import { parseDtc } from "~/measure/dtc";
+import { keyFor } from "./keys";
 import { nextKbVersion } from "./version.server";
 
 const NOT_FOUND = "No such symptom in this workshop's knowledge base.";
@@ -107,5 +108,45 @@ export async function updateSymptom(
       },
     });
     return { changed, kbVersion };
+  });
+}
+
+/** A new symptom, refused at its fields like an edit; Quick find offers it from the new version on. */
+export async function addSymptom(
+  db: Db,
+  member: Pick<CurrentMember, "workshopId" | "userId" | "memberId">,
+  edit: SymptomEdit & { system: System },
+) {
+  const problems = symptomEditProblems(edit);
+  const first = Object.values(problems)[0];
+  if (first) refuse(400, first[0], { errors: problems });
+  return db.transaction(async (tx) => {
+    const [clash] = await tx
+      .select({ id: symptoms.id })
+      .from(symptoms)
+      .where(
+        and(eq(symptoms.workshopId, member.workshopId), sql`lower(${symptoms.name}) = lower(${edit.name})`),
+      );
+    if (clash)
+      refuse(400, "Another symptom has that name.", { errors: { name: ["Another symptom has that name."] } });
+    const [made] = await tx
+      .insert(symptoms)
+      .values({ workshopId: member.workshopId, key: keyFor(edit.name), ...edit })
+      .returning({ id: symptoms.id });
+    const kbVersion = await nextKbVersion(
+      tx,
+      member.workshopId,
+      `Symptom “${edit.name}” added`,
+      member.memberId,
+    );
+    await audit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "kb.symptom.add",
+      entity: "symptom",
+      entityId: made.id,
+      after: { name: edit.name, kind: edit.kind, kbVersion, items: [made.id] },
+    });
+    return { id: made.id, kbVersion };
   });
 }

@@ -1,7 +1,6 @@
 // A senior grows and prunes the cause tree: a new component under a system or a new failure mode
 // under a component, two causes of one level merged into one, and a new link from a cause to a
 // symptom or check. Each is one transaction with a new knowledge-base version and an audit line.
-import { randomUUID } from "node:crypto";
 import { and, eq, inArray, isNull, sql } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
@@ -10,6 +9,7 @@ import { causes, checkLinks, checks, symptomLinks, symptoms } from "~/db/schema"
 import type { Priority } from "~/domain/knowledge";
 import { describeStrength } from "~/domain/link-strength";
 import { refuse, requireId } from "~/http/errors.server";
+import { keyFor } from "./keys";
 import { nextKbVersion } from "./version.server";
 
 type Member = Pick<CurrentMember, "workshopId" | "userId" | "memberId">;
@@ -25,15 +25,6 @@ export type NewCause = {
   repairMinutes?: number;
   partsCost?: number;
 };
-
-/** A key of our own for an item made in the app: readable, and unique by its random tail. */
-export const keyFor = (name: string) =>
-  `${name
-    .toLowerCase()
-    .normalize("NFKD")
-    .replace(/[^a-z0-9]+/g, "_")
-    .replace(/^_|_$/g, "")
-    .slice(0, 40)}_${randomUUID().slice(0, 8)}`;
 
 async function liveCause(tx: Tx, workshopId: string, id: string) {
   requireId(id, NOT_FOUND);

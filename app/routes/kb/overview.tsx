@@ -44,6 +44,22 @@ export default function KnowledgeBase({ loaderData }: Route.ComponentProps) {
             Test cases
           </Link>
           {loaderData.mayEdit ? (
+            <>
+              <Link
+                className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+                to={href("/kb/symptoms/new")}
+              >
+                New symptom
+              </Link>
+              <Link
+                className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+                to={href("/kb/checks/new")}
+              >
+                New check
+              </Link>
+            </>
+          ) : null}
+          {loaderData.mayEdit ? (
             <Link
               className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
               to={href("/kb/transfer")}
