@@ -29,7 +29,12 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/cases/list.tsx": { path: "/cases", GET: "case:read" },
   "routes/kb/overview.tsx": { path: "/kb", GET: "kb:read" },
   "routes/kb/export.ts": { path: "/kb/export", GET: "kb:read" },
-  "routes/kb/symptom.tsx": { path: "/kb/symptoms/{symptom}", record: true, GET: "kb:read", POST: "kb:edit" },
+  "routes/kb/symptom.tsx": {
+    path: "/kb/symptoms/{symptom}",
+    record: true,
+    GET: "kb:read",
+    POST: { edit: "kb:edit", strength: "kb:edit", preview: "kb:edit" },
+  },
   "routes/kb/check.tsx": { path: "/kb/checks/{check}", record: true, GET: "kb:read", POST: "kb:edit" },
   "routes/kb/proposals.tsx": {
     path: "/kb/proposals",

@@ -1,14 +1,18 @@
-import { Form, href, Link, useNavigation } from "react-router";
+import { useMemo } from "react";
+import { Form, href, useNavigation } from "react-router";
 import { z } from "zod";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { BackToKb, EditorFold, TextField } from "~/components/kb/editor";
+import { LinkTable } from "~/components/kb/link-table";
+import { StrengthWords } from "~/components/kb/strength-words";
 import { FormMessages } from "~/components/ui/form-errors";
 import { SYMPTOM_KIND_LABEL, SYMPTOM_KINDS } from "~/domain/knowledge";
-import { describeStrength } from "~/domain/link-strength";
 import { can } from "~/domain/permissions";
 import type { FormErrors } from "~/http/forms";
 import { dbContext } from "~/http/context";
 import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
+import { type LinkRow, previewIn } from "~/kb/link-rows";
+import { answerStrengthForm, isStrengthIntent } from "~/kb/link-strength-form.server";
 import { symptomEditProblems, symptomWithLinks, updateSymptom } from "~/kb/symptom-edit.server";
 import { itemHistory } from "~/audit/item-history.server";
 import { ItemHistory } from "~/components/kb/item-history";
@@ -43,6 +47,7 @@ const list = (max: number) =>
         .max(max, `At most ${max} entries.`),
     );
 const EditForm = z.object({
+  intent: z.literal("edit"),
   name: z.string().trim().min(3, "Name it in at least 3 characters.").max(200),
   synonyms: list(80),
   kind: z.enum(SYMPTOM_KINDS, { message: "Choose the kind of symptom." }),
@@ -54,11 +59,18 @@ const EditForm = z.object({
 export async function action({ request, params, context }: Route.ActionArgs) {
   const db = context.get(dbContext);
   // Another workshop's symptom does not exist for this member, whatever their role.
-  await symptomWithLinks(db, context.get(memberContext).workshopId, params.symptomId);
+  const { pointsTo } = await symptomWithLinks(db, context.get(memberContext).workshopId, params.symptomId);
   const member = requirePermission(context.get(memberContext), "kb:edit");
-  const parsed = EditForm.safeParse(Object.fromEntries(await request.formData()));
+  const form = Object.fromEntries(await request.formData());
+  // A cause's strength from the table: the same reading and the same change as on the cause's page.
+  if (isStrengthIntent(form.intent))
+    return answerStrengthForm(db, member, form, {
+      symptomId: params.symptomId,
+      causeIds: pointsTo.map((c) => c.id),
+    });
+  const parsed = EditForm.safeParse(form);
   if (!parsed.success) return invalid(zodErrors(parsed.error));
-  const { leakPercent, code, ...rest } = parsed.data;
+  const { leakPercent, code, intent: _i, ...rest } = parsed.data;
   const edit = { ...rest, code: code ? code.toUpperCase() : null, leak: Math.round(leakPercent * 10) / 1000 };
   const problems = symptomEditProblems(edit);
   if (Object.keys(problems).length) return invalid(problems);
@@ -83,6 +95,17 @@ export function meta({ loaderData }: Route.MetaArgs) {
 export default function SymptomPage({ loaderData, actionData }: Route.ComponentProps) {
   const { symptom, pointsTo, mayEdit } = loaderData;
   const errors = actionData?.errors;
+  const rows = useMemo<LinkRow[]>(
+    () =>
+      pointsTo.map((c) => ({
+        link: "symptom",
+        id: c.id,
+        name: c.name,
+        p: c.p,
+        to: href("/kb/causes/:causeId", { causeId: c.id }),
+      })),
+    [pointsTo],
+  );
   return (
     <div className="grid max-w-3xl gap-5">
       <BackToKb />
@@ -98,20 +121,21 @@ export default function SymptomPage({ loaderData, actionData }: Route.ComponentP
           Causes that show it
         </h2>
         <p className="meta">How often each cause shows this symptom, when it is the cause.</p>
-        <ul className="mt-2 grid gap-1">
-          {pointsTo.map((c) => (
-            <li key={c.id} className="flex flex-wrap justify-between gap-2">
-              <Link className="underline" to={href("/kb/causes/:causeId", { causeId: c.id })}>
-                {c.name}
-              </Link>
-              <span className="tabular">{describeStrength(c.p)}</span>
-            </li>
-          ))}
-        </ul>
+        <LinkTable
+          rows={rows}
+          labelledBy="points"
+          nameHeader="Cause"
+          showKind={false}
+          mayEdit={mayEdit}
+          errors={errors}
+          preview={previewIn(actionData)}
+          empty="No cause is linked to it."
+        />
       </section>
       <FormMessages errors={errors} notice={actionData?.notice} />
       {mayEdit ? <SymptomEditor symptom={symptom} errors={errors} /> : null}
       <ItemHistory lines={loaderData.history} />
+      <StrengthWords />
     </div>
   );
 }
@@ -126,6 +150,7 @@ function SymptomEditor({ symptom, errors }: { symptom: SymptomRow; errors: FormE
   return (
     <EditorFold id="edit-symptom" title="Edit this symptom" errors={errors}>
       <Form method="post" className="mt-2 grid gap-3">
+        <input type="hidden" name="intent" value="edit" />
         {field("name", "Name, as a technician says it", symptom.name)}
         {field("synonyms", "Other words people use, separated by commas", symptom.synonyms.join(", "), 3)}
         <label className="grid gap-1 text-sm font-medium" htmlFor="symptom-kind">
