@@ -30,7 +30,12 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/kb/overview.tsx": { path: "/kb", GET: "kb:read" },
   "routes/kb/export.ts": { path: "/kb/export", GET: "kb:read" },
   "routes/kb/symptom-new.tsx": { path: "/kb/symptoms/new", GET: "kb:edit", POST: "kb:edit" },
-  "routes/kb/symptom.tsx": { path: "/kb/symptoms/{symptom}", record: true, GET: "kb:read", POST: "kb:edit" },
+  "routes/kb/symptom.tsx": {
+    path: "/kb/symptoms/{symptom}",
+    record: true,
+    GET: "kb:read",
+    POST: { edit: "kb:edit", strength: "kb:edit", preview: "kb:edit" },
+  },
   "routes/kb/check-new.tsx": { path: "/kb/checks/new", GET: "kb:edit", POST: "kb:edit" },
   "routes/kb/check.tsx": { path: "/kb/checks/{check}", record: true, GET: "kb:read", POST: "kb:edit" },
   "routes/kb/proposals.tsx": {

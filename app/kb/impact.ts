@@ -42,6 +42,9 @@ export type Impact = {
   moved: Moved[];
 };
 
+/** A preview of the workshop's concluded cases, with its kept test cases beside them. */
+export type ImpactWithTests = Impact & { tests?: Impact };
+
 /** The base with one link set to a new strength (added when the pair was not linked). */
 export function withChange(kb: Knowledge, change: KbChange): Knowledge {
   if (change.link === "new-cause")

@@ -8,6 +8,7 @@ import { baseUrl, signInAs, useBrowser } from "./browser";
 
 const CASE = (key: string) => `/cases/${seedId(`case:${key}`)}`;
 const CAUSE = (key: string) => `/kb/causes/${kbId("bramblegate", "cause", key)}`;
+const SYMPTOM = (key: string) => `/kb/symptoms/${kbId("bramblegate", "symptom", key)}`;
 
 // Who sees which pages: every route with a screen appears at least once.
 const VISITS: { login: string | null; paths: string[] }[] = [
@@ -23,6 +24,7 @@ const VISITS: { login: string | null; paths: string[] }[] = [
       CASE("b1"),
       "/kb",
       CAUSE("brake_pad_noise"),
+      SYMPTOM("squeal_braking"),
       "/settings",
     ],
   },
@@ -35,6 +37,7 @@ const VISITS: { login: string | null; paths: string[] }[] = [
       "/kb/transfer",
       "/kb/proposals",
       CAUSE("brake_disc_runout_dtv"),
+      SYMPTOM("squeal_braking"),
       `/kb/checks/${kbId("bramblegate", "check", "disc_runout_dial_gauge")}`,
     ],
   },

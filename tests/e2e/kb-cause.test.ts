@@ -1,6 +1,7 @@
-// A senior finds a failure mode in the cause tree, reads its links in words and figures, and
-// changes how often it shows a symptom by a word; a wrong word gets its message at that link's
-// field and changes nothing. A technician reads the same page without the forms.
+// A senior finds a failure mode in the cause tree, reads its links in words and figures in one
+// table, and changes how often it shows a symptom by a word; a wrong word gets its message at that
+// link's field and changes nothing; the keys walk the rows' fields. A technician reads the same
+// table, sorts and filters it, without the forms.
 import { afterAll, describe, expect, inject, it } from "vitest";
 import { loadAccount } from "~/auth/accounts.server";
 import { asMember } from "~/auth/guards.server";
@@ -55,8 +56,12 @@ describe("a cause's links in words", () => {
 
     // The impact preview: weakening the squeal link moves the case confirmed as this cause.
     const number = await concludedSquealCase();
-    const shows = page.getByRole("list", { name: "Symptoms it shows" });
-    const link = shows.getByRole("listitem", { name: /squeal/i }).first();
+    const links = page.getByRole("table", { name: "Its links" });
+    const rowNamed = (name: string | RegExp) =>
+      links
+        .getByRole("row")
+        .filter({ has: page.getByRole("rowheader").getByRole("link", { name, exact: true }) });
+    const link = rowNamed(/squeal/i).first();
     await link.getByLabel(/^New strength for/).fill("rarely");
     await link.getByRole("button", { name: "Preview the effect" }).click();
     const effect = page.getByRole("status", { name: "Effect on cases with a confirmed cause" });
@@ -64,8 +69,10 @@ describe("a cause's links in words", () => {
     await effect.getByRole("list", { name: "Cases that moved" }).getByText(`case #${number}`).waitFor();
     await effect.getByText(/confirmed cause ranked first: \d+ → \d+/).waitFor();
 
-    const squeal = shows.getByRole("listitem").first();
-    const name = (await squeal.getAttribute("aria-label"))!;
+    // The first row below the headers: the strongest symptom link, as the page lists them.
+    const first = links.getByRole("row").nth(1);
+    const name = (await first.getByRole("rowheader").getByRole("link").textContent())!;
+    const squeal = rowNamed(name);
     const field = squeal.getByLabel(`New strength for ${name}`);
 
     await field.fill("very much");
@@ -73,20 +80,25 @@ describe("a cause's links in words", () => {
     await squeal.getByText(/Say how strongly in one of the words/).waitFor();
     await expect(field.getAttribute("aria-invalid")).resolves.toBe("true");
 
-    const again = page
-      .getByRole("list", { name: "Symptoms it shows" })
-      .getByRole("listitem", { name, exact: true });
-    await again.getByLabel(`New strength for ${name}`).fill("often");
-    await again.getByRole("button", { name: "Save strength" }).click();
+    // Down goes to the next row's field; Up comes back; Escape puts back what was typed over;
+    // Enter saves.
+    await hydrated(page);
+    const again = rowNamed(name).getByLabel(`New strength for ${name}`);
+    await again.focus();
+    await page.keyboard.press("ArrowDown");
+    const next = links.getByRole("row").nth(2).locator("input[data-strength-field]");
+    await expect(next.evaluate((el) => el === document.activeElement)).resolves.toBe(true);
+    await page.keyboard.press("ArrowUp");
+    await expect(again.evaluate((el) => el === document.activeElement)).resolves.toBe(true);
+    await again.fill("often");
+    await again.press("Enter");
     await page
       .getByRole("status")
       .filter({ hasText: `“${name}”:` })
       .filter({ hasText: "→ often (60%)" })
       .waitFor();
     // The page's data is read again after the save; the row shows the new strength once it lands.
-    await page
-      .getByRole("list", { name: "Symptoms it shows" })
-      .getByRole("listitem", { name, exact: true })
+    await rowNamed(name)
       .locator("[data-strength]", { hasText: /^often \(60%\)$/ })
       .waitFor();
 
@@ -139,9 +151,17 @@ describe("a cause's links in words", () => {
     await page
       .getByRole("link", { name: "Pad vibration from missing shims, dry slides or glazed pads" })
       .click();
-    await page.getByRole("heading", { name: "Checks that find it" }).waitFor();
-    expect(await page.locator("[data-strength]").count()).toBeGreaterThan(1);
+    const links = page.getByRole("table", { name: "Its links" });
+    await links.waitFor();
+    expect(await links.locator("[data-strength]").count()).toBeGreaterThan(1);
+    expect(await links.getByRole("cell", { name: "Check", exact: true }).count()).toBeGreaterThan(0);
+    expect(await page.locator("input[data-strength-field]").count()).toBe(0);
     expect(await page.getByRole("button", { name: "Save strength" }).count()).toBe(0);
+    // Sorting and the filter are there for readers too.
+    await hydrated(page);
+    await page.getByLabel("Filter links").fill("check");
+    await page.getByText(/^\d+ of \d+ links shown$/).waitFor();
+    expect(await links.getByRole("cell", { name: "Symptom", exact: true }).count()).toBe(0);
     expect(await page.getByText("Edit this cause").count()).toBe(0);
     await page.close();
   });

@@ -85,7 +85,7 @@ describe("proposals from a case", () => {
     for (const fold of await page.locator("main details summary").all()) await fold.click();
     await page.getByRole("link", { name: "Hub face scaled with rust under the disc" }).click();
     await page.getByRole("heading", { level: 1, name: /Hub face scaled with rust/ }).waitFor();
-    await page.getByRole("list", { name: "Symptoms it shows" }).getByText("often (60%)").waitFor();
+    await page.getByRole("table", { name: "Its links" }).getByText("often (60%)").waitFor();
     expect(errors.filter((e) => !/status of 400/.test(e))).toEqual([]);
     await page.close();
   });

@@ -1,20 +1,21 @@
+import { useMemo } from "react";
 import { href, Link } from "react-router";
 import { CauseEditor } from "~/components/kb/cause-editor";
-import { LinkList, strengthField } from "~/components/kb/link-list";
+import { LinkTable } from "~/components/kb/link-table";
+import { StrengthWords } from "~/components/kb/strength-words";
 import { z } from "zod";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { PriorityMark } from "~/components/priority";
 import { FormMessages } from "~/components/ui/form-errors";
 import { formatMoney } from "~/domain/format";
 import { CAUSE_LEVEL_LABEL, PRIORITIES } from "~/domain/knowledge";
-import { describeStrength, readStrength, STRENGTHS } from "~/domain/link-strength";
 import { can } from "~/domain/permissions";
-import type { FormErrors } from "~/http/forms";
 import { dbContext } from "~/http/context";
 import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
-import { causeWithLinks, findCause, setLinkStrength } from "~/kb/cause-links.server";
+import { causeWithLinks, findCause } from "~/kb/cause-links.server";
 import { possibleParents, retireCause, updateCause } from "~/kb/cause-edit.server";
-import { previewChange } from "~/kb/impact.server";
+import { type LinkRow, previewIn } from "~/kb/link-rows";
+import { answerStrengthForm } from "~/kb/link-strength-form.server";
 import { getWorkshop } from "~/workshop/settings.server";
 import { itemHistory } from "~/audit/item-history.server";
 import { ItemHistory } from "~/components/kb/item-history";
@@ -42,16 +43,6 @@ export async function loader({ params, context }: Route.LoaderArgs) {
     : null;
   return { ...found, currency: workshop.currency, mayEdit, history, parents, choices, mergedInto };
 }
-
-// The field of one link's strength: its own name, so the message lands beside that link.
-const fieldOf = strengthField;
-
-const StrengthForm = z.object({
-  intent: z.enum(["strength", "preview"]),
-  link: z.enum(["symptom", "check"], { message: "Say which kind of link this is." }),
-  otherId: z.string().uuid("That link is not in this knowledge base."),
-  strength: z.string().max(40, "Say it in a word or a figure."),
-});
 
 const number = figureBetween;
 const EditForm = z.object({
@@ -99,28 +90,8 @@ export async function action({ request, params, context }: Route.ActionArgs) {
         : "Nothing had changed.";
     });
   }
-  const parsed = StrengthForm.safeParse(form);
-  if (!parsed.success) return invalid(zodErrors(parsed.error));
-  const { intent, link, otherId, strength } = parsed.data;
-  const read = readStrength(strength);
-  if ("error" in read) return invalid({ [fieldOf(link, otherId)]: [read.error] });
-  if (intent === "preview") {
-    const change =
-      link === "symptom"
-        ? { link, symptomId: otherId, causeId: params.causeId, p: read.p }
-        : { link, checkId: otherId, causeId: params.causeId, p: read.p };
-    const impact = await previewChange(db, member.workshopId, change);
-    return { errors: {} as FormErrors, notice: null, preview: { link, otherId, p: read.p, impact } };
-  }
-  return onForm(async () => {
-    const done = await setLinkStrength(db, member, {
-      link,
-      causeId: params.causeId,
-      otherId,
-      p: read.p,
-    });
-    return `“${done.otherName}”: ${describeStrength(done.before)} → ${describeStrength(done.after)}. Knowledge base now at version ${done.kbVersion}.`;
-  });
+  // Anything else is a link's strength (intents strength and preview), read as on a symptom's page.
+  return answerStrengthForm(db, member, form, { causeId: params.causeId });
 }
 
 export function meta({ loaderData }: Route.MetaArgs) {
@@ -137,6 +108,27 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
   const { cause, parent, symptoms, checks, currency, mayEdit, parents } = loaderData;
   const errors = actionData?.errors;
   const leaf = cause.level === "failure_mode";
+  const rows = useMemo<LinkRow[]>(
+    () => [
+      ...symptoms.map((s) => ({
+        link: "symptom" as const,
+        id: s.id,
+        name: s.name,
+        p: s.p,
+        note: s.when.length ? `only ${s.when.join(", ")}` : undefined,
+        to: href("/kb/symptoms/:symptomId", { symptomId: s.id }),
+      })),
+      ...checks.map((k) => ({
+        link: "check" as const,
+        id: k.id,
+        name: k.name,
+        p: k.pFail,
+        note: `${k.minutes} min${k.graded ? " · a measurement graded in four bands, kept in proportion when the strength changes" : ""}`,
+        to: href("/kb/checks/:checkId", { checkId: k.id }),
+      })),
+    ],
+    [symptoms, checks],
+  );
   const facts: [string, string][] = [
     ["For the technician", cause.description],
     ["For the owner", cause.ownerDescription],
@@ -220,62 +212,26 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
           <MergeForm level={cause.level} into={loaderData.choices.mergeInto} errors={errors} />
         </>
       ) : null}
-      <section aria-labelledby="shows" className="card">
-        <h2 id="shows" className="text-xl font-semibold">
-          Symptoms it shows
+      <section aria-labelledby="links" className="card">
+        <h2 id="links" className="text-xl font-semibold">
+          Its links
         </h2>
-        <p className="meta">How often this cause shows each symptom, when it is the cause.</p>
-        <LinkList
-          label="Symptoms it shows"
-          link="symptom"
-          rows={symptoms.map((s) => ({
-            ...s,
-            note: s.when.length ? `only ${s.when.join(", ")}` : undefined,
-          }))}
+        <p className="meta">
+          A symptom link says how often this cause shows the symptom; a check link, how often the check fails,
+          when this is the cause.
+        </p>
+        <LinkTable
+          rows={rows}
+          labelledBy="links"
+          showKind
           mayEdit={mayEdit}
           errors={errors}
-          preview={actionData && "preview" in actionData ? actionData.preview : null}
-          empty="No symptom is linked to it."
-        />
-      </section>
-      <section aria-labelledby="found-by" className="card">
-        <h2 id="found-by" className="text-xl font-semibold">
-          Checks that find it
-        </h2>
-        <p className="meta">How often each check fails when this is the cause.</p>
-        <LinkList
-          label="Checks that find it"
-          link="check"
-          rows={checks.map((k) => ({
-            id: k.id,
-            name: k.name,
-            p: k.pFail,
-            note: `${k.minutes} min${k.graded ? " · a measurement graded in four bands, kept in proportion when the strength changes" : ""}`,
-          }))}
-          mayEdit={mayEdit}
-          errors={errors}
-          preview={actionData && "preview" in actionData ? actionData.preview : null}
-          empty="No check is linked to it."
+          preview={previewIn(actionData)}
+          empty="Nothing is linked to it."
         />
       </section>
       <ItemHistory lines={loaderData.history} />
-      <section aria-labelledby="words" className="card">
-        <h2 id="words" className="text-lg font-semibold">
-          The words for strength
-        </h2>
-        <ul className="tabular mt-1 grid grid-cols-2 gap-1 text-sm sm:grid-cols-3">
-          {STRENGTHS.map((s) => (
-            <li key={s.word}>
-              {s.word}: {Math.round(s.p * 100)}%
-            </li>
-          ))}
-        </ul>
-        <datalist id="strength-words">
-          {STRENGTHS.map((s) => (
-            <option key={s.word} value={s.word} />
-          ))}
-        </datalist>
-      </section>
+      <StrengthWords />
     </div>
   );
 }

@@ -2,6 +2,7 @@ import { Form, href, Link, useNavigation } from "react-router";
 import { z } from "zod";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";
+import { ImpactPreview } from "~/components/kb/impact-preview";
 import { formatDate } from "~/domain/format";
 import { PRIORITIES, PRIORITY_COPY } from "~/domain/knowledge";
 import { describeStrength, readStrength } from "~/domain/link-strength";
@@ -87,6 +88,7 @@ export function meta() {
 export default function Proposals({ loaderData, actionData }: Route.ComponentProps) {
   const { proposals, mayReview } = loaderData;
   const errors = actionData?.errors;
+  const preview = actionData && "preview" in actionData ? actionData.preview : null;
   const busy = useNavigation().state === "submitting";
   return (
     <div className="grid max-w-3xl gap-4">
@@ -179,7 +181,13 @@ export default function Proposals({ loaderData, actionData }: Route.ComponentPro
                     <button type="submit" name="intent" value="reject" className="btn" disabled={busy}>
                       Reject
                     </button>
+                    <button type="submit" name="intent" value="preview" className="btn" disabled={busy}>
+                      Preview the effect
+                    </button>
                   </div>
+                  {preview?.id === p.id ? (
+                    <ImpactPreview impact={preview.impact} p={p.p} saveWord="Accept" />
+                  ) : null}
                 </Form>
               ) : null}
             </li>

@@ -1,15 +1,20 @@
-import { Form, href, Link, useNavigation } from "react-router";
-import { z } from "zod";
+import { useMemo } from "react";
+import { Form, href, useNavigation } from "react-router";
 import { memberContext, requirePermission } from "~/auth/guards.server";
-import { BackToKb, EditorFold, TextField } from "~/components/kb/editor";
+import { BackToKb, EditorFold } from "~/components/kb/editor";
+import { LinkTable } from "~/components/kb/link-table";
+import { StrengthWords } from "~/components/kb/strength-words";
 import { FormMessages } from "~/components/ui/form-errors";
-import { SYMPTOM_KIND_LABEL, SYMPTOM_KINDS } from "~/domain/knowledge";
-import { describeStrength } from "~/domain/link-strength";
+import { SYMPTOM_KIND_LABEL } from "~/domain/knowledge";
 import { can } from "~/domain/permissions";
 import type { FormErrors } from "~/http/forms";
 import { dbContext } from "~/http/context";
-import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
-import { symptomEditProblems, symptomWithLinks, updateSymptom } from "~/kb/symptom-edit.server";
+import { invalid, onForm } from "~/http/forms.server";
+import { type LinkRow, previewIn } from "~/kb/link-rows";
+import { answerStrengthForm, isStrengthIntent } from "~/kb/link-strength-form.server";
+import { symptomWithLinks, updateSymptom } from "~/kb/symptom-edit.server";
+import { readSymptomForm } from "~/kb/symptom-form.server";
+import { SymptomFields } from "~/components/kb/symptom-fields";
 import { itemHistory } from "~/audit/item-history.server";
 import { ItemHistory } from "~/components/kb/item-history";
 import type { Route } from "./+types/symptom";
@@ -25,43 +30,22 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   };
 }
 
-const list = (max: number) =>
-  z
-    .string()
-    .max(10_000)
-    .transform((v) => [
-      ...new Set(
-        v
-          .split(/[,\n]/)
-          .map((t) => t.trim())
-          .filter(Boolean),
-      ),
-    ])
-    .pipe(
-      z
-        .array(z.string().max(120, "Each entry is at most 120 characters."))
-        .max(max, `At most ${max} entries.`),
-    );
-const EditForm = z.object({
-  name: z.string().trim().min(3, "Name it in at least 3 characters.").max(200),
-  synonyms: list(80),
-  kind: z.enum(SYMPTOM_KINDS, { message: "Choose the kind of symptom." }),
-  code: z.string().trim().max(10).optional(),
-  conditions: list(20),
-  leakPercent: figureBetween("The leak is a percentage from 0 to 100.", 0, 100),
-});
-
 export async function action({ request, params, context }: Route.ActionArgs) {
   const db = context.get(dbContext);
   // Another workshop's symptom does not exist for this member, whatever their role.
-  await symptomWithLinks(db, context.get(memberContext).workshopId, params.symptomId);
+  const { pointsTo } = await symptomWithLinks(db, context.get(memberContext).workshopId, params.symptomId);
   const member = requirePermission(context.get(memberContext), "kb:edit");
-  const parsed = EditForm.safeParse(Object.fromEntries(await request.formData()));
-  if (!parsed.success) return invalid(zodErrors(parsed.error));
-  const { leakPercent, code, ...rest } = parsed.data;
-  const edit = { ...rest, code: code ? code.toUpperCase() : null, leak: Math.round(leakPercent * 10) / 1000 };
-  const problems = symptomEditProblems(edit);
-  if (Object.keys(problems).length) return invalid(problems);
+  const form = Object.fromEntries(await request.formData());
+  // A cause's strength from the table: the same reading and the same change as on the cause's page.
+  if (isStrengthIntent(form.intent))
+    return answerStrengthForm(db, member, form, {
+      symptomId: params.symptomId,
+      causeIds: pointsTo.map((c) => c.id),
+    });
+  if (form.intent !== "edit") return invalid({ form: ["Say what to change."] });
+  const read = readSymptomForm(form);
+  if (!read.ok) return read.answer;
+  const edit = read.edit;
   return onForm(async () => {
     const done = await updateSymptom(db, member, params.symptomId, edit);
     return done.changed.length
@@ -83,6 +67,17 @@ export function meta({ loaderData }: Route.MetaArgs) {
 export default function SymptomPage({ loaderData, actionData }: Route.ComponentProps) {
   const { symptom, pointsTo, mayEdit } = loaderData;
   const errors = actionData?.errors;
+  const rows = useMemo<LinkRow[]>(
+    () =>
+      pointsTo.map((c) => ({
+        link: "symptom",
+        id: c.id,
+        name: c.name,
+        p: c.p,
+        to: href("/kb/causes/:causeId", { causeId: c.id }),
+      })),
+    [pointsTo],
+  );
   return (
     <div className="grid max-w-3xl gap-5">
       <BackToKb />
@@ -98,20 +93,21 @@ export default function SymptomPage({ loaderData, actionData }: Route.ComponentP
           Causes that show it
         </h2>
         <p className="meta">How often each cause shows this symptom, when it is the cause.</p>
-        <ul className="mt-2 grid gap-1">
-          {pointsTo.map((c) => (
-            <li key={c.id} className="flex flex-wrap justify-between gap-2">
-              <Link className="underline" to={href("/kb/causes/:causeId", { causeId: c.id })}>
-                {c.name}
-              </Link>
-              <span className="tabular">{describeStrength(c.p)}</span>
-            </li>
-          ))}
-        </ul>
+        <LinkTable
+          rows={rows}
+          labelledBy="points"
+          nameHeader="Cause"
+          showKind={false}
+          mayEdit={mayEdit}
+          errors={errors}
+          preview={previewIn(actionData)}
+          empty="No cause is linked to it."
+        />
       </section>
       <FormMessages errors={errors} notice={actionData?.notice} />
       {mayEdit ? <SymptomEditor symptom={symptom} errors={errors} /> : null}
       <ItemHistory lines={loaderData.history} />
+      <StrengthWords />
     </div>
   );
 }
@@ -120,31 +116,11 @@ type SymptomRow = Route.ComponentProps["loaderData"]["symptom"];
 
 function SymptomEditor({ symptom, errors }: { symptom: SymptomRow; errors: FormErrors | undefined }) {
   const busy = useNavigation().state === "submitting";
-  const field = (name: string, label: string, value: string, rows = 0) => (
-    <TextField prefix="symptom" name={name} label={label} value={value} errors={errors} rows={rows} />
-  );
   return (
     <EditorFold id="edit-symptom" title="Edit this symptom" errors={errors}>
       <Form method="post" className="mt-2 grid gap-3">
-        {field("name", "Name, as a technician says it", symptom.name)}
-        {field("synonyms", "Other words people use, separated by commas", symptom.synonyms.join(", "), 3)}
-        <label className="grid gap-1 text-sm font-medium" htmlFor="symptom-kind">
-          Kind
-          <select id="symptom-kind" name="kind" defaultValue={symptom.kind} className="field">
-            {SYMPTOM_KINDS.map((k) => (
-              <option key={k} value={k}>
-                {SYMPTOM_KIND_LABEL[k]}
-              </option>
-            ))}
-          </select>
-        </label>
-        {field("code", "Trouble code (trouble-code symptoms only), such as P0420", symptom.code ?? "")}
-        {field("conditions", "When it shows, separated by commas", symptom.conditions.join(", "))}
-        {field(
-          "leakPercent",
-          "Shows without any listed cause, %",
-          String(Math.round(symptom.leak * 1000) / 10),
-        )}
+        <input type="hidden" name="intent" value="edit" />
+        <SymptomFields symptom={symptom} errors={errors} />
         <div>
           <button type="submit" className="btn-primary" disabled={busy}>
             Save the symptom
