@@ -5,6 +5,7 @@ import { PRIORITIES, PRIORITY_COPY, SYSTEM_LABEL } from "~/domain/knowledge";
 import type { FormErrors } from "~/http/forms";
 import { describedBy, FieldError } from "../ui/form-errors";
 import { EditorFold, TextField } from "./editor";
+import { STRENGTH_WORDS_LIST } from "./strength-editor";
 
 type Level = "system" | "component" | "failure_mode";
 type Choice = { id: string; name: string; system?: string };
@@ -113,7 +114,7 @@ function LinkForm({
         <input
           id={`link-${strength}`}
           name="strength"
-          list="strength-words"
+          list={STRENGTH_WORDS_LIST}
           className="field"
           autoComplete="off"
           {...describedBy(errors, strength)}
