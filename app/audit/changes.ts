@@ -1,6 +1,8 @@
 // The before and after of a knowledge-base change, field by field and in words, for an item's
 // history. Browser-safe and pure: it reads the audit entry's before/after as they were written.
+import type { Applicability } from "~/domain/knowledge";
 import { describeStrength } from "~/domain/link-strength";
+import { describeApplicability } from "~/kb/applicability";
 import type { AuditLine } from "./describe";
 import { CAUSE_FIELD_WORDS, CHECK_FIELD_WORDS, SYMPTOM_FIELD_WORDS } from "./field-words";
 
@@ -18,6 +20,9 @@ function shown(field: string, v: unknown): string {
   if (Array.isArray(v)) return v.length ? v.map((x) => String(x)).join("; ") : "none";
   if (typeof v === "number") return PROBABILITIES.has(field) ? `${Math.round(v * 1000) / 10}%` : String(v);
   if (typeof v === "boolean") return v ? "yes" : "no";
+  // History is read in any workshop; mileages in it are given in km, as they are stored.
+  if (field === "applicability" && typeof v === "object")
+    return describeApplicability(v as Applicability, "metric");
   if (typeof v === "string") return `“${v.length > LONGEST ? `${v.slice(0, LONGEST - 1)}…` : v}”`;
   return "changed";
 }

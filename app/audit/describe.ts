@@ -65,7 +65,7 @@ function causeEditSentence(a: Fields, b: Fields): string {
   if (changed.includes("name")) parts.push(`renamed it from “${b.name}”`);
   for (const f of changed.filter((x) => x in CAUSE_FIELD_WORDS))
     parts.push(
-      ["description", "ownerDescription", "ifLeft"].includes(f)
+      ["description", "ownerDescription", "ifLeft", "applicability"].includes(f)
         ? `changed ${CAUSE_FIELD_WORDS[f]}`
         : `changed ${CAUSE_FIELD_WORDS[f]} from ${b[f] ?? "none"}${f in a ? ` to ${a[f] ?? "none"}` : ""}`,
     );

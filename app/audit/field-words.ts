@@ -33,4 +33,5 @@ export const CAUSE_FIELD_WORDS: Record<string, string> = {
   repairMinutes: "the repair minutes",
   partsCost: "the parts cost",
   priority: "the priority",
+  applicability: "which vehicles it applies to",
 };

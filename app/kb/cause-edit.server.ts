@@ -1,12 +1,13 @@
 // A senior's edits of one cause of the tree: its words and figures, its place (a failure mode
 // under another component, a component under another system) and its retirement. Each edit is one
 // transaction with a new knowledge-base version and an audit row that names what changed.
+import { isDeepStrictEqual } from "node:util";
 import { and, eq, isNull, sql } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
 import { causes } from "~/db/schema";
-import type { Priority } from "~/domain/knowledge";
+import type { Applicability, Priority } from "~/domain/knowledge";
 import { refuse, requireId } from "~/http/errors.server";
 import { nextKbVersion } from "./version.server";
 
@@ -24,6 +25,7 @@ export type CauseEdit = {
   repairMinutes?: number;
   partsCost?: number;
   priority?: Priority;
+  applicability?: Applicability;
 };
 
 /** Where a cause may move to: the nodes one level up, with their system, by name. */
@@ -97,20 +99,11 @@ export async function updateCause(db: Db, member: Member, causeId: string, edit:
             repairMinutes: edit.repairMinutes,
             partsCost: edit.partsCost,
             priority: edit.priority,
+            ...(edit.applicability ? { applicability: edit.applicability } : {}),
           }
         : {}),
       updatedAt: new Date(),
     };
-    await tx.update(causes).set(set).where(eq(causes.id, causeId));
-    // A component that moves to another system takes its failure modes along.
-    if (was.level === "component" && system !== was.system)
-      await tx.update(causes).set({ system }).where(eq(causes.parentId, causeId));
-    const kbVersion = await nextKbVersion(
-      tx,
-      member.workshopId,
-      `Cause “${edit.name}” edited`,
-      member.memberId,
-    );
     const fields = [
       "name",
       "parentId",
@@ -121,9 +114,23 @@ export async function updateCause(db: Db, member: Member, causeId: string, edit:
       "repairMinutes",
       "partsCost",
       "priority",
+      "applicability",
     ] as const;
-    const changed = fields.filter(
-      (f) => f in set && String(was[f] ?? "") !== String((set as Record<string, unknown>)[f] ?? ""),
+    // Applicability is an object (jsonb keeps its keys in its own order): compared as a value.
+    const same = (a: unknown, b: unknown) =>
+      typeof a === "object" && a !== null ? isDeepStrictEqual(a, b) : String(a ?? "") === String(b ?? "");
+    const changed = fields.filter((f) => f in set && !same(was[f], (set as Record<string, unknown>)[f]));
+    // Saved as it was: no new version, no history line.
+    if (changed.length === 0) return { changed, kbVersion: null, movedUnder: null };
+    await tx.update(causes).set(set).where(eq(causes.id, causeId));
+    // A component that moves to another system takes its failure modes along.
+    if (was.level === "component" && system !== was.system)
+      await tx.update(causes).set({ system }).where(eq(causes.parentId, causeId));
+    const kbVersion = await nextKbVersion(
+      tx,
+      member.workshopId,
+      `Cause “${edit.name}” edited`,
+      member.memberId,
     );
     await audit(tx, {
       workshopId: member.workshopId,

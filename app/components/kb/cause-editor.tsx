@@ -8,7 +8,10 @@ import {
   type Priority,
   SYSTEM_LABEL,
 } from "~/domain/knowledge";
+import type { Applicability } from "~/domain/knowledge";
+import { DRIVETRAIN_LABEL, DRIVETRAINS, FUEL_LABEL, FUEL_TYPES, type UnitSystem } from "~/domain/vehicles";
 import type { FormErrors } from "~/http/forms";
+import { KM_PER_MILE, mileageUnit } from "~/measure/mileage";
 import { describedBy, FieldError } from "../ui/form-errors";
 import { EditorFold, TextField } from "./editor";
 
@@ -23,6 +26,7 @@ type CauseRow = {
   repairMinutes: number | null;
   partsCost: number | null;
   priority: Priority | null;
+  applicability: Applicability;
 };
 type Parent = { id: string; name: string; system: string };
 
@@ -31,10 +35,12 @@ export function CauseEditor({
   cause,
   parents,
   errors,
+  units,
 }: {
   cause: CauseRow;
   parents: Parent[];
   errors: FormErrors | undefined;
+  units: UnitSystem;
 }) {
   const busy = useNavigation().state === "submitting";
   const leaf = cause.level === "failure_mode";
@@ -57,6 +63,8 @@ export function CauseEditor({
       title="Edit this cause"
       errors={errors}
       fields={[
+        "minAgeYears",
+        "minMileage",
         "name",
         "parentId",
         "description",
@@ -115,6 +123,7 @@ export function CauseEditor({
             </label>
           </div>
         ) : null}
+        {leaf ? <ApplicabilityFields applies={cause.applicability} errors={errors} units={units} /> : null}
         <div className="flex flex-wrap gap-2">
           <button type="submit" name="intent" value="edit" className="btn-primary" disabled={busy}>
             Save the cause
@@ -144,5 +153,58 @@ export function CauseEditor({
         </button>
       </Form>
     </EditorFold>
+  );
+}
+
+/** Which vehicles it applies to: none ticked means any; below the age or mileage it is rarer. */
+function ApplicabilityFields({
+  applies,
+  errors,
+  units,
+}: {
+  applies: Applicability;
+  errors: FormErrors | undefined;
+  units: UnitSystem;
+}) {
+  const boxes = <T extends string>(
+    name: string,
+    values: readonly T[],
+    labels: Record<T, string>,
+    on?: T[],
+  ) => (
+    <div className="flex flex-wrap gap-x-4">
+      {values.map((v) => (
+        <label key={v} className="flex min-h-tap items-center gap-2">
+          <input type="checkbox" name={name} value={v} defaultChecked={on?.includes(v)} />
+          {labels[v]}
+        </label>
+      ))}
+    </div>
+  );
+  const miles = units === "imperial";
+  return (
+    <fieldset className="grid gap-2">
+      <legend className="text-sm font-medium">Which vehicles it applies to (none ticked: any)</legend>
+      {boxes("fuel", FUEL_TYPES, FUEL_LABEL, applies.fuel)}
+      {boxes("drivetrain", DRIVETRAINS, DRIVETRAIN_LABEL, applies.drivetrain)}
+      <div className="grid gap-3 sm:grid-cols-2">
+        <TextField
+          prefix="edit"
+          name="minAgeYears"
+          label="Rarer before this age, years"
+          value={applies.minAgeYears ?? ""}
+          errors={errors}
+          inputMode="decimal"
+        />
+        <TextField
+          prefix="edit"
+          name="minMileage"
+          label={`Rarer before this mileage, ${mileageUnit(units)}`}
+          value={applies.minKm ? Math.round(miles ? applies.minKm / KM_PER_MILE : applies.minKm) : ""}
+          errors={errors}
+          inputMode="numeric"
+        />
+      </div>
+    </fieldset>
   );
 }

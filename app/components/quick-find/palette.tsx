@@ -3,7 +3,7 @@
 // index builder until someone wants them. cmdk draws the list and handles the arrow keys; ranking
 // is ours (app/quick-find), so cmdk's own filter is off.
 import { Command } from "cmdk";
-import { type RefObject, useCallback, useEffect, useMemo, useState } from "react";
+import { type RefObject, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import {
   type Entry,
   type EntryKind,
@@ -53,25 +53,39 @@ export default function QuickFindPalette(props: PaletteProps) {
   const { onOpenChange, onReady, takeTypedAhead } = props;
   const [query, setQuery] = useState("");
   // The keys pressed between Ctrl+K and this code arriving belong in the box, not on the page. They
-  // are taken once the dialog's input is on the page (after its portal mounts), then the holder
-  // lets go.
+  // are taken once the dialog's input is on the page (after its portal mounts); the holder lets go
+  // only once the box has the focus and its caret is after them, and keys pressed meanwhile are
+  // added too, so under load nothing is lost and nothing replaces what was handed over.
+  const handed = useRef("");
+  const settled = useRef(false);
+  const settle = useCallback(() => {
+    if (settled.current) return;
+    settled.current = true;
+    const more = takeTypedAhead();
+    if (more) {
+      handed.current += more;
+      setQuery(handed.current);
+    }
+    onReady();
+  }, [takeTypedAhead, onReady]);
   useEffect(() => {
     const held = takeTypedAhead();
+    handed.current = held;
     // Keys held by a window listener, outside React, handed over once: an effect is the place.
     // eslint-disable-next-line react-hooks/set-state-in-effect
     if (held) setQuery(held);
     inputRef.current?.focus();
-    // The dialog's focus handling selects the box's text as it takes the focus; with keys handed
-    // over, the next key would replace them. Once the held text is in the box, the caret goes after it.
-    const frame = held
-      ? requestAnimationFrame(() => {
-          const box = inputRef.current;
-          if (box) box.setSelectionRange(box.value.length, box.value.length);
-        })
-      : 0;
-    onReady();
-    return () => cancelAnimationFrame(frame);
-  }, [takeTypedAhead, inputRef, onReady]);
+    // Should the box never take the focus, the keys are let go all the same.
+    const late = setTimeout(settle, 1000);
+    return () => clearTimeout(late);
+  }, [takeTypedAhead, inputRef, settle]);
+  // The dialog's focus handling selects the box's text as it takes the focus; the next key would
+  // replace the handed-over text. While the box holds exactly that text, a selection of all of it
+  // collapses to the end.
+  const caretToEnd = (box: HTMLInputElement) => {
+    if (handed.current && box.value === handed.current && box.selectionStart === 0)
+      box.setSelectionRange(box.value.length, box.value.length);
+  };
   const [selection, setSelection] = useState<{ query: string; value: string } | null>(null);
   const [arrowed, setArrowed] = useState<string | null>(null); // the query the user moved the highlight in
   const [added, setAdded] = useState<string | null>(null);
@@ -149,6 +163,14 @@ export default function QuickFindPalette(props: PaletteProps) {
           ref={inputRef}
           value={query}
           onValueChange={setQuery}
+          onSelect={(e) => caretToEnd(e.currentTarget)}
+          onFocus={(e) => {
+            const box = e.currentTarget;
+            requestAnimationFrame(() => {
+              caretToEnd(box);
+              settle();
+            });
+          }}
           placeholder={placeholder ?? "Symptom, cause, check, registration, VIN or #case"}
           className="min-h-tap w-full border-b border-rule bg-transparent px-4 py-3 text-lg outline-none placeholder:text-graphite-600"
         />

@@ -21,6 +21,7 @@ import { itemHistory } from "~/audit/item-history.server";
 import { ItemHistory } from "~/components/kb/item-history";
 import { treeChoices, treeIntent } from "~/kb/tree-forms.server";
 import { AddChildForm, AddLinkForms, MergeForm } from "~/components/kb/tree-forms";
+import { describeApplicability, readApplicability } from "~/kb/applicability";
 import type { Route } from "./+types/cause";
 
 export async function loader({ params, context }: Route.LoaderArgs) {
@@ -41,7 +42,16 @@ export async function loader({ params, context }: Route.LoaderArgs) {
         name: c.name,
       }))
     : null;
-  return { ...found, currency: workshop.currency, mayEdit, history, parents, choices, mergedInto };
+  return {
+    ...found,
+    currency: workshop.currency,
+    units: workshop.units,
+    mayEdit,
+    history,
+    parents,
+    choices,
+    mergedInto,
+  };
 }
 
 const number = figureBetween;
@@ -63,7 +73,8 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   // Another workshop's cause does not exist for this member, whatever their role.
   const cause = await findCause(db, context.get(memberContext).workshopId, params.causeId);
   const member = requirePermission(context.get(memberContext), "kb:edit");
-  const form = Object.fromEntries(await request.formData());
+  const data = await request.formData();
+  const form = Object.fromEntries(data);
   const tree = await treeIntent(db, member, cause, form);
   if (tree) return tree;
   if (form.intent === "retire") {
@@ -77,11 +88,16 @@ export async function action({ request, params, context }: Route.ActionArgs) {
     const edit = EditForm.safeParse(form);
     if (!edit.success) return invalid(zodErrors(edit.error));
     const { intent: _i, ...fields } = edit.data;
-    if (cause.level === "failure_mode" && (fields.baseRate === undefined || fields.priority === undefined))
+    const leaf = cause.level === "failure_mode";
+    if (leaf && (fields.baseRate === undefined || fields.priority === undefined))
       return invalid({ baseRate: ["A failure mode needs a base rate and a priority."] });
+    const { units } = await getWorkshop(db, member.workshopId);
+    const applies = leaf ? readApplicability(data, units, cause.applicability) : null;
+    if (applies && !applies.ok) return invalid(applies.errors);
     return onForm(async () => {
       const done = await updateCause(db, member, params.causeId, {
         ...fields,
+        ...(applies?.ok ? { applicability: applies.value } : {}),
         parentId: fields.parentId || null,
         repairMinutes: fields.repairMinutes === undefined ? undefined : Math.round(fields.repairMinutes),
       });
@@ -136,6 +152,7 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
     ...(leaf
       ? ([
           ["Base rate", `${cause.baseRate} (relative frequency among workshop visits)`],
+          ["Applies to", describeApplicability(cause.applicability, loaderData.units)],
           [
             "Typical repair",
             `${cause.repairMinutes ?? 0} min labour, parts about ${formatMoney(cause.partsCost ?? 0, currency)}`,
@@ -198,7 +215,9 @@ export default function CausePage({ loaderData, actionData }: Route.ComponentPro
         </p>
       ) : null}
       <FormMessages errors={errors} notice={actionData?.notice} />
-      {mayEdit && !cause.retiredAt ? <CauseEditor cause={cause} parents={parents} errors={errors} /> : null}
+      {mayEdit && !cause.retiredAt ? (
+        <CauseEditor cause={cause} parents={parents} errors={errors} units={loaderData.units} />
+      ) : null}
       {loaderData.choices ? (
         <>
           <AddChildForm level={cause.level} errors={errors} />

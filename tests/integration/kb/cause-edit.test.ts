@@ -30,6 +30,27 @@ const edit = (c: Awaited<ReturnType<typeof row>>) => ({
 });
 
 describe("editing the cause tree", () => {
+  it("narrows a failure mode to the vehicles it applies to; the engine reads it and its history says it", async () => {
+    const senior = await memberFor(db(), "tomas-varga");
+    const id = kbId("bramblegate", "cause", "brake_pad_noise");
+    const before = await row(id);
+    const applicability = { fuel: ["diesel" as const], minKm: 96_561 };
+    const done = await updateCause(db(), senior, id, { ...edit(before), applicability });
+    expect(done.changed).toEqual(["applicability"]);
+    const kb = await loadKnowledge(db(), BRAMBLEGATE, done.kbVersion!);
+    expect(kb.causes.find((c) => c.id === id)?.applicability).toEqual(applicability);
+    // Saved again as it is (jsonb keeps keys in its own order): nothing changed.
+    const again = await updateCause(db(), senior, id, {
+      ...edit(before),
+      applicability: { minKm: 96_561, fuel: ["diesel"] },
+    });
+    expect(again.changed).toEqual([]);
+    const [entry] = await db().select().from(auditLog).where(eq(auditLog.entityId, id)).orderBy(auditLog.id);
+    expect(describeAudit(entry).text).toBe(
+      `edited the cause “${before.name}”: changed which vehicles it applies to`,
+    );
+  });
+
   it("moves a failure mode under another component, with a new version and an audit line in words", async () => {
     const senior = await memberFor(db(), "tomas-varga");
     const id = kbId("bramblegate", "cause", "brake_pad_noise");
