@@ -32,7 +32,7 @@ const edit = (c: Awaited<ReturnType<typeof row>>) => ({
 describe("editing the cause tree", () => {
   it("narrows a failure mode to the vehicles it applies to; the engine reads it and its history says it", async () => {
     const senior = await memberFor(db(), "tomas-varga");
-    const id = kbId("bramblegate", "cause", "brake_pad_noise");
+    const id = kbId("bramblegate", "cause", "brake_disc_worn_thin");
     const before = await row(id);
     const applicability = { fuel: ["diesel" as const], minKm: 96_561 };
     const done = await updateCause(db(), senior, id, { ...edit(before), applicability });
