@@ -135,13 +135,15 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
       ? `linked the check “${a.other}” to “${a.cause}”: it fails ${describeStrength(Number(a.p))} of the time when that is the cause`
       : `linked “${a.cause}” to the symptom “${a.other}”: it shows ${describeStrength(Number(a.p))}`,
   "kb.propose": (a) =>
-    a.kind === "cause"
-      ? `proposed a new cause “${a.cause}” beside the others under “${a.under}”, shown as “${a.symptom}” ${describeStrength(Number(a.p))}`
-      : `proposed that “${a.cause}” shows as “${a.symptom}” ${describeStrength(Number(a.p))}`,
+    a.kind === "symptom"
+      ? `proposed a new symptom “${a.symptom}”, shown by “${a.cause}” ${describeStrength(Number(a.p))}`
+      : a.kind === "cause"
+        ? `proposed a new cause “${a.cause}” beside the others under “${a.under}”, shown as “${a.symptom}” ${describeStrength(Number(a.p))}`
+        : `proposed that “${a.cause}” shows as “${a.symptom}” ${describeStrength(Number(a.p))}`,
   "kb.proposal.accept": (a) =>
-    `accepted the proposal ${a.kind === "cause" ? `of a new cause “${a.cause}”` : `that “${a.cause}” shows as “${a.symptom}”`} ${describeStrength(Number(a.p))}${quoted(a.comment)}`,
+    `accepted the proposal ${a.kind === "cause" ? `of a new cause “${a.cause}”` : a.kind === "symptom" ? `of a new symptom “${a.symptom}”, shown by “${a.cause}”` : `that “${a.cause}” shows as “${a.symptom}”`} ${describeStrength(Number(a.p))}${quoted(a.comment)}`,
   "kb.proposal.reject": (a) =>
-    `rejected the proposal ${a.kind === "cause" ? `of a new cause “${a.cause}”` : `that “${a.cause}” shows as “${a.symptom}”`}${quoted(a.comment)}`,
+    `rejected the proposal ${a.kind === "cause" ? `of a new cause “${a.cause}”` : a.kind === "symptom" ? `of a new symptom “${a.symptom}”` : `that “${a.cause}” shows as “${a.symptom}”`}${quoted(a.comment)}`,
   "kb.link": (a, b) =>
     `${a.link === "check" ? `changed how often “${a.other}” fails when the cause is “${a.cause}”` : `changed how often “${a.cause}” shows as “${a.other}”`}: from ${describeStrength(Number(b.p))} to ${describeStrength(Number(a.p))}`,
   "workshop.create": (a) => `created the workshop ${a.name ?? ""}`.trim(),

@@ -10,7 +10,10 @@ export type KbChange =
   | { link: "symptom"; symptomId: string; causeId: string; p: number }
   | { link: "check"; checkId: string; causeId: string; p: number }
   // A failure mode not in the base yet, shown as one symptom (a technician's proposal of a missing cause).
-  | { link: "new-cause"; parentId: string; name: string; baseRate: number; symptomId: string; p: number };
+  | { link: "new-cause"; parentId: string; name: string; baseRate: number; symptomId: string; p: number }
+  // A symptom not in the base yet, pointing to a cause: no recorded case names it, so it can only
+  // move cases once they do; previewed all the same, so a senior sees that.
+  | { link: "new-symptom"; name: string; leak: number; causeId: string; p: number };
 
 /** The id the previewed new cause has inside the preview; it is never written. */
 export const PROPOSED_CAUSE = "proposed-cause";
@@ -47,6 +50,15 @@ export type ImpactWithTests = Impact & { tests?: Impact };
 
 /** The base with one link set to a new strength (added when the pair was not linked). */
 export function withChange(kb: Knowledge, change: KbChange): Knowledge {
+  if (change.link === "new-symptom")
+    return {
+      ...kb,
+      symptoms: [...kb.symptoms, { id: "proposed-symptom", name: change.name, leak: change.leak }],
+      symptomLinks: [
+        ...kb.symptomLinks,
+        { symptomId: "proposed-symptom", causeId: change.causeId, p: change.p },
+      ],
+    };
   if (change.link === "new-cause")
     return {
       ...kb,

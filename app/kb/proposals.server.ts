@@ -8,7 +8,7 @@ import { audit } from "~/audit/write.server";
 import type { CurrentMember } from "~/auth/guards.server";
 import type { Db } from "~/db/client.server";
 import { cases, causes, kbProposals, members, symptomLinks, symptoms, users } from "~/db/schema";
-import type { Priority } from "~/domain/knowledge";
+import type { Priority, SymptomKind } from "~/domain/knowledge";
 import type { ProposalKind } from "~/domain/proposals";
 import { refuse, requireId } from "~/http/errors.server";
 import { previewChange } from "./impact.server";
@@ -20,11 +20,16 @@ type Member = Pick<CurrentMember, "workshopId" | "userId" | "memberId">;
 // A cause accepted from a proposal starts rare (relative frequency 1, the low end of the starter
 // base's failure modes) until a senior sets its base rate on its page.
 const NEW_CAUSE_BASE_RATE = 1;
+// A symptom accepted from a proposal shows without any listed cause 2 % of the time, the leak most
+// of the starter base's symptoms carry (110 of 222), until a senior sets its own on its page.
+const NEW_SYMPTOM_LEAK = 0.02;
 
 export type ProposalInput = {
   caseId: string;
   kind: ProposalKind;
-  symptomId: string;
+  // kinds "link" and "cause": one of the case's symptoms; kind "symptom": the new symptom's name.
+  symptomId?: string;
+  symptomName?: string;
   // kind "link": the failure mode the symptom should point to; kind "cause": a failure mode in the
   // same part of the car (or the component itself) the new one goes beside.
   causeId: string;
@@ -35,7 +40,8 @@ export type ProposalInput = {
 
 export async function propose(db: Db, member: Member, input: ProposalInput) {
   requireId(input.caseId, "No such case in this workshop.");
-  requireId(input.symptomId, "Choose one of the case's symptoms.");
+  const newSymptom = input.kind === "symptom";
+  if (!newSymptom) requireId(input.symptomId ?? "", "Choose one of the case's symptoms.");
   requireId(input.causeId, "Choose a cause of this knowledge base.");
   return db.transaction(async (tx) => {
     const [c] = await tx
@@ -43,10 +49,12 @@ export async function propose(db: Db, member: Member, input: ProposalInput) {
       .from(cases)
       .where(and(eq(cases.id, input.caseId), eq(cases.workshopId, member.workshopId)));
     if (!c) refuse(404, "No such case in this workshop.");
-    const [s] = await tx
-      .select({ name: symptoms.name })
-      .from(symptoms)
-      .where(and(eq(symptoms.id, input.symptomId), eq(symptoms.workshopId, member.workshopId)));
+    const [s] = newSymptom
+      ? [{ name: input.symptomName!.trim() }]
+      : await tx
+          .select({ name: symptoms.name })
+          .from(symptoms)
+          .where(and(eq(symptoms.id, input.symptomId!), eq(symptoms.workshopId, member.workshopId)));
     if (!s) refuse(400, "Choose one of the case's symptoms.");
     const [picked] = await tx
       .select({ id: causes.id, name: causes.name, level: causes.level, parentId: causes.parentId })
@@ -61,7 +69,7 @@ export async function propose(db: Db, member: Member, input: ProposalInput) {
             .from(causes)
             .where(eq(causes.id, picked.parentId))
         : [picked];
-    if (input.kind === "link" && cause.level !== "failure_mode")
+    if (input.kind !== "cause" && cause.level !== "failure_mode")
       refuse(400, "A symptom points to a failure mode: choose one of the likely causes.");
     if (input.kind === "cause" && cause.level !== "component")
       refuse(400, "A new cause goes beside a likely cause: choose the one nearest to it.");
@@ -71,7 +79,8 @@ export async function propose(db: Db, member: Member, input: ProposalInput) {
         workshopId: member.workshopId,
         caseId: input.caseId,
         kind: input.kind,
-        symptomId: input.symptomId,
+        symptomId: newSymptom ? null : input.symptomId,
+        symptomName: newSymptom ? s.name : null,
         causeId: cause.id,
         causeName: input.kind === "cause" ? input.causeName!.trim() : null,
         p: input.p,
@@ -92,7 +101,7 @@ export async function propose(db: Db, member: Member, input: ProposalInput) {
         under: input.kind === "cause" ? cause.name : undefined,
         p: input.p,
         caseNumber: c.number,
-        items: [input.symptomId, input.causeId],
+        items: newSymptom ? [input.causeId] : [input.symptomId, input.causeId],
       },
     });
     return { id: row.id, caseNumber: c.number };
@@ -114,7 +123,8 @@ export async function listProposals(db: Db, workshopId: string) {
       causeName: kbProposals.causeName,
       reviewComment: kbProposals.reviewComment,
       createdAt: kbProposals.createdAt,
-      symptomName: symptoms.name,
+      symptomName: sql<string>`coalesce(${symptoms.name}, ${kbProposals.symptomName})`,
+      newSymptom: sql<boolean>`${kbProposals.symptomId} is null`,
       targetName: causes.name,
       targetId: causes.id,
       currentP: symptomLinks.p,
@@ -123,7 +133,7 @@ export async function listProposals(db: Db, workshopId: string) {
       proposedBy: proposerUser.name,
     })
     .from(kbProposals)
-    .innerJoin(symptoms, eq(symptoms.id, kbProposals.symptomId))
+    .leftJoin(symptoms, eq(symptoms.id, kbProposals.symptomId))
     .innerJoin(causes, eq(causes.id, kbProposals.causeId))
     .leftJoin(
       symptomLinks,
@@ -153,21 +163,23 @@ export async function previewProposal(db: Db, workshopId: string, proposalId: st
   return previewChange(
     db,
     workshopId,
-    p.kind === "cause"
-      ? {
-          link: "new-cause",
-          parentId: p.causeId,
-          name: p.causeName!,
-          baseRate: NEW_CAUSE_BASE_RATE,
-          symptomId: p.symptomId,
-          p: p.p,
-        }
-      : { link: "symptom", symptomId: p.symptomId, causeId: p.causeId, p: p.p },
+    p.kind === "symptom"
+      ? { link: "new-symptom", name: p.symptomName!, leak: NEW_SYMPTOM_LEAK, causeId: p.causeId, p: p.p }
+      : p.kind === "cause"
+        ? {
+            link: "new-cause",
+            parentId: p.causeId,
+            name: p.causeName!,
+            baseRate: NEW_CAUSE_BASE_RATE,
+            symptomId: p.symptomId!,
+            p: p.p,
+          }
+        : { link: "symptom", symptomId: p.symptomId!, causeId: p.causeId, p: p.p },
   );
 }
 
 export type Review =
-  | { decision: "accept"; comment: string; baseRate?: number; priority?: Priority }
+  | { decision: "accept"; comment: string; baseRate?: number; priority?: Priority; symptomKind?: SymptomKind }
   | { decision: "reject"; comment: string };
 
 /** Accepts or rejects an open proposal; accepting makes its change with a new version. */
@@ -181,10 +193,9 @@ export async function reviewProposal(db: Db, member: Member, proposalId: string,
       .for("update");
     if (!p) refuse(404, "No such proposal in this workshop.");
     if (p.state !== "open") refuse(409, `This proposal was ${p.state} already; nothing changed.`);
-    const [{ symptomName }] = await tx
-      .select({ symptomName: symptoms.name })
-      .from(symptoms)
-      .where(eq(symptoms.id, p.symptomId));
+    const [{ symptomName }] = p.symptomId
+      ? await tx.select({ symptomName: symptoms.name }).from(symptoms).where(eq(symptoms.id, p.symptomId))
+      : [{ symptomName: p.symptomName! }];
     const [target] = await tx
       .select({ name: causes.name, system: causes.system })
       .from(causes)
@@ -211,13 +222,29 @@ export async function reviewProposal(db: Db, member: Member, proposalId: string,
           .returning({ id: causes.id });
         causeId = fm.id;
       }
+      // A proposed new symptom is made now, in the part of the car of the cause it points to.
+      const symptomId =
+        p.symptomId ??
+        (
+          await tx
+            .insert(symptoms)
+            .values({
+              workshopId: member.workshopId,
+              key: keyFor(symptomName),
+              name: symptomName,
+              system: target.system,
+              kind: review.symptomKind ?? "noise",
+              leak: NEW_SYMPTOM_LEAK,
+            })
+            .returning({ id: symptoms.id })
+        )[0].id;
       const [existing] = await tx
         .select({ p: symptomLinks.p })
         .from(symptomLinks)
-        .where(and(eq(symptomLinks.symptomId, p.symptomId), eq(symptomLinks.causeId, causeId)));
+        .where(and(eq(symptomLinks.symptomId, symptomId), eq(symptomLinks.causeId, causeId)));
       await tx
         .insert(symptomLinks)
-        .values({ workshopId: member.workshopId, symptomId: p.symptomId, causeId, p: p.p })
+        .values({ workshopId: member.workshopId, symptomId, causeId, p: p.p })
         .onConflictDoUpdate({ target: [symptomLinks.symptomId, symptomLinks.causeId], set: { p: p.p } });
       await nextKbVersion(
         tx,

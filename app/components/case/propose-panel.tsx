@@ -1,6 +1,6 @@
 // "The knowledge base did not have this": a technician tells a senior, from the case where they met
-// it, that a symptom should point to a cause, or that a cause is missing. Sent without leaving the
-// case (a fetcher); the answer's messages sit at their fields.
+// it, that a symptom should point to a cause, or that a cause or a symptom is missing. Sent without
+// leaving the case (a fetcher); the answer's messages sit at their fields.
 import { useState } from "react";
 import { href, useFetcher } from "react-router";
 import { STRENGTHS } from "~/domain/link-strength";
@@ -20,10 +20,11 @@ export function ProposePanel({
   causes: Item[];
 }) {
   const fetcher = useFetcher<FormAnswer>();
-  const [kind, setKind] = useState<"link" | "cause">("link");
+  // With no symptom recorded yet, only a symptom the base lacks can be proposed.
+  const [kind, setKind] = useState<"link" | "cause" | "symptom">(symptoms.length ? "link" : "symptom");
   const errors = fetcher.data?.errors;
   const busy = fetcher.state !== "idle";
-  if (symptoms.length === 0) return null;
+  if (causes.length === 0) return null;
   return (
     <section aria-labelledby="propose" className="rounded-card border border-rule bg-card p-4">
       <Fold
@@ -41,6 +42,7 @@ export function ProposePanel({
                 name="kind"
                 value="link"
                 checked={kind === "link"}
+                disabled={symptoms.length === 0}
                 onChange={() => setKind("link")}
               />
               A symptom points to a cause more than the ranking says
@@ -51,22 +53,46 @@ export function ProposePanel({
                 name="kind"
                 value="cause"
                 checked={kind === "cause"}
+                disabled={symptoms.length === 0}
                 onChange={() => setKind("cause")}
               />
               A cause the knowledge base does not have
             </label>
+            <label className="flex min-h-tap items-center gap-2">
+              <input
+                type="radio"
+                name="kind"
+                value="symptom"
+                checked={kind === "symptom"}
+                onChange={() => setKind("symptom")}
+              />
+              A symptom the knowledge base does not have
+            </label>
           </fieldset>
-          <label className="grid gap-1 text-sm font-medium" htmlFor="symptomId">
-            The case&apos;s symptom
-            <select id="symptomId" name="symptomId" className="field" {...describedBy(errors, "symptomId")}>
-              {symptoms.map((s) => (
-                <option key={s.id} value={s.id}>
-                  {s.name}
-                </option>
-              ))}
-            </select>
-            <FieldError errors={errors} name="symptomId" />
-          </label>
+          {kind === "symptom" ? (
+            <label className="grid gap-1 text-sm font-medium" htmlFor="symptomName">
+              The symptom, as you would say it
+              <input
+                id="symptomName"
+                name="symptomName"
+                className="field"
+                {...describedBy(errors, "symptomName")}
+              />
+              <FieldError errors={errors} name="symptomName" />
+            </label>
+          ) : (
+            <label className="grid gap-1 text-sm font-medium" htmlFor="symptomId">
+              The case&apos;s symptom
+              <select id="symptomId" name="symptomId" className="field" {...describedBy(errors, "symptomId")}>
+                {symptoms.map((s) => (
+                  <option key={s.id} value={s.id}>
+                    {s.name}
+                  </option>
+                ))}
+              </select>
+              <FieldError errors={errors} name="symptomId" />
+            </label>
+          )}
           {kind === "cause" ? (
             <label className="grid gap-1 text-sm font-medium" htmlFor="causeName">
               The missing cause, as you would say it
@@ -80,7 +106,11 @@ export function ProposePanel({
             </label>
           ) : null}
           <label className="grid gap-1 text-sm font-medium" htmlFor="causeId">
-            {kind === "cause" ? "It belongs beside" : "The cause it points to"}
+            {kind === "cause"
+              ? "It belongs beside"
+              : kind === "symptom"
+                ? "The cause that shows it"
+                : "The cause it points to"}
             <select id="causeId" name="causeId" className="field" {...describedBy(errors, "causeId")}>
               {causes.map((c) => (
                 <option key={c.id} value={c.id}>

@@ -20,9 +20,9 @@ export const kbProposals = pgTable(
       .references(() => workshops.id, { onDelete: "cascade" }),
     caseId: uuid("case_id").references(() => cases.id, { onDelete: "set null" }),
     kind: proposalKindEnum("kind").notNull(),
-    symptomId: uuid("symptom_id")
-      .notNull()
-      .references(() => symptoms.id, { onDelete: "cascade" }),
+    // kinds "link" and "cause": the case's symptom; kind "symptom": none yet, its name instead.
+    symptomId: uuid("symptom_id").references(() => symptoms.id, { onDelete: "cascade" }),
+    symptomName: text("symptom_name"),
     // kind "link": the cause the symptom should point to; kind "cause": the component a new cause goes under.
     causeId: uuid("cause_id")
       .notNull()
@@ -41,5 +41,6 @@ export const kbProposals = pgTable(
     index("kb_proposals_workshop_state_idx").on(t.workshopId, t.state),
     check("kb_proposals_p_range", sql`${t.p} > 0 and ${t.p} < 1`),
     check("kb_proposals_cause_named", sql`(${t.kind} = 'cause') = (${t.causeName} is not null)`),
+    check("kb_proposals_symptom_named", sql`(${t.symptomId} is null) <> (${t.symptomName} is null)`),
   ],
 );

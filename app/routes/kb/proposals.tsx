@@ -4,10 +4,10 @@ import { memberContext, requirePermission } from "~/auth/guards.server";
 import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";
 import { ImpactPreview } from "~/components/kb/impact-preview";
 import { formatDate } from "~/domain/format";
-import { PRIORITIES, PRIORITY_COPY } from "~/domain/knowledge";
+import { PRIORITIES, PRIORITY_COPY, SYMPTOM_KIND_LABEL, SYMPTOM_KINDS } from "~/domain/knowledge";
 import { describeStrength, readStrength } from "~/domain/link-strength";
 import { can } from "~/domain/permissions";
-import { PROPOSAL_STATE_LABEL } from "~/domain/proposals";
+import { PROPOSAL_KINDS, PROPOSAL_STATE_LABEL } from "~/domain/proposals";
 import { dbContext } from "~/http/context";
 import { invalid, onForm, zodErrors } from "~/http/forms.server";
 import { listProposals, previewProposal, propose, reviewProposal } from "~/kb/proposals.server";
@@ -27,8 +27,9 @@ const ProposeForm = z
   .object({
     intent: z.literal("propose"),
     caseId: uuid("Propose from a case."),
-    kind: z.enum(["link", "cause"], { message: "Say what the knowledge base is missing." }),
-    symptomId: uuid("Choose one of the case's symptoms."),
+    kind: z.enum(PROPOSAL_KINDS, { message: "Say what the knowledge base is missing." }),
+    symptomId: uuid("Choose one of the case's symptoms.").optional(),
+    symptomName: z.string().trim().max(200, "Name it in at most 200 characters.").optional(),
     causeId: uuid("Choose one of the likely causes."),
     causeName: z.string().trim().max(200, "Name it in at most 200 characters.").optional(),
     strength: z.string().max(40, "Say it in a word or a figure."),
@@ -37,12 +38,21 @@ const ProposeForm = z
   .refine((f) => f.kind !== "cause" || (f.causeName?.length ?? 0) >= 3, {
     path: ["causeName"],
     message: "Name the missing cause as a technician would say it.",
+  })
+  .refine((f) => f.kind !== "symptom" || (f.symptomName?.length ?? 0) >= 3, {
+    path: ["symptomName"],
+    message: "Name the symptom as a technician would say it.",
+  })
+  .refine((f) => f.kind === "symptom" || f.symptomId, {
+    path: ["symptomId"],
+    message: "Choose one of the case's symptoms.",
   });
 const ReviewForm = z.object({
   intent: z.enum(["accept", "reject"]),
   id: uuid("No such proposal."),
   comment: z.string().trim().max(1000),
   priority: z.enum(PRIORITIES).optional(),
+  symptomKind: z.enum(SYMPTOM_KINDS).optional(),
 });
 
 export async function action({ request, context }: Route.ActionArgs) {
@@ -70,11 +80,11 @@ export async function action({ request, context }: Route.ActionArgs) {
   }
   const parsed = ReviewForm.safeParse(form);
   if (!parsed.success) return invalid(zodErrors(parsed.error));
-  const { intent, id, comment, priority } = parsed.data;
+  const { intent, id, comment, priority, symptomKind } = parsed.data;
   if (intent === "reject" && comment.length < 3)
     return invalid({ [`comment-${id}`]: ["Say why, so the technician learns from it."] });
   return onForm(async () => {
-    const done = await reviewProposal(db, member, id, { decision: intent, comment, priority });
+    const done = await reviewProposal(db, member, id, { decision: intent, comment, priority, symptomKind });
     return done.decision === "accept"
       ? `Accepted: “${done.cause}” now shows as “${done.symptom}”. The knowledge base has a new version.`
       : "Rejected; the technician sees your comment.";
@@ -110,7 +120,9 @@ export default function Proposals({ loaderData, actionData }: Route.ComponentPro
           const title =
             p.kind === "cause"
               ? `A new cause “${p.causeName}” under ${p.targetName}`
-              : `“${p.targetName}” shows as “${p.symptomName}”`;
+              : p.kind === "symptom"
+                ? `A new symptom “${p.symptomName}”, shown by “${p.targetName}”`
+                : `“${p.targetName}” shows as “${p.symptomName}”`;
           return (
             <li key={p.id} aria-label={title} className="card">
               <p className="meta">
@@ -129,7 +141,7 @@ export default function Proposals({ loaderData, actionData }: Route.ComponentPro
               <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
                 <dt className="text-graphite-600">Now</dt>
                 <dd data-before>
-                  {p.kind === "cause"
+                  {p.kind !== "link"
                     ? "not in the knowledge base"
                     : p.currentP === null
                       ? `“${p.symptomName}” does not point to it`
@@ -163,6 +175,23 @@ export default function Proposals({ loaderData, actionData }: Route.ComponentPro
                         {PRIORITIES.map((x) => (
                           <option key={x} value={x}>
                             {PRIORITY_COPY[x].label}
+                          </option>
+                        ))}
+                      </select>
+                    </label>
+                  ) : null}
+                  {p.kind === "symptom" ? (
+                    <label className="grid gap-1 text-sm font-medium" htmlFor={`symptom-kind-${p.id}`}>
+                      Kind of symptom
+                      <select
+                        id={`symptom-kind-${p.id}`}
+                        name="symptomKind"
+                        defaultValue="noise"
+                        className="field"
+                      >
+                        {SYMPTOM_KINDS.map((k) => (
+                          <option key={k} value={k}>
+                            {SYMPTOM_KIND_LABEL[k]}
                           </option>
                         ))}
                       </select>

@@ -4,8 +4,8 @@
 // on; a reviewed proposal cannot be reviewed again; another workshop's case or proposal is not found.
 import { and, count, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
-import { auditLog, causes, kbProposals, symptomLinks, workshops } from "~/db/schema";
-import { listProposals, propose, reviewProposal } from "~/kb/proposals.server";
+import { auditLog, causes, kbProposals, symptomLinks, symptoms, workshops } from "~/db/schema";
+import { listProposals, previewProposal, propose, reviewProposal } from "~/kb/proposals.server";
 import { seedId } from "../../../seeds/ids";
 import { kbId } from "../../../seeds/knowledge";
 import { testDb } from "../../setup/integration-worker";
@@ -21,6 +21,52 @@ const version = async () =>
 const audits = async () => (await db().select({ n: count() }).from(auditLog))[0].n;
 
 describe("knowledge-base proposals", () => {
+  it("a missing symptom proposed from a case is made in its cause's system and linked when accepted", async () => {
+    const [tech, senior] = [await memberFor(db(), "priya-hale"), await memberFor(db(), "tomas-varga")];
+    const v0 = await version();
+    const { id } = await propose(db(), tech, {
+      caseId: CASE,
+      kind: "symptom",
+      symptomName: "Steering wheel shimmy only after a wash",
+      causeId: BESIDE,
+      p: 0.15,
+      note: "Judder for the first stops after the car has been washed; gone once the discs are dry.",
+    });
+    const [listed] = (await listProposals(db(), BRAMBLEGATE)).filter((p) => p.id === id);
+    expect(listed).toMatchObject({
+      kind: "symptom",
+      symptomName: "Steering wheel shimmy only after a wash",
+      newSymptom: true,
+    });
+    // No recorded case names the new symptom yet: the preview moves nothing and writes nothing.
+    const a0 = await audits();
+    const preview = await previewProposal(db(), BRAMBLEGATE, id);
+    expect(preview.moved).toEqual([]);
+    expect(await audits()).toBe(a0);
+    await reviewProposal(db(), senior, id, {
+      decision: "accept",
+      comment: "Seen it.",
+      symptomKind: "vibration",
+    });
+    expect(await version()).toBe(v0 + 1);
+    const [made] = await db()
+      .select()
+      .from(symptoms)
+      .where(
+        and(
+          eq(symptoms.workshopId, BRAMBLEGATE),
+          eq(symptoms.name, "Steering wheel shimmy only after a wash"),
+        ),
+      );
+    const [beside] = await db().select({ system: causes.system }).from(causes).where(eq(causes.id, BESIDE));
+    expect(made).toMatchObject({ kind: "vibration", system: beside.system, leak: 0.02 });
+    const [link] = await db()
+      .select({ p: symptomLinks.p })
+      .from(symptomLinks)
+      .where(and(eq(symptomLinks.symptomId, made.id), eq(symptomLinks.causeId, BESIDE)));
+    expect(link.p).toBe(0.15);
+  });
+
   it("a missing cause proposed from a case is created when a senior accepts it, beside the one picked", async () => {
     const tech = await memberFor(db(), "priya-hale");
     const senior = await memberFor(db(), "tomas-varga");
