@@ -48,6 +48,9 @@ export type CheckEdit = {
   falseAlarm: number;
 };
 
+/** The columns every check has, whatever its result: a measurement's quantity, unit and rule aside. */
+const plainColumns = ({ quantity: _q, unit: _u, rule: _r, ...plain }: CheckEdit) => plain;
+
 /** The problems of an edit, by field: what the editor shows before anything is saved. */
 export function checkEditProblems(edit: CheckEdit, measurement: boolean): Record<string, string[]> {
   const problems: Record<string, string[]> = {};
@@ -88,16 +91,7 @@ export async function updateCheck(
     const first = Object.values(problems)[0];
     if (first) refuse(400, first[0], { errors: problems });
     const set = {
-      name: edit.name,
-      instructions: edit.instructions,
-      tools: edit.tools,
-      minutes: edit.minutes,
-      consumablesCost: edit.consumablesCost,
-      access: edit.access,
-      skill: edit.skill,
-      cautions: edit.cautions,
-      failMeans: edit.failMeans,
-      falseAlarm: edit.falseAlarm,
+      ...plainColumns(edit),
       ...(measurement ? { quantity: edit.quantity ?? was.quantity, unit: edit.unit!, rule: edit.rule! } : {}),
     };
     const changed = (Object.keys(set) as (keyof typeof set)[]).filter(
@@ -152,20 +146,11 @@ export async function addCheck(
       .values({
         workshopId: member.workshopId,
         key: keyFor(edit.name),
-        name: edit.name,
-        instructions: edit.instructions,
-        tools: edit.tools,
-        minutes: edit.minutes,
-        consumablesCost: edit.consumablesCost,
-        access: edit.access,
-        skill: edit.skill,
-        cautions: edit.cautions,
+        ...plainColumns(edit),
         resultKind: edit.resultKind,
         quantity: measurement ? (edit.quantity ?? null) : null,
         unit: measurement ? edit.unit! : null,
         rule: measurement ? edit.rule! : null,
-        failMeans: edit.failMeans,
-        falseAlarm: edit.falseAlarm,
       })
       .returning({ id: checks.id });
     const kbVersion = await nextKbVersion(

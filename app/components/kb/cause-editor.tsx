@@ -13,7 +13,7 @@ import { DRIVETRAIN_LABEL, DRIVETRAINS, FUEL_LABEL, FUEL_TYPES, type UnitSystem 
 import type { FormErrors } from "~/http/forms";
 import { KM_PER_MILE, mileageUnit } from "~/measure/mileage";
 import { describedBy, FieldError } from "../ui/form-errors";
-import { EditorFold, TextField } from "./editor";
+import { ConfirmBox, EditorFold, TextField } from "./editor";
 
 type CauseRow = {
   level: (typeof CAUSE_LEVELS)[number];
@@ -134,20 +134,7 @@ export function CauseEditor({
         <p className="text-sm text-graphite-700">
           Retiring takes it out of every ranking from the next version on; cases that name it keep showing it.
         </p>
-        <label
-          className="mt-2 flex min-h-tap items-center gap-2 text-sm font-medium"
-          htmlFor="retire-confirm"
-        >
-          <input
-            id="retire-confirm"
-            type="checkbox"
-            name="confirm"
-            value="yes"
-            {...describedBy(errors, "confirm")}
-          />
-          Yes, retire it
-        </label>
-        <FieldError errors={errors} name="confirm" />
+        <ConfirmBox id="retire-confirm" field="confirm" label="Yes, retire it" errors={errors} />
         <button type="submit" name="intent" value="retire" className="btn mt-2" disabled={busy}>
           Retire this cause
         </button>

@@ -90,3 +90,26 @@ export function TextField({
     </label>
   );
 }
+
+/** The tick that says a senior means an action that cannot be undone from the form (retire, merge). */
+export function ConfirmBox({
+  id,
+  field,
+  label,
+  errors,
+}: {
+  id: string;
+  field: string;
+  label: string;
+  errors: FormErrors | undefined;
+}) {
+  return (
+    <>
+      <label className="mt-2 flex min-h-tap items-center gap-2 text-sm font-medium" htmlFor={id}>
+        <input id={id} type="checkbox" name="confirm" value="yes" {...describedBy(errors, field)} />
+        {label}
+      </label>
+      <FieldError errors={errors} name={field} />
+    </>
+  );
+}

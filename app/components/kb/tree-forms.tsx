@@ -4,7 +4,7 @@ import { Form, useNavigation } from "react-router";
 import { PRIORITIES, PRIORITY_COPY, SYSTEM_LABEL } from "~/domain/knowledge";
 import type { FormErrors } from "~/http/forms";
 import { describedBy, FieldError } from "../ui/form-errors";
-import { EditorFold, TextField } from "./editor";
+import { ConfirmBox, EditorFold, TextField } from "./editor";
 import { STRENGTH_WORDS_LIST } from "./strength-editor";
 
 type Level = "system" | "component" | "failure_mode";
@@ -191,17 +191,7 @@ export function MergeForm({
           </select>
           <FieldError errors={errors} name="intoId" />
         </label>
-        <label className="flex min-h-tap items-center gap-2 text-sm font-medium" htmlFor="merge-confirm">
-          <input
-            id="merge-confirm"
-            type="checkbox"
-            name="confirm"
-            value="yes"
-            {...describedBy(errors, "confirm-merge")}
-          />
-          Yes, merge it
-        </label>
-        <FieldError errors={errors} name="confirm-merge" />
+        <ConfirmBox id="merge-confirm" field="confirm-merge" label="Yes, merge it" errors={errors} />
         <div>
           <button type="submit" className="btn" disabled={busy}>
             Merge into it

@@ -31,11 +31,17 @@ export function QuickFind(props: QuickFindProps) {
     return held;
   }, []);
   const [ready, setReady] = useState(false);
-  const onReady = useCallback(() => setReady(true), []);
+  // Set at once when the palette takes over, so no key falls between the last hand-over and the
+  // holder's removal on the next render.
+  const released = useRef(false);
+  const onReady = useCallback(() => {
+    released.current = true;
+    setReady(true);
+  }, []);
   useEffect(() => {
     if (!wanted || ready) return;
     const hold = (e: KeyboardEvent) => {
-      if (e.ctrlKey || e.metaKey || e.altKey) return;
+      if (released.current || e.ctrlKey || e.metaKey || e.altKey) return;
       if (e.key.length === 1) typedAhead.current += e.key;
       else if (e.key === "Backspace") typedAhead.current = typedAhead.current.slice(0, -1);
       else return;
