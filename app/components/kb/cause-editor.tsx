@@ -86,7 +86,7 @@ export function CauseEditor({
               id="edit-parentId"
               name="parentId"
               defaultValue={cause.parentId ?? ""}
-              className="field"
+              className="field w-full"
               {...describedBy(errors, "parentId")}
             >
               {parents.map((p) => (

@@ -94,7 +94,7 @@ function LinkForm({
         <select
           id={`link-${select}`}
           name="otherId"
-          className="field"
+          className="field w-full"
           defaultValue=""
           {...describedBy(errors, select)}
         >
@@ -177,7 +177,7 @@ export function MergeForm({
             id="merge-intoId"
             name="intoId"
             defaultValue=""
-            className="field"
+            className="field w-full"
             {...describedBy(errors, "intoId")}
           >
             <option value="" disabled>
