@@ -28,6 +28,19 @@ export type CauseEdit = {
   applicability?: Applicability;
 };
 
+/** A cause as it stands, as an edit: the base of a change to one part of it (its place, from the tree). */
+export const editOf = (c: typeof causes.$inferSelect): CauseEdit => ({
+  name: c.name,
+  parentId: c.parentId,
+  description: c.description,
+  ownerDescription: c.ownerDescription,
+  ifLeft: c.ifLeft,
+  baseRate: c.baseRate ?? undefined,
+  repairMinutes: c.repairMinutes ?? undefined,
+  partsCost: c.partsCost ?? undefined,
+  priority: c.priority ?? undefined,
+});
+
 /** Where a cause may move to: the nodes one level up, with their system, by name. */
 export async function possibleParents(
   db: Db,

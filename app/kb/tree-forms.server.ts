@@ -10,7 +10,7 @@ import { causes, checkLinks, checks, symptomLinks, symptoms } from "~/db/schema"
 import { PRIORITIES } from "~/domain/knowledge";
 import { describeStrength, readStrength } from "~/domain/link-strength";
 import { figureBetween, invalid, onForm, zodErrors } from "~/http/forms.server";
-import { updateCause } from "./cause-edit.server";
+import { editOf, updateCause } from "./cause-edit.server";
 import { addCause, addLink, mergeCause } from "./tree-edit.server";
 
 type Cause = typeof causes.$inferSelect;
@@ -124,17 +124,7 @@ export async function treeIntent(
     const parentId = typeof form.parentId === "string" ? form.parentId : "";
     if (!parentId) return invalid({ parentId: ["Choose where it belongs."] });
     return onForm(async () => {
-      const done = await updateCause(db, member, cause.id, {
-        name: cause.name,
-        parentId,
-        description: cause.description,
-        ownerDescription: cause.ownerDescription,
-        ifLeft: cause.ifLeft,
-        baseRate: cause.baseRate ?? undefined,
-        repairMinutes: cause.repairMinutes ?? undefined,
-        partsCost: cause.partsCost ?? undefined,
-        priority: cause.priority ?? undefined,
-      });
+      const done = await updateCause(db, member, cause.id, { ...editOf(cause), parentId });
       return done.changed.length
         ? `Moved “${cause.name}” under “${done.movedUnder}”. Knowledge base now at version ${done.kbVersion}.`
         : `“${cause.name}” is there already.`;

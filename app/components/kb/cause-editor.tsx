@@ -1,19 +1,12 @@
 // A senior's editor of one cause: its words, figures and place in the tree, and its retirement.
 // Folded, so the page reads first.
 import { Form, useNavigation } from "react-router";
-import {
-  type CAUSE_LEVELS,
-  PRIORITIES,
-  PRIORITY_COPY,
-  type Priority,
-  SYSTEM_LABEL,
-} from "~/domain/knowledge";
-import type { Applicability } from "~/domain/knowledge";
+import { type Applicability, type CAUSE_LEVELS, type Priority, SYSTEM_LABEL } from "~/domain/knowledge";
 import { DRIVETRAIN_LABEL, DRIVETRAINS, FUEL_LABEL, FUEL_TYPES, type UnitSystem } from "~/domain/vehicles";
 import type { FormErrors } from "~/http/forms";
 import { KM_PER_MILE, mileageUnit } from "~/measure/mileage";
 import { describedBy, FieldError } from "../ui/form-errors";
-import { ConfirmBox, EditorFold, TextField } from "./editor";
+import { ConfirmBox, EditorFold, PrioritySelect, TextField } from "./editor";
 
 type CauseRow = {
   level: (typeof CAUSE_LEVELS)[number];
@@ -106,21 +99,7 @@ export function CauseEditor({
             {figure("baseRate", "Base rate (relative frequency)")}
             {figure("repairMinutes", "Repair, minutes of labour")}
             {figure("partsCost", "Parts, typical cost")}
-            <label className="grid gap-1 text-sm font-medium" htmlFor="edit-priority">
-              Priority for the owner
-              <select
-                id="edit-priority"
-                name="priority"
-                defaultValue={cause.priority ?? "soon"}
-                className="field"
-              >
-                {PRIORITIES.map((x) => (
-                  <option key={x} value={x}>
-                    {PRIORITY_COPY[x].label}
-                  </option>
-                ))}
-              </select>
-            </label>
+            <PrioritySelect id="edit-priority" name="priority" value={cause.priority ?? "soon"} />
           </div>
         ) : null}
         {leaf ? <ApplicabilityFields applies={cause.applicability} errors={errors} units={units} /> : null}

@@ -3,6 +3,7 @@
 // message under it.
 import type { ReactNode } from "react";
 import { href, Link } from "react-router";
+import { PRIORITIES, PRIORITY_COPY, type Priority } from "~/domain/knowledge";
 import type { FormErrors } from "~/http/forms";
 import { Fold } from "../fold";
 import { describedBy, FieldError } from "../ui/form-errors";
@@ -111,5 +112,21 @@ export function ConfirmBox({
       </label>
       <FieldError errors={errors} name={field} />
     </>
+  );
+}
+
+/** The owner-facing priority of a failure mode, as every knowledge-base form asks for it. */
+export function PrioritySelect({ id, name, value }: { id: string; name: string; value: Priority }) {
+  return (
+    <label className="grid gap-1 text-sm font-medium" htmlFor={id}>
+      Priority for the owner
+      <select id={id} name={name} defaultValue={value} className="field">
+        {PRIORITIES.map((x) => (
+          <option key={x} value={x}>
+            {PRIORITY_COPY[x].label}
+          </option>
+        ))}
+      </select>
+    </label>
   );
 }

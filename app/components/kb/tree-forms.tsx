@@ -1,10 +1,10 @@
 // The forms on a cause's page that grow and prune the tree: add a component or failure mode under
 // it, link it to a symptom or check it does not have yet, merge it into another of its level.
 import { Form, useNavigation } from "react-router";
-import { PRIORITIES, PRIORITY_COPY, SYSTEM_LABEL } from "~/domain/knowledge";
+import { SYSTEM_LABEL } from "~/domain/knowledge";
 import type { FormErrors } from "~/http/forms";
 import { describedBy, FieldError } from "../ui/form-errors";
-import { ConfirmBox, EditorFold, TextField } from "./editor";
+import { ConfirmBox, EditorFold, PrioritySelect, TextField } from "./editor";
 import { STRENGTH_WORDS_LIST } from "./strength-editor";
 
 type Level = "system" | "component" | "failure_mode";
@@ -52,16 +52,7 @@ export function AddChildForm({ level, errors }: { level: Level; errors: FormErro
             {field("newBaseRate", "Base rate (relative frequency)", 0, "decimal")}
             {field("newRepairMinutes", "Repair, minutes of labour", 0, "numeric")}
             {field("newPartsCost", "Parts, typical cost", 0, "decimal")}
-            <label className="grid gap-1 text-sm font-medium" htmlFor="add-newPriority">
-              Priority for the owner
-              <select id="add-newPriority" name="newPriority" defaultValue="soon" className="field">
-                {PRIORITIES.map((x) => (
-                  <option key={x} value={x}>
-                    {PRIORITY_COPY[x].label}
-                  </option>
-                ))}
-              </select>
-            </label>
+            <PrioritySelect id="add-newPriority" name="newPriority" value="soon" />
           </div>
         ) : null}
         <div>

@@ -30,18 +30,14 @@ export async function loader({ params, context }: Route.LoaderArgs) {
   const found = await causeWithLinks(db, member.workshopId, params.causeId);
   const mayEdit = can(member.role, "kb:edit");
   const editable = mayEdit && !found.cause.retiredAt;
-  const [workshop, history, parents, choices] = await Promise.all([
+  const merged = found.cause.mergedIntoId;
+  const [workshop, history, parents, choices, mergedInto] = await Promise.all([
     getWorkshop(db, member.workshopId),
     itemHistory(db, member.workshopId, found.cause.id),
     mayEdit ? possibleParents(db, member.workshopId, found.cause.level) : [],
     editable ? treeChoices(db, member.workshopId, found.cause) : null,
+    merged ? findCause(db, member.workshopId, merged).then((c) => ({ id: c.id, name: c.name })) : null,
   ]);
-  const mergedInto = found.cause.mergedIntoId
-    ? await findCause(db, member.workshopId, found.cause.mergedIntoId).then((c) => ({
-        id: c.id,
-        name: c.name,
-      }))
-    : null;
   return {
     ...found,
     currency: workshop.currency,

@@ -3,8 +3,9 @@ import { z } from "zod";
 import { memberContext, requirePermission } from "~/auth/guards.server";
 import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";
 import { ImpactPreview } from "~/components/kb/impact-preview";
+import { PrioritySelect } from "~/components/kb/editor";
 import { formatDate } from "~/domain/format";
-import { PRIORITIES, PRIORITY_COPY, SYMPTOM_KIND_LABEL, SYMPTOM_KINDS } from "~/domain/knowledge";
+import { PRIORITIES, SYMPTOM_KIND_LABEL, SYMPTOM_KINDS } from "~/domain/knowledge";
 import { describeStrength, readStrength } from "~/domain/link-strength";
 import { can } from "~/domain/permissions";
 import { PROPOSAL_KINDS, PROPOSAL_STATE_LABEL } from "~/domain/proposals";
@@ -169,16 +170,7 @@ export default function Proposals({ loaderData, actionData }: Route.ComponentPro
                     <FieldError errors={errors} name={comment} />
                   </label>
                   {p.kind === "cause" ? (
-                    <label className="grid gap-1 text-sm font-medium" htmlFor={`priority-${p.id}`}>
-                      Priority for the owner
-                      <select id={`priority-${p.id}`} name="priority" defaultValue="soon" className="field">
-                        {PRIORITIES.map((x) => (
-                          <option key={x} value={x}>
-                            {PRIORITY_COPY[x].label}
-                          </option>
-                        ))}
-                      </select>
-                    </label>
+                    <PrioritySelect id={`priority-${p.id}`} name="priority" value="soon" />
                   ) : null}
                   {p.kind === "symptom" ? (
                     <label className="grid gap-1 text-sm font-medium" htmlFor={`symptom-kind-${p.id}`}>
