@@ -4,6 +4,7 @@
 set -euo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/.."
 bash scripts/ensure-deps.sh
+bash scripts/ensure-chromium.sh # the case-page bench measures in Chromium
 export NODE_ENV=production
 for f in tests/bench/*.bench.ts; do
   echo "== $f"

@@ -8,14 +8,7 @@ export NO_COLOR=1 FORCE_COLOR=0 CI="${CI:-}"
 
 bash scripts/ensure-deps.sh || exit 1
 
-if [ ! -x "${CHROMIUM_PATH:-/usr/bin/chromium}" ]; then
-  if [ "$(id -u)" = 0 ]; then
-    echo "Installing Debian's chromium for the browser tests…" >&2
-    (apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium >/dev/null) || { echo "chromium install failed" >&2; exit 1; }
-  else
-    echo "Chromium is missing: sudo apt-get update && sudo apt-get install -y chromium" >&2; exit 1
-  fi
-fi
+bash scripts/ensure-chromium.sh || exit 1
 
 # A cluster of its own, fsync off, wiped at the start of every run.
 export RL_PG_PORT="${RL_TEST_PG_PORT:-54339}"
