@@ -9,3 +9,5 @@ export * from "./people";
 export * from "./permissions";
 export * from "./readings";
 export * from "./vehicles";
+export * from "./owner-side";
+export * from "./estimate-document";

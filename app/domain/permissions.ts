@@ -19,6 +19,8 @@ export const PERMISSIONS = [
   "owner:manage", // owners, vehicles, bookings
   "estimate:manage",
   "payment:take",
+  "payment:refund",
+  "mail:read", // the mail the app has sent and queued
   "member:manage",
   "settings:manage",
   "audit:read",
@@ -58,6 +60,8 @@ export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
     "audit:read",
     "data:export",
     "owner:manage",
+    "payment:refund",
+    "mail:read",
   ],
 };
 

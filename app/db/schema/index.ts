@@ -8,4 +8,5 @@ export * from "./audit";
 export * from "./proposals";
 export * from "./versions";
 export * from "./test-cases";
+export * from "./owner-side";
 export * from "./relations";

@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { check, char, integer, numeric, pgTable, text } from "drizzle-orm/pg-core";
+import { boolean, check, char, integer, numeric, pgTable, text } from "drizzle-orm/pg-core";
 import { unitSystemEnum } from "./enums";
 import { createdAt, id, updatedAt } from "./helpers";
 
@@ -13,6 +13,8 @@ export const workshops = pgTable(
     currency: char("currency", { length: 3 }).notNull(), // ISO 4217
     taxRate: numeric("tax_rate", { precision: 5, scale: 4, mode: "number" }).notNull(),
     units: unitSystemEnum("units").notNull().default("metric"),
+    // Whether the advisor types prices with tax in (a retail habit) or before tax (a trade one).
+    pricesIncludeTax: boolean("prices_include_tax").notNull().default(false),
     labourRatePerHour: numeric("labour_rate_per_hour", { precision: 10, scale: 2, mode: "number" }).notNull(),
     // Bumped on every knowledge-base change, so caches (Quick find index, resolved models) know when to rebuild.
     kbVersion: integer("kb_version").notNull().default(1),
