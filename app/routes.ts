@@ -7,11 +7,13 @@ export default [
   route("auth/github", "routes/auth/github.tsx"),
   route("auth/github/callback", "routes/auth/callback.tsx"),
   route("welcome", "routes/auth/welcome.tsx"),
+  route("o/:token", "routes/owner/estimate.tsx"),
   layout("routes/app/layout.tsx", [
     route("board", "routes/board/board.tsx"),
     route("cases", "routes/cases/list.tsx"),
     route("cases/new", "routes/cases/new.tsx"),
     route("cases/:caseId", "routes/cases/workbench.tsx"),
+    route("cases/:caseId/estimate", "routes/cases/estimate.tsx"),
     route("kb", "routes/kb/overview.tsx"),
     route("kb/export", "routes/kb/export.ts"),
     route("kb/proposals", "routes/kb/proposals.tsx"),

@@ -7,7 +7,8 @@ import type { Permission } from "~/domain/permissions";
 //   no-workshop  signed in and not yet a member anywhere
 //   member       any active member of a workshop
 //   Permission   a member whose role has it
-export type RouteAccessLevel = "public" | "account" | "no-workshop" | "member" | Permission;
+//   owner-link   whoever holds a live owner link (its token is the permission; no session opens it)
+export type RouteAccessLevel = "public" | "account" | "no-workshop" | "member" | "owner-link" | Permission;
 
 export type RouteAccess = {
   path: string; // a concrete URL to try; {case} is an open demo case of the Bramblegate workshop, {check} one of its checks, {cause} one of its failure modes, {symptom} one of its symptoms
@@ -23,10 +24,12 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
   "routes/auth/sign-out.tsx": { path: "/sign-out", POST: "public" },
   "routes/auth/github.tsx": { path: "/auth/github", POST: "public" },
   "routes/auth/callback.tsx": { path: "/auth/github/callback", GET: "public" },
+  "routes/owner/estimate.tsx": { path: "/o/not-a-live-token", GET: "owner-link", POST: "owner-link" },
   "routes/auth/welcome.tsx": { path: "/welcome", GET: "no-workshop", POST: "no-workshop" },
   "routes/app/layout.tsx": { path: "/board", GET: "member" },
   "routes/board/board.tsx": { path: "/board", GET: "case:read" },
   "routes/cases/list.tsx": { path: "/cases", GET: "case:read" },
+  "routes/cases/estimate.tsx": { path: "/cases/{case}/estimate", record: true, GET: "case:read", POST: "estimate:manage" },
   "routes/kb/overview.tsx": { path: "/kb", GET: "kb:read" },
   "routes/kb/export.ts": { path: "/kb/export", GET: "kb:read" },
   "routes/kb/symptom-new.tsx": { path: "/kb/symptoms/new", GET: "kb:edit", POST: "kb:edit" },

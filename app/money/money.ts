@@ -1,4 +1,6 @@
 // Money as integer minor units (pence, cents) with the currency beside it. Pure and browser-safe.
+import { formatMoney } from "~/domain/format";
+
 
 /** How many minor-unit digits a currency has (GBP 2, JPY 0), from the platform's ISO 4217 data. */
 export function minorDigits(currency: string): number {
@@ -21,13 +23,9 @@ export function divRound(n: number, d: number): number {
   return sign * (2 * r >= d ? q + 1 : q) || 0;
 }
 
-const formatters = new Map<string, Intl.NumberFormat>();
-/** 12345 GBP → "£123.45", in the workshop's currency. */
-export function formatMoney(minor: number, currency: string, locale = "en-GB"): string {
-  const key = `${locale}|${currency}`;
-  let f = formatters.get(key);
-  if (!f) formatters.set(key, (f = new Intl.NumberFormat(locale, { style: "currency", currency })));
-  return f.format(minor / 10 ** minorDigits(currency));
+/** 12345 GBP → "£123.45": minor units through the one currency formatter (domain/format.ts, major units). */
+export function formatMinor(minor: number, currency: string, locale = "en-GB"): string {
+  return formatMoney(minor / 10 ** minorDigits(currency), currency, locale);
 }
 
 /**

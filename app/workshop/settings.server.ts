@@ -13,6 +13,7 @@ export async function getWorkshop(db: Db, workshopId: string) {
       taxRate: workshops.taxRate,
       units: workshops.units,
       labourRatePerHour: workshops.labourRatePerHour,
+      pricesIncludeTax: workshops.pricesIncludeTax,
     })
     .from(workshops)
     .where(eq(workshops.id, workshopId));
@@ -26,6 +27,7 @@ export type WorkshopSettingsInput = {
   taxRate: number;
   units: "metric" | "imperial";
   labourRatePerHour: number;
+  pricesIncludeTax: boolean;
 };
 
 export async function updateWorkshop(

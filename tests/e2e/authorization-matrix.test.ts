@@ -78,6 +78,8 @@ type Want = "allowed" | "sign-in" | "welcome" | "forbidden" | "has-workshop" | "
 
 function expected(access: RouteAccessLevel, actor: Actor, rule: RouteAccess): Want {
   if (access === "public") return "allowed";
+  // Only a live token opens an owner's page; the matrix holds none, so everyone meets the 404.
+  if (access === "owner-link") return "not-found";
   if (actor.kind === "anonymous") return "sign-in";
   // Another workshop's record does not exist for this member, whatever their role.
   if (rule.record && actor.kind === "member" && actor.workshop !== "bramblegate") return "not-found";

@@ -29,6 +29,11 @@ const SettingsSchema = z.object({
   labourRatePerHour: decimal("Labour rate is a number, such as 84 or 1,250.50").pipe(
     z.number().min(0, "Labour rate cannot be negative").max(10_000, "Labour rate is at most 10,000 per hour"),
   ),
+  // A checkbox sends "on" when ticked and nothing when not.
+  pricesIncludeTax: z
+    .literal("on")
+    .optional()
+    .transform((v) => v === "on"),
 });
 
 export async function loader({ context }: Route.LoaderArgs) {
@@ -101,6 +106,7 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
       ["Tax rate", formatPercent(w.taxRate, 1)],
       ["Units", UNIT_SYSTEM_LABEL[w.units]],
       ["Labour rate", `${formatMoney(w.labourRatePerHour, w.currency)} per hour`],
+      ["Prices are typed", w.pricesIncludeTax ? "with tax included" : "before tax"],
     ];
     return (
       <div>
@@ -171,6 +177,15 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
             {...describedBy(errors, "labourRatePerHour")}
           />
           {err("labourRatePerHour")}
+        </label>
+        <label className="flex min-h-tap items-center gap-3 font-medium">
+          <input
+            type="checkbox"
+            name="pricesIncludeTax"
+            defaultChecked={w.pricesIncludeTax}
+            className="size-5"
+          />
+          Estimate prices are typed with tax included
         </label>
         <button
           type="submit"

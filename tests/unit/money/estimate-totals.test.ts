@@ -1,6 +1,6 @@
 import { fraction, multiply, round } from "mathjs";
 import { describe, expect, it } from "vitest";
-import { divRound, formatMoney, lineAmount, minorDigits, parseMoney, parseQuantity, totals } from "~/money";
+import { divRound, formatMinor, lineAmount, minorDigits, parseMoney, parseQuantity, totals } from "~/money";
 
 // VAT standard rate 20 % (UK since 4 January 2011) and the VAT fraction 1/6 of a VAT-inclusive
 // price at that rate: HM Revenue & Customs, VAT rates guidance. Rounding of VAT to the nearest
@@ -97,6 +97,6 @@ describe("typed amounts", () => {
     expect(parseMoney("1.5", "JPY")).toEqual({ error: "This currency has no decimals." });
     expect(parseQuantity("1.5")).toEqual({ milli: 1500 });
     expect(parseQuantity("0")).toHaveProperty("error");
-    expect(formatMoney(123_450, "GBP")).toBe("£1,234.50");
+    expect(formatMinor(123_450, "GBP")).toBe("£1,234.50");
   });
 });

@@ -1,0 +1,21 @@
+// Where a case stands with its owner, from the newest sent estimate, its link and its payment. Pure.
+import type { Decision, OwnerState, PaymentStatus } from "~/domain/owner-side";
+
+export type OwnerFacts = {
+  sent: boolean;
+  opened: boolean;
+  // The owner's word per item they could decide on (items owed in any case are left out).
+  decisions: readonly Decision[] | null;
+  payment: PaymentStatus | null;
+};
+
+export function ownerState(f: OwnerFacts): OwnerState {
+  if (!f.sent) return "not_sent";
+  if (f.payment === "paid") return "paid";
+  if (f.decisions) {
+    const approved = f.decisions.filter((d) => d === "approved").length;
+    if (approved === 0) return "declined";
+    return approved === f.decisions.length ? "approved_all" : "approved_some";
+  }
+  return f.opened ? "opened" : "sent";
+}
