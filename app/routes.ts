@@ -10,6 +10,7 @@ export default [
   route("o/:token", "routes/owner/estimate.tsx"),
   layout("routes/app/layout.tsx", [
     route("board", "routes/board/board.tsx"),
+    route("desk", "routes/desk/desk.tsx"),
     route("cases", "routes/cases/list.tsx"),
     route("cases/new", "routes/cases/new.tsx"),
     route("cases/:caseId", "routes/cases/workbench.tsx"),

@@ -13,6 +13,7 @@ export type OpenCaseInput = {
   newVehicle?: {
     ownerName: string;
     ownerPhone?: string;
+    ownerEmail?: string;
     registration: string;
     vin?: string;
     make: string;
@@ -49,7 +50,12 @@ export async function openCase(db: Db, member: CurrentMember, input: OpenCaseInp
         );
       const [o] = await tx
         .insert(owners)
-        .values({ workshopId: member.workshopId, name: nv.ownerName, phone: nv.ownerPhone ?? null })
+        .values({
+          workshopId: member.workshopId,
+          name: nv.ownerName,
+          phone: nv.ownerPhone ?? null,
+          email: nv.ownerEmail ?? null,
+        })
         .returning({ id: owners.id });
       const [v] = await tx
         .insert(vehicles)

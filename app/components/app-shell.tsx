@@ -7,6 +7,7 @@ import { GlobalQuickFind } from "./global-quick-find";
 type Area = { to: string; label: string; needs: Permission | null };
 // The areas of the workbench; an area a role cannot use is not shown at all.
 const AREAS: Area[] = [
+  { to: href("/desk"), label: "Front desk", needs: "estimate:manage" },
   { to: href("/board"), label: "Board", needs: "case:read" },
   { to: href("/cases"), label: "Cases", needs: "case:read" },
   { to: href("/kb"), label: "Knowledge base", needs: "kb:read" },

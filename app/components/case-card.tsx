@@ -1,6 +1,7 @@
 import { href, Link } from "react-router";
 import type { CaseListItem } from "~/cases/list.server";
 import { formatDate, STATE_LABEL } from "~/domain/format";
+import { OWNER_STATE_LABEL } from "~/domain/owner-side";
 
 export function CaseCard({
   c,
@@ -17,7 +18,7 @@ export function CaseCard({
     | "openedAt"
     | "needsSenior"
     | "conclusion"
-  > & { question?: CaseListItem["question"] };
+  > & { question?: CaseListItem["question"]; ownerState?: CaseListItem["ownerState"] };
 }) {
   return (
     <article className="rounded-card border border-rule bg-card p-4" aria-labelledby={`case-${c.id}`}>
@@ -34,6 +35,18 @@ export function CaseCard({
       {c.conclusion ? (
         <p className="mt-2 text-sm">
           Cause: <strong>{c.conclusion}</strong>
+        </p>
+      ) : null}
+      {c.ownerState && (c.state === "concluded" || c.ownerState !== "not_sent") ? (
+        <p className="mt-2 flex flex-wrap items-center justify-between gap-2 text-sm">
+          <span data-owner-state={c.ownerState}>{OWNER_STATE_LABEL[c.ownerState]}</span>
+          <Link
+            to={href("/cases/:caseId/estimate", { caseId: c.id })}
+            className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+          >
+            {c.ownerState === "not_sent" ? "Build the estimate" : "Estimate"}
+            <span className="sr-only"> for case {c.number}</span>
+          </Link>
         </p>
       ) : null}
       {c.question ? (

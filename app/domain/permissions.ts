@@ -74,6 +74,6 @@ export const ROLE_HOME: Record<Role, string> = {
   apprentice: "/board",
   technician: "/board",
   senior: "/board",
-  advisor: "/cases",
+  advisor: "/desk",
   admin: "/settings",
 };

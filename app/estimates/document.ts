@@ -7,8 +7,19 @@ import { describeRule } from "~/measure";
 import type { UnitSystem } from "~/domain/vehicles";
 import { lineAmount, type PricedLine, totals } from "~/money";
 
-export type DraftLine = PricedLine & { id: string; kind: EstimateLineKind; description: string; partNumber: string | null };
-export type DraftItem = { id: string; title: string; priority: Priority; required: boolean; lines: DraftLine[] };
+export type DraftLine = PricedLine & {
+  id: string;
+  kind: EstimateLineKind;
+  description: string;
+  partNumber: string | null;
+};
+export type DraftItem = {
+  id: string;
+  title: string;
+  priority: Priority;
+  required: boolean;
+  lines: DraftLine[];
+};
 
 type Evidence = {
   failed: { name: string; reading: string | null; rule: string | null }[];
@@ -68,7 +79,10 @@ export function sentItems(items: readonly DraftItem[]): SentItem[] {
 }
 
 /** The totals of the items the owner approved (and those owed whatever they decide). */
-export function totalsOf(doc: Pick<SentEstimateDocument, "items" | "pricesIncludeTax">, approved?: ReadonlySet<string>) {
+export function totalsOf(
+  doc: Pick<SentEstimateDocument, "items" | "pricesIncludeTax">,
+  approved?: ReadonlySet<string>,
+) {
   const chosen = doc.items.filter((i) => i.required || !approved || approved.has(i.id));
   return totals(
     chosen.flatMap((i) => i.lines),
@@ -79,18 +93,29 @@ export function totalsOf(doc: Pick<SentEstimateDocument, "items" | "pricesInclud
 /** What the owner pays online: the diagnostic fee items (owed in any case), tax included. */
 export function depositOf(doc: Pick<SentEstimateDocument, "items" | "pricesIncludeTax">) {
   const owed = doc.items.filter((i) => i.required);
-  return owed.length ? totals(owed.flatMap((i) => i.lines), doc.pricesIncludeTax).gross : 0;
+  return owed.length
+    ? totals(
+        owed.flatMap((i) => i.lines),
+        doc.pricesIncludeTax,
+      ).gross
+    : 0;
 }
 
 /** Problems that stop a send, by field: nothing to approve, an item without lines, a total below zero. */
-export function sendProblems(items: readonly DraftItem[], ownerEmail: string | null): Record<string, string[]> {
+export function sendProblems(
+  items: readonly DraftItem[],
+  ownerEmail: string | null,
+): Record<string, string[]> {
   const problems: Record<string, string[]> = {};
   if (!ownerEmail) problems.form = ["The owner has no e-mail address: add one to the owner's record first."];
   if (!items.some((i) => !i.required && i.lines.length > 0))
     (problems.form ??= []).push("Add at least one item of work for the owner to approve.");
   const empty = items.filter((i) => i.lines.length === 0).map((i) => i.title);
   if (empty.length) (problems.form ??= []).push(`These items have no lines yet: ${empty.join(", ")}.`);
-  const t = totals(items.flatMap((i) => i.lines), false);
+  const t = totals(
+    items.flatMap((i) => i.lines),
+    false,
+  );
   if (t.net < 0) (problems.form ??= []).push("The discounts are larger than the work.");
   return problems;
 }

@@ -22,7 +22,12 @@ export async function loadDraft(db: Db | Tx, workshopId: string, caseId: string)
     ? await db
         .select()
         .from(estimateLines)
-        .where(inArray(estimateLines.itemId, items.map((i) => i.id)))
+        .where(
+          inArray(
+            estimateLines.itemId,
+            items.map((i) => i.id),
+          ),
+        )
         .orderBy(asc(estimateLines.position), asc(estimateLines.createdAt))
     : [];
   return items.map((i) => ({
@@ -64,7 +69,14 @@ export async function draftFromCause(db: Db, who: Who, c: EstimateCase) {
       const minutes = await checkMinutes(tx, c.id);
       const [fee] = await tx
         .insert(estimateItems)
-        .values({ workshopId: who.workshopId, caseId: c.id, title: "Diagnosis", priority: "soon", required: true, position })
+        .values({
+          workshopId: who.workshopId,
+          caseId: c.id,
+          title: "Diagnosis",
+          priority: "soon",
+          required: true,
+          position,
+        })
         .returning({ id: estimateItems.id });
       await tx.insert(estimateLines).values({
         workshopId: who.workshopId,
@@ -126,14 +138,26 @@ export async function draftFromCause(db: Db, who: Who, c: EstimateCase) {
   });
 }
 
-export async function addItem(db: Db, who: Who, caseId: string, input: { title: string; priority: Priority }) {
+export async function addItem(
+  db: Db,
+  who: Who,
+  caseId: string,
+  input: { title: string; priority: Priority },
+) {
   return db.transaction(async (tx) => {
     const position = await nextPosition(tx, caseId);
     const [row] = await tx
       .insert(estimateItems)
       .values({ workshopId: who.workshopId, caseId, ...input, position })
       .returning({ id: estimateItems.id });
-    await audit(tx, { workshopId: who.workshopId, actorUserId: who.userId, action: "estimate.item-add", entity: "case", entityId: caseId, after: input });
+    await audit(tx, {
+      workshopId: who.workshopId,
+      actorUserId: who.userId,
+      action: "estimate.item-add",
+      entity: "case",
+      entityId: caseId,
+      after: input,
+    });
     return row.id;
   });
 }
@@ -153,14 +177,30 @@ export async function addLine(db: Db, who: Who, caseId: string, line: LineInput)
     const [item] = await tx
       .select({ id: estimateItems.id })
       .from(estimateItems)
-      .where(and(eq(estimateItems.id, line.itemId), eq(estimateItems.caseId, caseId), eq(estimateItems.workshopId, who.workshopId)));
-    if (!item) refuse(404, "That item is not on this estimate.", { errors: { itemId: ["Choose an item of this estimate."] } });
+      .where(
+        and(
+          eq(estimateItems.id, line.itemId),
+          eq(estimateItems.caseId, caseId),
+          eq(estimateItems.workshopId, who.workshopId),
+        ),
+      );
+    if (!item)
+      refuse(404, "That item is not on this estimate.", {
+        errors: { itemId: ["Choose an item of this estimate."] },
+      });
     const [{ n }] = await tx
       .select({ n: sql<number>`count(*)::int` })
       .from(estimateLines)
       .where(eq(estimateLines.itemId, line.itemId));
     await tx.insert(estimateLines).values({ workshopId: who.workshopId, ...line, position: n });
-    await audit(tx, { workshopId: who.workshopId, actorUserId: who.userId, action: "estimate.line-add", entity: "case", entityId: caseId, after: line });
+    await audit(tx, {
+      workshopId: who.workshopId,
+      actorUserId: who.userId,
+      action: "estimate.line-add",
+      entity: "case",
+      entityId: caseId,
+      after: line,
+    });
   });
 }
 
@@ -171,7 +211,10 @@ export async function removeLine(db: Db, who: Who, caseId: string, lineId: strin
       and(
         eq(estimateLines.id, lineId),
         eq(estimateLines.workshopId, who.workshopId),
-        inArray(estimateLines.itemId, db.select({ id: estimateItems.id }).from(estimateItems).where(eq(estimateItems.caseId, caseId))),
+        inArray(
+          estimateLines.itemId,
+          db.select({ id: estimateItems.id }).from(estimateItems).where(eq(estimateItems.caseId, caseId)),
+        ),
       ),
     )
     .returning({ id: estimateLines.id });
@@ -181,7 +224,13 @@ export async function removeLine(db: Db, who: Who, caseId: string, lineId: strin
 export async function removeItem(db: Db, who: Who, caseId: string, itemId: string) {
   const gone = await db
     .delete(estimateItems)
-    .where(and(eq(estimateItems.id, itemId), eq(estimateItems.caseId, caseId), eq(estimateItems.workshopId, who.workshopId)))
+    .where(
+      and(
+        eq(estimateItems.id, itemId),
+        eq(estimateItems.caseId, caseId),
+        eq(estimateItems.workshopId, who.workshopId),
+      ),
+    )
     .returning({ id: estimateItems.id });
   if (!gone.length) refuse(404, "That item is not on this estimate.");
 }

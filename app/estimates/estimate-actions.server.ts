@@ -16,7 +16,11 @@ const text = (label: string, max: number) =>
 
 const Intent = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("draft") }),
-  z.object({ intent: z.literal("add-item"), title: text("A title", 120), priority: z.enum(PRIORITIES, { message: "Choose a priority." }) }),
+  z.object({
+    intent: z.literal("add-item"),
+    title: text("A title", 120),
+    priority: z.enum(PRIORITIES, { message: "Choose a priority." }),
+  }),
   z.object({
     intent: z.literal("add-line"),
     itemId: z.uuid({ message: "Choose the item this line belongs to." }),
@@ -29,11 +33,22 @@ const Intent = z.discriminatedUnion("intent", [
   }),
   z.object({ intent: z.literal("remove-line"), lineId: z.uuid({ message: "No such line." }) }),
   z.object({ intent: z.literal("remove-item"), itemId: z.uuid({ message: "No such item." }) }),
-  z.object({ intent: z.literal("send"), message: z.string().trim().max(2000, "The message is at most 2,000 characters.").default("") }),
+  z.object({
+    intent: z.literal("send"),
+    message: z.string().trim().max(2000, "The message is at most 2,000 characters.").default(""),
+  }),
   z.object({ intent: z.literal("revoke") }),
 ]);
 
-export const ESTIMATE_INTENTS = ["draft", "add-item", "add-line", "remove-line", "remove-item", "send", "revoke"] as const;
+export const ESTIMATE_INTENTS = [
+  "draft",
+  "add-item",
+  "add-line",
+  "remove-line",
+  "remove-item",
+  "send",
+  "revoke",
+] as const;
 
 export async function runEstimateForm(db: Db, member: CurrentMember, caseId: string, form: FormData) {
   const parsed = Intent.safeParse(Object.fromEntries(form));
@@ -43,7 +58,9 @@ export async function runEstimateForm(db: Db, member: CurrentMember, caseId: str
     switch (f.intent) {
       case "draft": {
         const made = await draftFromCause(db, member, await loadEstimateCase(db, member.workshopId, caseId));
-        return made ? `Drafted ${made === 1 ? "one item" : `${made} items`} from the confirmed cause: check every figure.` : "The draft already has those items.";
+        return made
+          ? `Drafted ${made === 1 ? "one item" : `${made} items`} from the confirmed cause: check every figure.`
+          : "The draft already has those items.";
       }
       case "add-item":
         await addItem(db, member, caseId, { title: f.title, priority: f.priority });
@@ -56,7 +73,11 @@ export async function runEstimateForm(db: Db, member: CurrentMember, caseId: str
         if ("error" in qty) errors.quantity = [qty.error];
         if ("error" in price) errors.unitPrice = [price.error];
         else if ((f.kind === "discount") !== price.minor < 0 && price.minor !== 0)
-          errors.unitPrice = [f.kind === "discount" ? "A discount is a negative amount, for example -20." : "Only a discount is negative."];
+          errors.unitPrice = [
+            f.kind === "discount"
+              ? "A discount is a negative amount, for example -20."
+              : "Only a discount is negative.",
+          ];
         if (Object.keys(errors).length) refuse(400, "Check the figures of the line.", { errors });
         await addLine(db, member, caseId, {
           itemId: f.itemId,
@@ -81,7 +102,9 @@ export async function runEstimateForm(db: Db, member: CurrentMember, caseId: str
       }
       case "revoke": {
         const n = await revokeOpenLinks(db, member, caseId, true);
-        return n ? "The owner's link no longer works. Send the estimate again to give them a new one." : "No link was open.";
+        return n
+          ? "The owner's link no longer works. Send the estimate again to give them a new one."
+          : "No link was open.";
       }
     }
   });

@@ -63,7 +63,12 @@ export async function loadEstimateCase(db: Db | Tx, workshopId: string, caseId: 
           .where(eq(causes.id, row.causeId))
       )[0]
     : undefined;
-  return { ...row, vehicleName: `${row.year} ${row.vehicle} ${row.model}`, cause, units: row.units as UnitSystem };
+  return {
+    ...row,
+    vehicleName: `${row.year} ${row.vehicle} ${row.model}`,
+    cause,
+    units: row.units as UnitSystem,
+  };
 }
 export type EstimateCase = Awaited<ReturnType<typeof loadEstimateCase>>;
 
@@ -104,4 +109,3 @@ export async function checkMinutes(db: Db | Tx, caseId: string) {
     .where(eq(findings.caseId, caseId));
   return rows.reduce((s, r) => s + r.minutes, 0);
 }
-

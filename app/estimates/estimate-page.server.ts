@@ -8,9 +8,15 @@ import { newestSent } from "./owner-answer.server";
 import { ownerState } from "./owner-state";
 
 /** Where the owner side of a case stands: the newest send, its link, the owner's answer. */
-export async function ownerSide(db: Db, workshopId: string, caseId: string, payment: "open" | "paid" | "refunded" | "flagged" | null = null) {
+export async function ownerSide(
+  db: Db,
+  workshopId: string,
+  caseId: string,
+  payment: "open" | "paid" | "refunded" | "flagged" | null = null,
+) {
   const newest = await newestSent(db, workshopId, caseId);
-  if (!newest) return { state: ownerState({ sent: false, opened: false, decisions: null, payment: null }), sent: null };
+  if (!newest)
+    return { state: ownerState({ sent: false, opened: false, decisions: null, payment: null }), sent: null };
   const { sent, links, decisions } = newest;
   const live = links.find((l) => !l.revokedAt && l.expiresAt.getTime() > Date.now());
   const opened = links.find((l) => l.firstOpenedAt);
@@ -62,7 +68,12 @@ export async function estimatePage(db: Db, member: CurrentMember, caseId: string
       ownerPhone: c.ownerPhone,
       cause: c.cause ? { name: c.cause.name, priority: c.cause.priority } : null,
     },
-    money: { currency: c.currency, taxRate: c.taxRate, pricesIncludeTax: c.pricesIncludeTax, labourRatePerHour: c.labourRatePerHour },
+    money: {
+      currency: c.currency,
+      taxRate: c.taxRate,
+      pricesIncludeTax: c.pricesIncludeTax,
+      labourRatePerHour: c.labourRatePerHour,
+    },
     items,
     totals: totals(
       items.flatMap((i) => i.lines),

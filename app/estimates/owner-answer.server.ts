@@ -57,7 +57,11 @@ export async function recordOpen(db: Db, found: OwnerLink) {
  * is refused (the workshop may send a new estimate). The case's technician and the advisor who
  * sent it are told by e-mail, queued in the same transaction.
  */
-export async function answerEstimate(db: Db, token: string, input: { decisions: Record<string, Decision>; note: string }) {
+export async function answerEstimate(
+  db: Db,
+  token: string,
+  input: { decisions: Record<string, Decision>; note: string },
+) {
   const found = await findOwnerLink(db, token);
   const doc = found.sent.document;
   const open = doc.items.filter((i) => !i.required);
@@ -72,10 +76,13 @@ export async function answerEstimate(db: Db, token: string, input: { decisions: 
       .from(sentEstimates)
       .where(eq(sentEstimates.id, found.sent.id))
       .for("update");
-    if (locked.answeredAt) refuse(409, "You have already answered this estimate. Call the workshop to change your answer.");
-    await tx.insert(ownerDecisions).values(
-      open.map((i) => ({ sentEstimateId: found.sent.id, itemId: i.id, decision: input.decisions[i.id] })),
-    );
+    if (locked.answeredAt)
+      refuse(409, "You have already answered this estimate. Call the workshop to change your answer.");
+    await tx
+      .insert(ownerDecisions)
+      .values(
+        open.map((i) => ({ sentEstimateId: found.sent.id, itemId: i.id, decision: input.decisions[i.id] })),
+      );
     await tx
       .update(sentEstimates)
       .set({ answeredAt: new Date(), ownerNote: input.note || null })

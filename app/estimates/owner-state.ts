@@ -19,3 +19,23 @@ export function ownerState(f: OwnerFacts): OwnerState {
   }
   return f.opened ? "opened" : "sent";
 }
+
+/** The newest send in counts, as one SQL read gives it for a list of cases; null when none was sent. */
+export type OwnerCounts = {
+  opened: boolean;
+  answered: boolean;
+  decided: number;
+  approved: number;
+  paid: boolean;
+};
+
+export function ownerStateOf(c: OwnerCounts | null): OwnerState {
+  if (!c) return "not_sent";
+  const decisions: Decision[] | null = c.answered
+    ? [
+        ...Array(Number(c.approved)).fill("approved"),
+        ...Array(Number(c.decided) - Number(c.approved)).fill("declined"),
+      ]
+    : null;
+  return ownerState({ sent: true, opened: c.opened, decisions, payment: c.paid ? "paid" : null });
+}

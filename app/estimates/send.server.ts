@@ -24,10 +24,12 @@ export const ownerLinkUrl = (token: string) => new URL(`/o/${token}`, env().APP_
 export async function sendEstimate(db: Db, who: Who, caseId: string, input: { message: string }) {
   return db.transaction(async (tx) => {
     const c = await loadEstimateCase(tx, who.workshopId, caseId);
-    if (c.state !== "concluded" || !c.cause) refuse(409, "Only a case with a confirmed cause can be sent to its owner.");
+    if (c.state !== "concluded" || !c.cause)
+      refuse(409, "Only a case with a confirmed cause can be sent to its owner.");
     const draft = await loadDraft(tx, who.workshopId, caseId);
     const problems = sendProblems(draft, c.ownerEmail);
-    if (Object.keys(problems).length) refuse(400, problems.form?.[0] ?? "The estimate is not ready.", { errors: problems });
+    if (Object.keys(problems).length)
+      refuse(400, problems.form?.[0] ?? "The estimate is not ready.", { errors: problems });
     const evidence = await evidenceFor(tx, caseId, c.cause.id);
     const document: SentEstimateDocument = {
       workshopName: c.workshopName,
@@ -50,7 +52,14 @@ export async function sendEstimate(db: Db, who: Who, caseId: string, input: { me
       .where(eq(sentEstimates.caseId, caseId));
     const [sent] = await tx
       .insert(sentEstimates)
-      .values({ workshopId: who.workshopId, caseId, version, document, toEmail: c.ownerEmail!, sentById: who.memberId })
+      .values({
+        workshopId: who.workshopId,
+        caseId,
+        version,
+        document,
+        toEmail: c.ownerEmail!,
+        sentById: who.memberId,
+      })
       .returning({ id: sentEstimates.id });
     await revokeOpenLinks(tx as unknown as Db, who, caseId);
     const { token, hash } = newOwnerToken();

@@ -1,7 +1,6 @@
 // Money as integer minor units (pence, cents) with the currency beside it. Pure and browser-safe.
 import { formatMoney } from "~/domain/format";
 
-
 /** How many minor-unit digits a currency has (GBP 2, JPY 0), from the platform's ISO 4217 data. */
 export function minorDigits(currency: string): number {
   return (

@@ -1,4 +1,4 @@
-import { Form } from "react-router";
+import { Form, Link } from "react-router";
 import type { ShownCause } from "~/cases/present-diagnosis";
 import { SENT_CAUSES } from "~/cases/shown";
 import { Fold } from "../fold";
@@ -29,10 +29,13 @@ export function ConfirmedCause({
   state,
   cause,
   notes,
+  estimate,
 }: {
   state: string;
   cause: string;
   notes: string | null;
+  /** The way to the owner side, once the cause is confirmed. */
+  estimate?: string;
 }) {
   const waiting = state === "awaiting_signoff";
   return (
@@ -46,6 +49,16 @@ export function ConfirmedCause({
       </h2>
       <p className="mt-2 text-lg font-semibold">{cause}</p>
       {notes ? <p className="mt-1 text-graphite-700">{notes}</p> : null}
+      {estimate && !waiting ? (
+        <p className="mt-2">
+          <Link
+            className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+            to={estimate}
+          >
+            Estimate for the owner
+          </Link>
+        </p>
+      ) : null}
     </section>
   );
 }

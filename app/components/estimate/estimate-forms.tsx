@@ -9,7 +9,12 @@ const field = "field mt-1 w-full";
 const primary = "min-h-tap rounded-lg bg-uv-600 px-5 font-semibold text-white hover:bg-uv-700";
 const plain = "min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper";
 
-function Input({ name, label, errors, ...rest }: { name: string; label: string; errors?: FormErrors } & React.InputHTMLAttributes<HTMLInputElement>) {
+function Input({
+  name,
+  label,
+  errors,
+  ...rest
+}: { name: string; label: string; errors?: FormErrors } & React.InputHTMLAttributes<HTMLInputElement>) {
   return (
     <label className="grid text-sm font-medium" htmlFor={`est-${name}`}>
       {label}
@@ -19,7 +24,15 @@ function Input({ name, label, errors, ...rest }: { name: string; label: string; 
   );
 }
 
-export function AddLineForm({ items, errors, currency }: { items: { id: string; title: string }[]; errors?: FormErrors; currency: string }) {
+export function AddLineForm({
+  items,
+  errors,
+  currency,
+}: {
+  items: { id: string; title: string }[];
+  errors?: FormErrors;
+  currency: string;
+}) {
   return (
     <Form method="post" className="grid gap-3 sm:grid-cols-2" noValidate>
       <input type="hidden" name="intent" value="add-line" />
@@ -47,8 +60,19 @@ export function AddLineForm({ items, errors, currency }: { items: { id: string; 
       </label>
       <Input name="description" label="Description" errors={errors} />
       <Input name="partNumber" label="Part number (optional)" errors={errors} />
-      <Input name="quantity" label="Quantity (hours for labour)" inputMode="decimal" defaultValue="1" errors={errors} />
-      <Input name="unitPrice" label={`Unit price (${currency}; a discount is negative)`} inputMode="decimal" errors={errors} />
+      <Input
+        name="quantity"
+        label="Quantity (hours for labour)"
+        inputMode="decimal"
+        defaultValue="1"
+        errors={errors}
+      />
+      <Input
+        name="unitPrice"
+        label={`Unit price (${currency}; a discount is negative)`}
+        inputMode="decimal"
+        errors={errors}
+      />
       <label className="flex min-h-tap items-center gap-3 text-sm font-medium sm:col-span-2">
         <input type="checkbox" name="zeroRated" className="size-5" />
         Zero-rated (no VAT on this line)
@@ -90,11 +114,19 @@ export function SendForm({ errors, to, again }: { errors?: FormErrors; to: strin
       <input type="hidden" name="intent" value="send" />
       <label className="grid text-sm font-medium" htmlFor="est-message">
         A message to the owner (optional)
-        <textarea id="est-message" name="message" rows={3} className={field} {...describedBy(errors, "message")} />
+        <textarea
+          id="est-message"
+          name="message"
+          rows={3}
+          className={field}
+          {...describedBy(errors, "message")}
+        />
         <FieldError errors={errors} name="message" />
       </label>
       <p className="text-sm text-graphite-700">
-        {to ? `Goes to ${to} as a link that works for 14 days.` : "The owner has no e-mail address on record."}
+        {to
+          ? `Goes to ${to} as a link that works for 14 days.`
+          : "The owner has no e-mail address on record."}
         {again ? " Sending again makes a new version; the link of the earlier one stops working." : ""}
       </p>
       <div>
@@ -117,12 +149,26 @@ export function RevokeForm() {
   );
 }
 
-export function RemoveButton({ intent, name, value, label }: { intent: string; name: string; value: string; label: string }) {
+export function RemoveButton({
+  intent,
+  name,
+  value,
+  label,
+}: {
+  intent: string;
+  name: string;
+  value: string;
+  label: string;
+}) {
   return (
     <Form method="post">
       <input type="hidden" name="intent" value={intent} />
       <input type="hidden" name={name} value={value} />
-      <button type="submit" className="min-h-tap rounded-lg px-3 text-sm text-stop underline" aria-label={label}>
+      <button
+        type="submit"
+        className="min-h-tap rounded-lg px-3 text-sm text-stop underline"
+        aria-label={label}
+      >
         Remove
       </button>
     </Form>

@@ -36,10 +36,13 @@ export function ItemCard({
               <span className="min-w-0 break-words">
                 <span className="text-sm text-graphite-700">{ESTIMATE_LINE_LABEL[l.kind]}: </span>
                 {l.description}
-                {l.partNumber ? <span className="text-sm text-graphite-700"> (part {l.partNumber})</span> : null}
+                {l.partNumber ? (
+                  <span className="text-sm text-graphite-700"> (part {l.partNumber})</span>
+                ) : null}
                 <span className="block text-sm text-graphite-700 tabular">
                   {formatQuantity(l.quantityMilli)}
-                  {l.kind === "labour" || l.kind === "diagnostic_fee" ? " h" : ""} × {formatMinor(l.unitMinor, currency)}
+                  {l.kind === "labour" || l.kind === "diagnostic_fee" ? " h" : ""} ×{" "}
+                  {formatMinor(l.unitMinor, currency)}
                   {l.taxRateBp === 0 ? ", no VAT" : `, VAT ${rateWords(l.taxRateBp)}`}
                 </span>
               </span>
@@ -72,7 +75,9 @@ export function TotalsTable({
   caption: string;
 }) {
   const row = (label: string, minor: number, strong = false) => (
-    <div className={`flex justify-between gap-4 py-1 ${strong ? "border-t border-rule pt-2 text-lg font-semibold" : ""}`}>
+    <div
+      className={`flex justify-between gap-4 py-1 ${strong ? "border-t border-rule pt-2 text-lg font-semibold" : ""}`}
+    >
       <dt>{label}</dt>
       <dd className="tabular">{formatMinor(minor, currency)}</dd>
     </div>
@@ -83,7 +88,9 @@ export function TotalsTable({
       <dl className="mt-2">
         {row("Before VAT", totals.net)}
         {totals.bands.map((b) => (
-          <div key={b.rateBp}>{row(`VAT at ${rateWords(b.rateBp)} on ${formatMinor(b.net, currency)}`, b.tax)}</div>
+          <div key={b.rateBp}>
+            {row(`VAT at ${rateWords(b.rateBp)} on ${formatMinor(b.net, currency)}`, b.tax)}
+          </div>
         ))}
         {row("Total", totals.gross, true)}
       </dl>

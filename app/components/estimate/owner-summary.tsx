@@ -14,7 +14,9 @@ export function OwnerHeader({ doc }: { doc: SentEstimateDocument }) {
       <p className="text-graphite-700">
         For {doc.ownerName} · case {doc.caseNumber} · you told us: “{doc.complaint}”
       </p>
-      {doc.message ? <p className="mt-2 whitespace-pre-line rounded-card border border-rule bg-card p-3">{doc.message}</p> : null}
+      {doc.message ? (
+        <p className="mt-2 whitespace-pre-line rounded-card border border-rule bg-card p-3">{doc.message}</p>
+      ) : null}
     </header>
   );
 }

@@ -7,7 +7,13 @@ import { runEstimateForm } from "~/estimates/estimate-actions.server";
 import { dbContext } from "~/http/context";
 import { FormMessages } from "~/components/ui/form-errors";
 import { ItemCard, TotalsTable } from "~/components/estimate/money-lines";
-import { AddItemForm, AddLineForm, RemoveButton, RevokeForm, SendForm } from "~/components/estimate/estimate-forms";
+import {
+  AddItemForm,
+  AddLineForm,
+  RemoveButton,
+  RevokeForm,
+  SendForm,
+} from "~/components/estimate/estimate-forms";
 import { OwnerStatus } from "~/components/estimate/owner-status";
 import { PriorityMark } from "~/components/priority";
 import { RouteErrorPage } from "~/components/error-page";
@@ -37,7 +43,10 @@ export default function Estimate({ loaderData, actionData }: Route.ComponentProp
     <div className="grid max-w-3xl gap-5">
       <div>
         <p>
-          <Link className="inline-flex min-h-tap items-center text-sm text-uv-700 underline" to={href("/cases/:caseId", { caseId: c.id })}>
+          <Link
+            className="inline-flex min-h-tap items-center text-sm text-uv-700 underline"
+            to={href("/cases/:caseId", { caseId: c.id })}
+          >
             Case {c.number}
           </Link>
         </p>
@@ -82,7 +91,10 @@ export default function Estimate({ loaderData, actionData }: Route.ComponentProp
           {mayEdit && c.cause ? (
             <Form method="post">
               <input type="hidden" name="intent" value="draft" />
-              <button type="submit" className="min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper">
+              <button
+                type="submit"
+                className="min-h-tap rounded-lg border border-rule px-4 font-medium hover:bg-paper"
+              >
                 Draft from the confirmed cause
               </button>
             </Form>
@@ -96,20 +108,37 @@ export default function Estimate({ loaderData, actionData }: Route.ComponentProp
             currency={money.currency}
             lineAction={
               mayEdit
-                ? (i) => <RemoveButton intent="remove-line" name="lineId" value={item.lineIds[i]} label={`Remove line ${item.lines[i].description}`} />
+                ? (i) => (
+                    <RemoveButton
+                      intent="remove-line"
+                      name="lineId"
+                      value={item.lineIds[i]}
+                      label={`Remove line ${item.lines[i].description}`}
+                    />
+                  )
                 : undefined
             }
             actions={
               mayEdit ? (
                 <div className="mt-2">
-                  <RemoveButton intent="remove-item" name="itemId" value={item.id} label={`Remove item ${item.title}`} />
+                  <RemoveButton
+                    intent="remove-item"
+                    name="itemId"
+                    value={item.id}
+                    label={`Remove item ${item.title}`}
+                  />
                 </div>
               ) : null
             }
           />
         ))}
         {items.length ? (
-          <TotalsTable totals={totals} currency={money.currency} pricesIncludeTax={money.pricesIncludeTax} caption="If the owner approves everything" />
+          <TotalsTable
+            totals={totals}
+            currency={money.currency}
+            pricesIncludeTax={money.pricesIncludeTax}
+            caption="If the owner approves everything"
+          />
         ) : null}
       </section>
       {mayEdit ? (

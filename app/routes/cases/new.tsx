@@ -18,6 +18,11 @@ const Fresh = z.object({
   mode: z.literal("new"),
   ownerName: z.string().trim().min(2, "The owner's name is needed"),
   ownerPhone: z.string().trim().max(40).optional(),
+  // Where the estimate and its link go; optional at the desk, needed before anything is sent.
+  ownerEmail: z
+    .union([z.literal(""), z.email({ message: "That e-mail address looks wrong" }).max(200)])
+    .optional()
+    .transform((v) => v || undefined),
   registration: z.string().trim().toUpperCase().min(2, "The registration is needed").max(15),
   vin: z
     .string()
@@ -89,6 +94,7 @@ const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 
 const NEW_FIELDS = [
   ["ownerName", "Owner's name"],
   ["ownerPhone", "Owner's phone"],
+  ["ownerEmail", "Owner's e-mail (for the estimate)"],
   ["registration", "Registration"],
   ["vin", "VIN (optional)"],
   ["make", "Make"],

@@ -1,3 +1,4 @@
+import { href } from "react-router";
 import { useQuery } from "@tanstack/react-query";
 import { useCallback, useEffect, useState } from "react";
 import { memberContext, requirePermission } from "~/auth/guards.server";
@@ -112,7 +113,12 @@ export default function Workbench({ loaderData, actionData }: Route.ComponentPro
   const causes = <LikelyCauses causes={d.causes} unlisted={d.unlisted} />;
   const ranking = concluded ? (
     <>
-      <ConfirmedCause state={c.state} cause={c.conclusionCause!} notes={c.conclusionNotes} />
+      <ConfirmedCause
+        state={c.state}
+        cause={c.conclusionCause!}
+        notes={c.conclusionNotes}
+        estimate={href("/cases/:caseId/estimate", { caseId: c.id })}
+      />
       {me.mayKeepTest ? <KeepTestCase number={c.number} errors={actionData?.errors} /> : null}
       <section className="rounded-card border border-rule bg-card p-4">
         <Fold

@@ -61,14 +61,25 @@ export default function OwnerEstimate({ loaderData, actionData }: Route.Componen
               currency={doc.currency}
               actions={
                 item.required ? null : answered ? (
-                  <p className="mt-2 font-semibold">{decisions[item.id] === "approved" ? "You approved this." : "You declined this."}</p>
+                  <p className="mt-2 font-semibold">
+                    {decisions[item.id] === "approved" ? "You approved this." : "You declined this."}
+                  </p>
                 ) : (
                   <fieldset className="mt-3 print:hidden" {...describedBy(errors, `item-${item.id}`)}>
                     <legend className="text-sm font-medium">Your answer for {item.title}</legend>
                     <div className="mt-1 flex flex-wrap gap-3">
                       {(["approved", "declined"] as const).map((d) => (
-                        <label key={d} className="flex min-h-tap min-w-32 items-center gap-2 rounded-lg border border-rule px-3">
-                          <input type="radio" name={`item-${item.id}`} value={d} className="size-5" required />
+                        <label
+                          key={d}
+                          className="flex min-h-tap min-w-32 items-center gap-2 rounded-lg border border-rule px-3"
+                        >
+                          <input
+                            type="radio"
+                            name={`item-${item.id}`}
+                            value={d}
+                            className="size-5"
+                            required
+                          />
                           {d === "approved" ? "Approve" : "Decline"}
                         </label>
                       ))}
@@ -79,32 +90,55 @@ export default function OwnerEstimate({ loaderData, actionData }: Route.Componen
               }
             />
           ))}
-          <TotalsTable totals={totalAll} currency={doc.currency} pricesIncludeTax={doc.pricesIncludeTax} caption="If you approve everything" />
+          <TotalsTable
+            totals={totalAll}
+            currency={doc.currency}
+            pricesIncludeTax={doc.pricesIncludeTax}
+            caption="If you approve everything"
+          />
           {totalApproved ? (
-            <TotalsTable totals={totalApproved} currency={doc.currency} pricesIncludeTax={doc.pricesIncludeTax} caption="What you approved, with what is owed" />
+            <TotalsTable
+              totals={totalApproved}
+              currency={doc.currency}
+              pricesIncludeTax={doc.pricesIncludeTax}
+              caption="What you approved, with what is owed"
+            />
           ) : null}
           {answered ? (
-            answered.note ? <p>Your note: “{answered.note}”</p> : null
+            answered.note ? (
+              <p>Your note: “{answered.note}”</p>
+            ) : null
           ) : (
             <div className="grid gap-3 print:hidden">
               <label className="grid text-sm font-medium" htmlFor="owner-note">
                 A note for the workshop (optional)
-                <textarea id="owner-note" name="note" rows={3} className="field mt-1" {...describedBy(errors, "note")} />
+                <textarea
+                  id="owner-note"
+                  name="note"
+                  rows={3}
+                  className="field mt-1"
+                  {...describedBy(errors, "note")}
+                />
                 <FieldError errors={errors} name="note" />
               </label>
-              <button type="submit" className="min-h-tap rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700">
+              <button
+                type="submit"
+                className="min-h-tap rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700"
+              >
                 Send my answer ({open.length} {open.length === 1 ? "item" : "items"})
               </button>
             </div>
           )}
         </Form>
         {deposit > 0 ? (
-          <p className="text-graphite-700">The diagnostic fee of {formatMinor(deposit, doc.currency)} is owed whatever you decide.</p>
+          <p className="text-graphite-700">
+            The diagnostic fee of {formatMinor(deposit, doc.currency)} is owed whatever you decide.
+          </p>
         ) : null}
       </section>
       <footer className="text-sm text-graphite-700">
-        This page is for {doc.ownerName} only and works until {formatDate(expiresAt)}. Prices and
-        work are as the workshop sent them; the maker&apos;s procedures and local rules decide how a repair is done.
+        This page is for {doc.ownerName} only and works until {formatDate(expiresAt)}. Prices and work are as
+        the workshop sent them; the maker&apos;s procedures and local rules decide how a repair is done.
       </footer>
     </main>
   );

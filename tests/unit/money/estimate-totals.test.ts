@@ -27,7 +27,12 @@ describe("rounding", () => {
 describe("tax on an estimate", () => {
   it("adds VAT at 20 % to net prices: £125.30 net → £25.06 VAT, £150.36 (by hand)", () => {
     const t = totals([{ quantityMilli: 1000, unitMinor: 12_530, taxRateBp: STANDARD }], false);
-    expect(t).toEqual({ bands: [{ rateBp: 2000, net: 12_530, tax: 2506, gross: 15_036 }], net: 12_530, tax: 2506, gross: 15_036 });
+    expect(t).toEqual({
+      bands: [{ rateBp: 2000, net: 12_530, tax: 2506, gross: 15_036 }],
+      net: 12_530,
+      tax: 2506,
+      gross: 15_036,
+    });
   });
 
   it("takes the VAT fraction 1/6 out of tax-inclusive prices: £120.00 → £20.00 VAT (HMRC)", () => {
