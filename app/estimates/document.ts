@@ -31,12 +31,32 @@ export function evidenceSentences(e: Evidence, units: UnitSystem): string[] {
   const told = e.present.map((p) =>
     p.source === "owner" ? `You told us: ${lower(p.name)}.` : `We confirmed: ${lower(p.name)}.`,
   );
-  const found = e.failed.map((f) =>
-    f.reading && f.rule
-      ? `We measured ${lower(f.name)} at ${f.reading}; it should be ${describeRule(f.rule, units)}.`
-      : `We checked ${lower(f.name)}: it failed.`,
-  );
+  const found = e.failed.map((f) => {
+    const { verb, what } = pastTense(f.name);
+    return f.reading && f.rule
+      ? `We ${verb} ${what}: ${f.reading}; it should be ${describeRule(f.rule, units)}.`
+      : `We ${verb} ${what}: not in order.`;
+  });
   return [...told, ...found];
+}
+
+// Checks are named as instructions ("Measure brake pad … thickness"); the owner reads what we did.
+const VERBS: Record<string, string> = {
+  measure: "measured",
+  check: "checked",
+  inspect: "inspected",
+  test: "tested",
+  read: "read",
+  listen: "listened",
+  look: "looked",
+  scan: "scanned",
+  compare: "compared",
+  road: "road-tested",
+};
+function pastTense(name: string) {
+  const [first, ...rest] = name.split(" ");
+  const verb = VERBS[first.toLowerCase()];
+  return verb && rest.length ? { verb, what: rest.join(" ") } : { verb: "checked", what: lower(name) };
 }
 
 const lower = (s: string) => (/^[A-Z][a-z]/.test(s) ? s[0].toLowerCase() + s.slice(1) : s);
