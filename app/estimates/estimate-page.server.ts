@@ -17,7 +17,8 @@ export async function ownerSide(
   const newest = await newestSent(db, workshopId, caseId);
   if (!newest)
     return { state: ownerState({ sent: false, opened: false, decisions: null, payment: null }), sent: null };
-  const { sent, links, decisions } = newest;
+  const { sent, links, decisions, paid } = newest;
+  const payment = paid.find((p) => p.status === "paid") ?? paid[0] ?? null;
   const live = links.find((l) => !l.revokedAt && l.expiresAt.getTime() > Date.now());
   const opened = links.find((l) => l.firstOpenedAt);
   const approved = new Set(decisions.filter((d) => d.decision === "approved").map((d) => d.itemId));
@@ -26,7 +27,7 @@ export async function ownerSide(
       sent: true,
       opened: Boolean(opened),
       decisions: sent.answeredAt ? decisions.map((d) => d.decision) : null,
-      payment,
+      payment: payment?.status ?? null,
     }),
     sent: {
       version: sent.version,
@@ -47,6 +48,9 @@ export async function ownerSide(
       currency: sent.document.currency,
       approvedTotal: sent.answeredAt ? totalsOf(sent.document, approved).gross : null,
       fullTotal: totalsOf(sent.document).gross,
+      payment: payment
+        ? { status: payment.status, amountMinor: payment.amountMinor, flaggedReason: payment.flaggedReason }
+        : null,
     },
   };
 }

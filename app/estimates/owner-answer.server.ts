@@ -1,7 +1,7 @@
 import { and, desc, eq, inArray, sql } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
 import type { Db } from "~/db/client.server";
-import { cases, members, ownerDecisions, ownerLinks, sentEstimates, users } from "~/db/schema";
+import { cases, members, ownerDecisions, ownerLinks, payments, sentEstimates, users } from "~/db/schema";
 import type { Decision } from "~/domain/owner-side";
 import { refuse } from "~/http/errors.server";
 import { queueMail } from "~/mail/outbox.server";
@@ -140,5 +140,6 @@ export async function newestSent(db: Db, workshopId: string, caseId: string) {
   if (!sent) return null;
   const links = await db.select().from(ownerLinks).where(eq(ownerLinks.sentEstimateId, sent.id));
   const decisions = await db.select().from(ownerDecisions).where(eq(ownerDecisions.sentEstimateId, sent.id));
-  return { sent, links, decisions };
+  const paid = await db.select().from(payments).where(eq(payments.sentEstimateId, sent.id)).orderBy(desc(payments.createdAt));
+  return { sent, links, decisions, paid };
 }

@@ -1,4 +1,7 @@
+import { redirect } from "react-router";
 import { z } from "zod";
+import { env } from "~/config/env.server";
+import { paymentsFor, startCheckout } from "~/payments/checkout.server";
 import type { Db } from "~/db/client.server";
 import { DECISIONS } from "~/domain/owner-side";
 import { invalid, onForm, zodErrors } from "~/http/forms.server";
@@ -10,6 +13,9 @@ export async function ownerPage(db: Db, token: string) {
   const found = await findOwnerLink(db, token);
   await recordOpen(db, found);
   const doc = found.sent.document;
+  const paid = (await paymentsFor(db, found.sent.workshopId, found.sent.caseId)).find(
+    (p) => p.sentEstimateId === found.sent.id && (p.status === "paid" || p.status === "refunded"),
+  );
   const approved = new Set([...found.decisions].filter(([, d]) => d === "approved").map(([id]) => id));
   return {
     doc,
@@ -19,8 +25,33 @@ export async function ownerPage(db: Db, token: string) {
     totalAll: totalsOf(doc),
     totalApproved: found.sent.answeredAt ? totalsOf(doc, approved) : null,
     deposit: depositOf(doc),
+    payment: paid ? { status: paid.status, amountMinor: paid.amountMinor, paidAt: paid.paidAt } : null,
     ids: { workshopId: found.sent.workshopId, caseId: found.sent.caseId, sentEstimateId: found.sent.id },
   };
+}
+
+/**
+ * Pay: a checkout session for the diagnostic fee with our own amount and currency, and the owner
+ * sent to the payment service's page; they come back to this page, which shows what its webhook said.
+ */
+export async function startOwnerPayment(db: Db, token: string) {
+  const found = await findOwnerLink(db, token);
+  const doc = found.sent.document;
+  const amount = depositOf(doc);
+  if (amount <= 0) return invalid({ form: ["Nothing is to be paid online for this estimate."] }, 409);
+  const here = new URL(`/o/${token}`, env().APP_URL).toString();
+  const { url } = await startCheckout(db, {
+    workshopId: found.sent.workshopId,
+    caseId: found.sent.caseId,
+    sentEstimateId: found.sent.id,
+    purpose: "diagnostic_fee",
+    amountMinor: amount,
+    currency: doc.currency,
+    description: `Diagnosis, case ${doc.caseNumber} (${doc.registration})`,
+    successUrl: `${here}?paid=1`,
+    cancelUrl: here,
+  });
+  throw redirect(url);
 }
 
 const Answer = z.object({

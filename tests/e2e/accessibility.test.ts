@@ -47,7 +47,7 @@ const VISITS: { login: string | null; paths: string[] }[] = [
       CASE("b4"),
     ],
   },
-  { login: "dana-reyes", paths: [CASE("b4"), CASE("b5")] },
+  { login: "dana-reyes", paths: ["/desk", CASE("b4"), `${CASE("b4")}/estimate`, CASE("b5")] },
   { login: "ines-okafor", paths: ["/settings", "/settings/members", "/settings/audit"] },
 ];
 

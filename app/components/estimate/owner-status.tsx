@@ -16,6 +16,7 @@ type Sent = {
   currency: string;
   approvedTotal: number | null;
   fullTotal: number;
+  payment: { status: string; amountMinor: number; flaggedReason: string | null } | null;
 };
 
 export function OwnerStatus({ state, sent }: { state: OwnerState; sent: Sent | null }) {
@@ -47,6 +48,18 @@ export function OwnerStatus({ state, sent }: { state: OwnerState; sent: Sent | n
             </li>
           ) : null}
           {sent.ownerNote ? <li>Their note: “{sent.ownerNote}”</li> : null}
+          {sent.payment ? (
+            <li>
+              Diagnostic fee {formatMinor(sent.payment.amountMinor, sent.currency)}:{" "}
+              {sent.payment.status === "paid"
+                ? "paid online."
+                : sent.payment.status === "refunded"
+                  ? "refunded."
+                  : sent.payment.status === "flagged"
+                    ? `held for a check (${sent.payment.flaggedReason ?? "the payment service disagreed with our record"}).`
+                    : "payment started, not completed."}
+            </li>
+          ) : null}
         </ul>
       ) : null}
     </div>

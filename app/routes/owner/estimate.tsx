@@ -1,6 +1,6 @@
 import { Form } from "react-router";
 import { dbContext } from "~/http/context";
-import { ownerPage, runOwnerAnswer } from "~/estimates/owner-page.server";
+import { ownerPage, runOwnerAnswer, startOwnerPayment } from "~/estimates/owner-page.server";
 import { FindingCard, OwnerHeader } from "~/components/estimate/owner-summary";
 import { ItemCard, TotalsTable } from "~/components/estimate/money-lines";
 import { describedBy, FieldError, FormMessages } from "~/components/ui/form-errors";
@@ -22,7 +22,10 @@ export async function loader({ params, context }: Route.LoaderArgs) {
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {
-  return runOwnerAnswer(context.get(dbContext), params.token, await request.formData());
+  const db = context.get(dbContext);
+  const form = await request.formData();
+  if (form.get("intent") === "pay") return startOwnerPayment(db, params.token);
+  return runOwnerAnswer(db, params.token, form);
 }
 
 export function meta({ data }: Route.MetaArgs) {
@@ -30,7 +33,7 @@ export function meta({ data }: Route.MetaArgs) {
 }
 
 export default function OwnerEstimate({ loaderData, actionData }: Route.ComponentProps) {
-  const { doc, answered, decisions, totalAll, totalApproved, deposit, expiresAt } = loaderData;
+  const { doc, answered, decisions, totalAll, totalApproved, deposit, expiresAt, payment } = loaderData;
   const errors = actionData?.errors;
   const open = doc.items.filter((i) => !i.required);
   return (
