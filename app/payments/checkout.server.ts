@@ -19,7 +19,10 @@ const StartArgs = z.object({
   caseId: z.uuid(),
   sentEstimateId: z.uuid(),
   purpose: z.enum(PAYMENT_PURPOSES),
-  amountMinor: z.number().int("The amount is whole minor units (pence)").positive("The amount must be above 0"),
+  amountMinor: z
+    .number()
+    .int("The amount is whole minor units (pence)")
+    .positive("The amount must be above 0"),
   currency: z
     .string()
     .regex(/^[A-Za-z]{3}$/, "The currency is a three-letter ISO 4217 code")

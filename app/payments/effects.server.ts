@@ -31,8 +31,7 @@ type ChargeObject = {
 export const COMPLETED = ["checkout.session.completed", "checkout.session.async_payment_succeeded"];
 export const REFUNDED = ["charge.refunded"];
 
-const idOf = (v: string | { id: string } | null | undefined) =>
-  typeof v === "string" ? v : (v?.id ?? null);
+const idOf = (v: string | { id: string } | null | undefined) => (typeof v === "string" ? v : (v?.id ?? null));
 
 /** The checkout session an event is about, when it is about one. */
 export function sessionIdOf(event: PaymentEvent): string | null {

@@ -20,14 +20,18 @@ const EventShape = z.object({
 export async function receiveWebhook(db: Db, request: Request): Promise<Response> {
   const signature = request.headers.get("stripe-signature");
   if (!signature)
-    return httpError(400, "The Stripe-Signature header is missing, so the event was refused. Nothing changed.");
+    return httpError(
+      400,
+      "The Stripe-Signature header is missing, so the event was refused. Nothing changed.",
+    );
   const raw = await request.text();
   let event: PaymentEvent;
   try {
     const verified: unknown = paymentsClient().webhooks.constructEvent(raw, signature, webhookSecret());
     event = EventShape.parse(verified) as PaymentEvent;
   } catch (error) {
-    const what = error instanceof z.ZodError ? "is not a payment event" : "has a signature that does not match";
+    const what =
+      error instanceof z.ZodError ? "is not a payment event" : "has a signature that does not match";
     return httpError(400, `That request ${what}, so it was refused. Nothing changed.`);
   }
 
