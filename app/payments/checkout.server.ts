@@ -12,7 +12,7 @@ import { can } from "~/domain/permissions";
 import { PAYMENT_PURPOSES } from "~/domain/owner-side";
 import { refuse } from "~/http/errors.server";
 import { applyKept } from "./effects.server";
-import { paymentsClient } from "./stripe.server";
+import { askService, paymentsClient } from "./stripe.server";
 
 const StartArgs = z.object({
   workshopId: z.uuid(),
@@ -69,6 +69,7 @@ export async function startCheckout(
       )
       .orderBy(desc(payments.createdAt))
       .limit(1);
+    // Only a row asking the same amount is reused: its session (same idempotency key) asks that.
     if (open) return open;
     const [created] = await tx
       .insert(payments)
@@ -86,28 +87,31 @@ export async function startCheckout(
 
   const stripe = paymentsClient();
   if (payment.checkoutSessionId) {
-    const existing = await stripe.checkout.sessions.retrieve(payment.checkoutSessionId);
+    const id = payment.checkoutSessionId;
+    const existing = await askService("find the checkout", () => stripe.checkout.sessions.retrieve(id));
     if (existing.status === "open" && existing.url) return { paymentId: payment.id, url: existing.url };
   }
-  const session = await stripe.checkout.sessions.create(
-    {
-      mode: "payment",
-      line_items: [
-        {
-          quantity: 1,
-          price_data: {
-            currency: a.currency.toLowerCase(),
-            unit_amount: a.amountMinor,
-            product_data: { name: a.description },
+  const session = await askService("open a checkout", () =>
+    stripe.checkout.sessions.create(
+      {
+        mode: "payment",
+        line_items: [
+          {
+            quantity: 1,
+            price_data: {
+              currency: a.currency.toLowerCase(),
+              unit_amount: a.amountMinor,
+              product_data: { name: a.description },
+            },
           },
-        },
-      ],
-      client_reference_id: payment.id,
-      metadata: { payment_id: payment.id, workshop_id: a.workshopId, case_id: a.caseId },
-      success_url: a.successUrl,
-      cancel_url: a.cancelUrl,
-    },
-    { idempotencyKey: payment.id },
+        ],
+        client_reference_id: payment.id,
+        metadata: { payment_id: payment.id, workshop_id: a.workshopId, case_id: a.caseId },
+        success_url: a.successUrl,
+        cancel_url: a.cancelUrl,
+      },
+      { idempotencyKey: payment.id },
+    ),
   );
   if (!session.url) refuse(502, "The payment service gave no checkout page; try again.");
   await db.transaction(async (tx) => {
@@ -156,9 +160,12 @@ export async function refundPayment(db: Db, member: CurrentMember, paymentId: st
 
   // Outside a transaction: no row is held locked while the service answers. The idempotency key
   // makes a second click, or a retry after a lost answer, the same refund.
-  const refund = await paymentsClient().refunds.create(
-    { payment_intent: row.paymentIntentId, metadata: { payment_id: row.id } },
-    { idempotencyKey: `refund-${row.id}` },
+  const intent = row.paymentIntentId;
+  const refund = await askService("refund it", () =>
+    paymentsClient().refunds.create(
+      { payment_intent: intent, metadata: { payment_id: row.id } },
+      { idempotencyKey: `refund-${row.id}` },
+    ),
   );
   return db.transaction(async (tx) => {
     const [locked] = await tx.select().from(payments).where(eq(payments.id, row.id)).for("update");

@@ -3,6 +3,7 @@
 // made with the same idempotency key) and no telemetry headers.
 import Stripe from "stripe";
 import { isLoopback, paymentsConfig } from "~/config/env.server";
+import { refuse } from "~/http/errors.server";
 
 let cached: { key: string; url: string; client: Stripe } | undefined;
 
@@ -27,5 +28,22 @@ export function paymentsClient(): Stripe {
 }
 
 export const webhookSecret = () => paymentsConfig().PAY_WEBHOOK_SECRET;
+
+/**
+ * Runs one call to the service; its refusal becomes ours with its message (409: it was asked
+ * something it will not do, such as refunding twice), and an unreachable service a 503 that says
+ * nothing was done. Anything else is thrown on.
+ */
+export async function askService<T>(what: string, call: () => Promise<T>): Promise<T> {
+  try {
+    return await call();
+  } catch (error) {
+    if (error instanceof Stripe.errors.StripeInvalidRequestError)
+      refuse(409, `The payments service refused to ${what}: ${error.message} Nothing changed.`);
+    if (error instanceof Stripe.errors.StripeError)
+      refuse(503, `The payments service could not ${what} just now; nothing changed. Try again shortly.`);
+    throw error;
+  }
+}
 
 export type { Stripe };

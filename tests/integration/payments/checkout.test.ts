@@ -3,6 +3,7 @@
 // published source); the wire shapes are the SDK's documented ones (docs.stripe.com/api).
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { paymentsFor, refundPayment, startCheckout } from "~/payments/checkout.server";
+import { paymentsClient } from "~/payments/stripe.server";
 import { testDb } from "../../setup/integration-worker";
 import type { FakePayments } from "../../fakes/payments";
 import { memberFor, refusal } from "../api/helpers";
@@ -125,5 +126,40 @@ describe("refundPayment", () => {
     expect(refused.status).toBe(409);
     expect(String(refused.body.error)).toContain("Only a paid payment");
     expect((await paymentRow(db, paymentId)).status).toBe("open");
+  });
+
+  it("answers the service's refusal as a 409 with its words, and leaves the row paid", async () => {
+    const db = testDb();
+    const sent = await sentEstimate(db, 6);
+    const { paymentId } = await startCheckout(db, checkoutArgs(sent, 3000));
+    await fake.pay((await paymentRow(db, paymentId)).checkoutSessionId!);
+    const { paymentIntentId } = await paymentRow(db, paymentId);
+    // Refunded on the service's side already, its event not here yet.
+    fake.holdWebhooks();
+    await paymentsClient().refunds.create({ payment_intent: paymentIntentId! });
+    const admin = await memberFor(db, "ines-okafor");
+    const refused = await refusal(refundPayment(db, admin, paymentId));
+    expect(refused.status).toBe(409);
+    expect(String(refused.body.error)).toContain("already been refunded");
+    expect((await paymentRow(db, paymentId)).status).toBe("paid");
+    // Its event, once it comes, settles it.
+    await fake.releaseWebhooks();
+    expect((await paymentRow(db, paymentId)).status).toBe("refunded");
+  });
+
+  it("answers 503 when the service cannot be reached, with nothing refunded", async () => {
+    const db = testDb();
+    const sent = await sentEstimate(db, 7);
+    const { paymentId } = await startCheckout(db, checkoutArgs(sent, 3100));
+    await fake.pay((await paymentRow(db, paymentId)).checkoutSessionId!);
+    const admin = await memberFor(db, "ines-okafor");
+    process.env.PAYMENTS_API_URL = "http://127.0.0.1:9"; // discard port: nothing listens (RFC 863)
+    try {
+      const refused = await refusal(refundPayment(db, admin, paymentId));
+      expect(refused.status).toBe(503);
+    } finally {
+      process.env.PAYMENTS_API_URL = fake.url;
+    }
+    expect((await paymentRow(db, paymentId)).status).toBe("paid");
   });
 });
