@@ -90,6 +90,9 @@ export async function startCheckout(
     const id = payment.checkoutSessionId;
     const existing = await askService("find the checkout", () => stripe.checkout.sessions.retrieve(id));
     if (existing.status === "open" && existing.url) return { paymentId: payment.id, url: existing.url };
+    // Paid, its event not here yet: a new session would ask the owner to pay twice.
+    if (existing.status === "complete")
+      refuse(409, "The owner has paid this already; it shows as paid once the payment service confirms it.");
   }
   const session = await askService("open a checkout", () =>
     stripe.checkout.sessions.create(

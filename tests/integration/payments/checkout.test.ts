@@ -53,6 +53,19 @@ describe("startCheckout against the payments fake", () => {
     expect(fake.sessions().filter((s) => s.client_reference_id === paymentId)).toHaveLength(1);
   });
 
+  it("does not open a second checkout for a session already paid whose event is still on its way", async () => {
+    const db = testDb();
+    const sent = await sentEstimate(db, 8);
+    const { paymentId } = await startCheckout(db, checkoutArgs(sent, 2700));
+    fake.holdWebhooks();
+    await fake.pay((await paymentRow(db, paymentId)).checkoutSessionId!);
+    const refused = await refusal(startCheckout(db, checkoutArgs(sent, 2700)));
+    expect(refused.status).toBe(409);
+    expect(fake.sessions().filter((s) => s.client_reference_id === paymentId)).toHaveLength(1);
+    await fake.releaseWebhooks();
+    expect((await paymentRow(db, paymentId)).status).toBe("paid");
+  });
+
   it("refuses an amount of 0 or an estimate of another case, and writes nothing", async () => {
     const db = testDb();
     const sent = await sentEstimate(db, 2);
