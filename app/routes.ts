@@ -28,6 +28,7 @@ export default [
     route("settings", "routes/settings/workshop.tsx"),
     route("settings/members", "routes/settings/members.tsx"),
     route("settings/audit", "routes/settings/audit.tsx"),
+    route("settings/payments", "routes/settings/payments.tsx"),
   ]),
   route("api/search", "routes/api/search.ts"),
   route("api/quick-find", "routes/api/quick-find.ts"),
@@ -38,6 +39,7 @@ export default [
   route("api/cases/:caseId/observations/:itemId?", "routes/api/observations.ts"),
   route("api/kb/checks/:checkId", "routes/api/kb-check.ts"),
   route("api/cases/:caseId/findings/:itemId?", "routes/api/findings.ts"),
+  route("api/payments/webhook", "routes/api/payments-webhook.ts"),
   route("api/*", "routes/api/not-found.ts"),
   route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

@@ -1,5 +1,6 @@
 import { href } from "react-router";
 import { describeStrength } from "~/domain/link-strength";
+import { formatMoney } from "~/money";
 import { CAUSE_FIELD_WORDS, CHECK_FIELD_WORDS, SYMPTOM_FIELD_WORDS } from "./field-words";
 // Audit entries in the words of the workshop floor: a sentence that starts after the actor's name
 // ("Priya Hale recorded a fault: …") and, where the entry concerns a record, a link to it. Shared by
@@ -37,6 +38,8 @@ const ROLE: Record<string, string> = {
   advisor: "service advisor",
   admin: "workshop admin",
 };
+const paid = (a: Fields) =>
+  `${typeof a.amountMinor === "number" && typeof a.currency === "string" ? formatMoney(a.amountMinor, a.currency) : "an amount"}${a.caseNumber != null ? ` for case #${a.caseNumber}` : ""}`;
 const role = (r: unknown) => ROLE[String(r)] ?? String(r ?? "");
 
 const SETTING_WORDS: Record<string, (v: unknown) => string> = {
@@ -155,6 +158,9 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
     `changed ${s.personName ?? "a member"}'s role from ${role(b.role)} to ${role(a.role)}`,
   "member.suspend": (_a, _b, s) => `suspended ${s.personName ?? "a member"}`,
   "member.reactivate": (_a, _b, s) => `reactivated ${s.personName ?? "a member"}`,
+  "payment.paid": (a) => `recorded a payment of ${paid(a)}`,
+  "payment.refunded": (a) => `refunded ${paid(a)}`,
+  "payment.flagged": (a) => `flagged a payment of ${paid(a)}${quoted(a.reason)}`,
   "auth.sign_in": () => "signed in",
   "auth.sign_out.this": () => "signed out on one device",
   "auth.sign_out.everywhere": () => "signed out on every device",
@@ -177,6 +183,8 @@ export function describeAudit(entry: AuditLine): Described {
     return { text, href: href("/kb/test-cases"), linkText: "test cases" };
   if (entry.action.startsWith("kb.propos"))
     return { text, href: href("/kb/proposals"), linkText: "proposals" };
+  if (entry.action.startsWith("payment."))
+    return { text, href: href("/settings/payments"), linkText: "payments" };
   if (entry.action.startsWith("kb.")) return { text, href: href("/kb"), linkText: "knowledge base" };
   return { text, href: null, linkText: null };
 }

@@ -82,6 +82,11 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
     },
   },
   "routes/settings/audit.tsx": { path: "/settings/audit", GET: "audit:read" },
+  "routes/settings/payments.tsx": {
+    path: "/settings/payments",
+    GET: "payment:refund",
+    POST: { refund: "payment:refund" },
+  },
   "routes/cases/new.tsx": { path: "/cases/new", GET: "case:open", POST: "case:open" },
   "routes/cases/workbench.tsx": {
     path: "/cases/{case}",
@@ -124,6 +129,8 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
     POST: "case:work",
   },
   "routes/api/kb-check.ts": { path: "/api/kb/checks/{check}", api: true, record: true, GET: "kb:read" },
+  // Signed by the payments service, not signed in: a bad or missing signature is a 400 for anyone.
+  "routes/api/payments-webhook.ts": { path: "/api/payments/webhook", api: true, POST: "public" },
   "routes/api/not-found.ts": { path: "/api/no-such-thing", GET: "public" },
   "routes/not-found.tsx": { path: "/no-such-page", GET: "public" },
 };

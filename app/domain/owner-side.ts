@@ -46,8 +46,20 @@ export const OWNER_STATE_LABEL: Record<OwnerState, string> = {
 export const PAYMENT_STATUSES = ["open", "paid", "refunded", "flagged"] as const;
 export type PaymentStatus = (typeof PAYMENT_STATUSES)[number];
 
+export const PAYMENT_STATUS_LABEL: Record<PaymentStatus, string> = {
+  open: "Waiting for the owner",
+  paid: "Paid",
+  refunded: "Refunded",
+  flagged: "Flagged: amounts disagree",
+};
+
 export const PAYMENT_PURPOSES = ["diagnostic_fee", "deposit"] as const;
 export type PaymentPurpose = (typeof PAYMENT_PURPOSES)[number];
+
+export const PAYMENT_PURPOSE_LABEL: Record<PaymentPurpose, string> = {
+  diagnostic_fee: "Diagnostic fee",
+  deposit: "Deposit",
+};
 
 export const MAIL_STATES = ["queued", "sent", "failed"] as const;
 export type MailState = (typeof MAIL_STATES)[number];

@@ -16,7 +16,13 @@ export const WHAT_IF_RULE: BodyRule = { kind: "json", maxBytes: 1024 * KiB };
 /** A whole knowledge base as a file: the starter base exports to well under 1 MB. */
 export const KB_IMPORT_RULE: BodyRule = { kind: "form", maxBytes: 8 * 1024 * KiB };
 
+/** Where the payments service POSTs its events (the one write accepted from another origin). */
+export const PAYMENT_WEBHOOK_PATH = "/api/payments/webhook";
+/** One payment event: a checkout session or a charge with its refunds is a few KiB. */
+export const PAYMENT_WEBHOOK_RULE: BodyRule = { kind: "json", maxBytes: 64 * KiB };
+
 const BY_PATH: [RegExp, BodyRule][] = [
+  [/^\/api\/payments\/webhook$/, PAYMENT_WEBHOOK_RULE],
   [/^\/kb\/transfer(\.data)?$/, KB_IMPORT_RULE],
   [/^\/api\/what-if$/, WHAT_IF_RULE],
   [/^\/api\//, API_RULE],

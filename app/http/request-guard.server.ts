@@ -9,7 +9,7 @@
 //   - no text anywhere in it holds a NUL character, which PostgreSQL refuses to store in text.
 // Each refusal is thrown as a JSON `{ error }` Response with a 4xx: the API returns it as it is,
 // pages show its message on their error page. Nothing has been read or changed when it is thrown.
-import { bodyRuleFor, describeBytes } from "./body-rules";
+import { bodyRuleFor, describeBytes, PAYMENT_WEBHOOK_PATH } from "./body-rules";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 const FORM_TYPES = ["application/x-www-form-urlencoded", "multipart/form-data"];
@@ -31,7 +31,12 @@ export async function guardRequest(request: Request, appOrigin: string): Promise
   const method = request.method.toUpperCase();
   if (SAFE_METHODS.has(method)) return;
 
-  assertOwnOrigin(request, appOrigin);
+  // The one write that comes from another origin by nature: the payments service's webhook. It
+  // carries no cookie and does nothing on a visitor's behalf, so the origin check (which stops a
+  // page elsewhere from using a visitor's session) has nothing to protect; its authentication is
+  // the signature over its body, checked before anything is stored (app/payments/webhook.server.ts).
+  // Exactly this path: its size limit and JSON check below still apply.
+  if (url.pathname !== PAYMENT_WEBHOOK_PATH) assertOwnOrigin(request, appOrigin);
 
   const rule = bodyRuleFor(url.pathname);
   const declared = request.headers.get("content-length");

@@ -309,6 +309,9 @@ try {
     GITHUB_CLIENT_SECRET: "bench-secret-0123456789",
     GITHUB_OAUTH_URL: UNUSED,
     GITHUB_API_URL: UNUSED,
+    PAYMENTS_SECRET_KEY: "sk_test_bench_unused",
+    PAYMENTS_API_URL: UNUSED,
+    PAY_WEBHOOK_SECRET: "whsec_bench_unused",
     DATABASE_URL: databaseUrl,
     NODE_ENV: "production",
   };

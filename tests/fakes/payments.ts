@@ -1,19 +1,16 @@
-// A fake of the hosted payments API, just the Checkout Sessions slice Ramplight uses, speaking the
+// A fake of the hosted payments API, just the Checkout Sessions and refunds Ramplight uses, speaking the
 // public wire format so the unmodified stripe SDK can talk to it (host/port/protocol options).
 // Paying on its hosted page sends a signed `checkout.session.completed` webhook, signed the way
 // the real service signs, so the app's verification code runs unchanged in the demo.
 import { randomBytes } from "node:crypto";
 import type { IncomingMessage, ServerResponse } from "node:http";
 import { listen, readBody, redirect, sendHtml, sendJson, sendText } from "./http-util";
-import {
-  asRecord,
-  asString,
-  parseBracketForm,
-  renderPayPage,
-  signWebhook,
-  PAY_PAGE_TITLE,
-} from "./payments-wire";
+import { asRecord, asString, parseBracketForm, renderPayPage, PAY_PAGE_TITLE } from "./payments-wire";
 import type { FormObject, PayPageSession } from "./payments-wire";
+import { createDeliverer, type WebhookDelivery } from "./payments-deliver";
+import { createRefund, newCharge, type Charge, type Refund } from "./payments-refunds";
+
+export type { WebhookDelivery } from "./payments-deliver";
 
 export type FakePaymentsOptions = {
   port?: number;
@@ -46,23 +43,23 @@ export type CheckoutSession = {
   livemode: false;
 };
 
-export type WebhookDelivery = {
-  eventId: string;
-  type: string;
-  attempts: number;
-  delivered: boolean;
-  lastStatus: number | null;
-  lastError: string | null;
-};
-
 export type FakePayments = {
   url: string;
   port: number;
   close(): Promise<void>;
   sessions(): CheckoutSession[];
   deliveries(): WebhookDelivery[];
+  events(): { id: string; type: string }[]; // every event made, in order
+  refunds(): Refund[];
   // Same as pressing "Pay" on the hosted page; resolves after the webhook attempts finish.
   pay(sessionId: string): Promise<WebhookDelivery | null>;
+  // For tests: hold events back from now on, then send them in the order made or reversed.
+  holdWebhooks(): void;
+  releaseWebhooks(order?: "sent" | "reverse"): Promise<(WebhookDelivery | null)[]>;
+  // Sends an event already made once more, same id and body (a duplicate delivery).
+  redeliver(eventId: string): Promise<WebhookDelivery | null>;
+  // Resolves when no webhook is being sent (a refund's event goes out after its answer).
+  settled(): Promise<void>;
 };
 
 const id = (prefix: string) => `${prefix}_${randomBytes(12).toString("hex")}`;
@@ -80,8 +77,10 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
     string,
     { session: CheckoutSession; page: PayPageSession; apiVersion: string | null }
   >();
-  const idempotent = new Map<string, CheckoutSession>();
-  const deliveries: WebhookDelivery[] = [];
+  const idempotent = new Map<string, unknown>();
+  const charges: Charge[] = [];
+  const refunds: Refund[] = [];
+  const webhooks = createDeliverer({ ...opts, now });
   let base = "";
 
   function createSession(form: FormObject, apiVersion: string | null): CheckoutSession | string {
@@ -136,66 +135,6 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
     return session;
   }
 
-  async function deliver(
-    type: string,
-    object: CheckoutSession,
-    apiVersion: string | null,
-  ): Promise<WebhookDelivery | null> {
-    if (!opts.webhookUrl || !opts.webhookSecret) return null;
-    const event = {
-      id: id("evt_test"),
-      object: "event",
-      api_version: apiVersion,
-      created: Math.floor(now() / 1000),
-      data: { object },
-      livemode: false,
-      pending_webhooks: 1,
-      request: { id: null, idempotency_key: null },
-      type,
-    };
-    const body = JSON.stringify(event, null, 2);
-    const record: WebhookDelivery = {
-      eventId: event.id,
-      type,
-      attempts: 0,
-      delivered: false,
-      lastStatus: null,
-      lastError: null,
-    };
-    deliveries.push(record);
-    const attempts = Math.max(1, opts.webhookAttempts ?? 3);
-    let delay = opts.retryDelayMs ?? 200;
-    while (record.attempts < attempts && !record.delivered) {
-      if (record.attempts > 0) {
-        await new Promise((r) => setTimeout(r, delay));
-        delay *= 2;
-      }
-      record.attempts += 1;
-      try {
-        // Signed afresh on each attempt, with a new timestamp, as the real service does.
-        const signature = signWebhook(body, opts.webhookSecret, Math.floor(now() / 1000));
-        const res = await fetch(opts.webhookUrl, {
-          method: "POST",
-          headers: {
-            "content-type": "application/json; charset=utf-8",
-            "stripe-signature": signature,
-            "user-agent": "Ramplight-fake-payments/1.0",
-          },
-          body,
-          signal: AbortSignal.timeout(5000),
-        });
-        await res.body?.cancel();
-        record.lastStatus = res.status;
-        record.lastError = null;
-        record.delivered = res.status >= 200 && res.status < 300;
-      } catch (err) {
-        record.lastStatus = null;
-        record.lastError = err instanceof Error ? err.message : String(err);
-      }
-    }
-    return record;
-  }
-
   async function pay(sessionId: string): Promise<WebhookDelivery | null> {
     const entry = sessions.get(sessionId);
     if (!entry) throw new Error(`No such checkout.session: '${sessionId}'`);
@@ -206,7 +145,9 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
     });
     if (entry.session.payment_status === "unpaid") entry.session.payment_status = "paid";
     Object.assign(entry.page, { status: entry.session.status, payment_status: entry.session.payment_status });
-    return deliver("checkout.session.completed", { ...entry.session }, entry.apiVersion);
+    const { payment_intent: pi, amount_total: total, currency } = entry.session;
+    if (pi && total !== null && currency) charges.push(newCharge(pi, total, currency, now()));
+    return webhooks.emit("checkout.session.completed", { ...entry.session }, entry.apiVersion);
   }
 
   async function api(req: IncomingMessage, res: ServerResponse, path: string): Promise<void> {
@@ -226,23 +167,38 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
         });
       return sendJson(res, 200, entry.session);
     }
+    const idemKey = req.headers["idempotency-key"];
+    const version = req.headers["stripe-version"];
+    const replay = typeof idemKey === "string" ? idempotent.get(`${path} ${idemKey}`) : undefined;
+    if (req.method === "POST" && replay) return sendJson(res, 200, replay);
+    if (req.method === "POST" && path === "/v1/refunds") {
+      const made = createRefund(parseBracketForm(await readBody(req)), charges, now());
+      if ("error" in made)
+        return stripeError(res, made.status, made.error, made.code ? { code: made.code } : {});
+      refunds.push(made.refund);
+      if (typeof idemKey === "string") idempotent.set(`${path} ${idemKey}`, made.refund);
+      sendJson(res, 200, made.refund);
+      // After the answer, as the real service does: the app must not need the event to finish.
+      void webhooks.emit(
+        "charge.refunded",
+        structuredClone(made.charge),
+        typeof version === "string" ? version : null,
+      );
+      return;
+    }
     if (req.method === "POST" && path === "/v1/checkout/sessions") {
-      const idemKey = req.headers["idempotency-key"];
-      const previous = typeof idemKey === "string" ? idempotent.get(idemKey) : undefined;
-      if (previous) return sendJson(res, 200, previous);
-      const version = req.headers["stripe-version"];
       const result = createSession(
         parseBracketForm(await readBody(req)),
         typeof version === "string" ? version : null,
       );
       if (typeof result === "string") return stripeError(res, 400, result);
-      if (typeof idemKey === "string") idempotent.set(idemKey, result);
+      if (typeof idemKey === "string") idempotent.set(`${path} ${idemKey}`, result);
       return sendJson(res, 200, result);
     }
     stripeError(
       res,
       404,
-      `Unrecognized request URL (${req.method}: ${path}). The fake covers checkout sessions only.`,
+      `Unrecognized request URL (${req.method}: ${path}). The fake covers checkout sessions and refunds only.`,
     );
   }
 
@@ -282,7 +238,13 @@ export async function startFakePayments(opts: FakePaymentsOptions = {}): Promise
     port: server.port,
     close: server.close,
     sessions: () => [...sessions.values()].map((e) => ({ ...e.session })),
-    deliveries: () => deliveries.map((d) => ({ ...d })),
+    deliveries: webhooks.deliveries,
+    events: webhooks.events,
+    refunds: () => refunds.map((r) => ({ ...r })),
     pay,
+    holdWebhooks: webhooks.hold,
+    releaseWebhooks: webhooks.release,
+    redeliver: webhooks.redeliver,
+    settled: webhooks.settled,
   };
 }

@@ -17,6 +17,11 @@ export const E2E_ENV = {
   FAKE_OAUTH_PORT: String(OAUTH_PORT),
   FAKE_SMTP_PORT: String(SMTP_PORT),
   FAKE_PAY_PORT: String(PAY_PORT),
+  // The payments fake (started with the others) and where it sends its signed webhooks.
+  PAYMENTS_SECRET_KEY: "sk_test_ramplight_e2e",
+  PAYMENTS_API_URL: `http://127.0.0.1:${PAY_PORT}`,
+  PAY_WEBHOOK_URL: `http://127.0.0.1:${APP_PORT}/api/payments/webhook`,
+  PAY_WEBHOOK_SECRET: "whsec_ramplight_e2e_only",
   SMTP_URL: `smtp://127.0.0.1:${SMTP_PORT}`,
   FAKE_MAIL_DIR: `/tmp/ramplight-e2e-mail${BASE ? "-" + BASE : ""}`,
   OAUTH_CLIENT_ID: "ramplight-e2e",

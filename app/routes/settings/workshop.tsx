@@ -41,6 +41,7 @@ export async function loader({ context }: Route.LoaderArgs) {
   return {
     workshop: await getWorkshop(context.get(dbContext), member.workshopId),
     canEdit: can(member.role, "settings:manage"),
+    canRefund: can(member.role, "payment:refund"),
     role: member.role,
   };
 }
@@ -77,6 +78,14 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
           to={href("/settings/members")}
         >
           Members
+        </Link>
+      ) : null}
+      {loaderData.canRefund ? (
+        <Link
+          className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+          to={href("/settings/payments")}
+        >
+          Payments
         </Link>
       ) : null}
       {loaderData.role === "admin" || loaderData.role === "senior" ? (

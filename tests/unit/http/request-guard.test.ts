@@ -141,4 +141,22 @@ describe("the request guard", () => {
     expect(bodyRuleFor("/api/cases/1/findings")).toMatchObject({ kind: "json", maxBytes: 16 * 1024 });
     expect(bodyRuleFor("/settings")).toMatchObject({ kind: "form", maxBytes: 64 * 1024 });
   });
+
+  it("exempts exactly the payments webhook from the origin check, not from the body rules", async () => {
+    const event = (headers: Record<string, string>, body = "{}") => ({
+      method: "POST",
+      body,
+      headers: { "content-type": "application/json; charset=utf-8", ...headers },
+    });
+    // The payments service sends no Origin of ours (no browser is involved).
+    expect(await status(`${APP}/api/payments/webhook`, event({}))).toBe(200);
+    expect(await status(`${APP}/api/payments/webhook`, event({ origin: "http://evil.example" }))).toBe(200);
+    for (const near of ["/api/payments/webhook/", "/api/payments/webhooks", "/api/payments/webhook.data"])
+      expect(await status(`${APP}${near}`, event({})), near).toBe(403);
+    expect(
+      await status(`${APP}/api/payments/webhook`, event({ "content-length": String(65 * 1024) }, "x")),
+    ).toBe(413);
+    expect(await status(`${APP}/api/payments/webhook`, event({}, "not json"))).toBe(400);
+    expect(bodyRuleFor("/api/payments/webhook")).toEqual({ kind: "json", maxBytes: 64 * 1024 });
+  });
 });
