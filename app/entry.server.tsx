@@ -8,7 +8,7 @@ import {
   ServerRouter,
 } from "react-router";
 import { NonceProvider } from "./components/nonce";
-import { env, isSecure } from "~/config/env.server";
+import { env, isSecure, paymentsPageOrigin } from "~/config/env.server";
 import { securityHeaders } from "~/http/security-headers.server";
 
 // Validate the environment as the server loads this module, so a missing secret stops the start
@@ -57,7 +57,9 @@ export default function handleRequest(
     nonce,
     dev: import.meta.env.DEV,
     secure: isSecure(e),
-    formTargets: [new URL(e.GITHUB_OAUTH_URL).origin],
+    // The sign-in provider, and the payment service's page the owner's Pay form is sent on to
+    // (form-action also governs where a form's redirect may go).
+    formTargets: [new URL(e.GITHUB_OAUTH_URL).origin, paymentsPageOrigin()],
   });
   headers.set("Content-Type", "text/html; charset=utf-8");
   if (request.method.toUpperCase() === "HEAD") return new Response(null, { status, headers });

@@ -1,6 +1,6 @@
 import { href } from "react-router";
 import { describeStrength } from "~/domain/link-strength";
-import { formatMoney } from "~/money";
+import { formatMinor } from "~/money";
 import { CAUSE_FIELD_WORDS, CHECK_FIELD_WORDS, SYMPTOM_FIELD_WORDS } from "./field-words";
 // Audit entries in the words of the workshop floor: a sentence that starts after the actor's name
 // ("Priya Hale recorded a fault: …") and, where the entry concerns a record, a link to it. Shared by
@@ -39,7 +39,7 @@ const ROLE: Record<string, string> = {
   admin: "workshop admin",
 };
 const paid = (a: Fields) =>
-  `${typeof a.amountMinor === "number" && typeof a.currency === "string" ? formatMoney(a.amountMinor, a.currency) : "an amount"}${a.caseNumber != null ? ` for case #${a.caseNumber}` : ""}`;
+  `${typeof a.amountMinor === "number" && typeof a.currency === "string" ? formatMinor(a.amountMinor, a.currency) : "an amount"}${a.caseNumber != null ? ` for case #${a.caseNumber}` : ""}`;
 const role = (r: unknown) => ROLE[String(r)] ?? String(r ?? "");
 
 const SETTING_WORDS: Record<string, (v: unknown) => string> = {

@@ -83,3 +83,8 @@ export function paymentsConfig(): PaymentsConfig {
   if (!result.success) refuseToStart(result.error);
   return result.data;
 }
+
+/** Where the payment service's hosted page lives: PAYMENTS_PAGE_URL, or the API's own origin (the fake serves both). */
+export function paymentsPageOrigin(): string {
+  return new URL(process.env.PAYMENTS_PAGE_URL || paymentsConfig().PAYMENTS_API_URL).origin;
+}

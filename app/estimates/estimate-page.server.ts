@@ -8,12 +8,7 @@ import { newestSent } from "./owner-answer.server";
 import { ownerState } from "./owner-state";
 
 /** Where the owner side of a case stands: the newest send, its link, the owner's answer. */
-export async function ownerSide(
-  db: Db,
-  workshopId: string,
-  caseId: string,
-  payment: "open" | "paid" | "refunded" | "flagged" | null = null,
-) {
+export async function ownerSide(db: Db, workshopId: string, caseId: string) {
   const newest = await newestSent(db, workshopId, caseId);
   if (!newest)
     return { state: ownerState({ sent: false, opened: false, decisions: null, payment: null }), sent: null };

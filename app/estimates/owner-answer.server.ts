@@ -140,6 +140,10 @@ export async function newestSent(db: Db, workshopId: string, caseId: string) {
   if (!sent) return null;
   const links = await db.select().from(ownerLinks).where(eq(ownerLinks.sentEstimateId, sent.id));
   const decisions = await db.select().from(ownerDecisions).where(eq(ownerDecisions.sentEstimateId, sent.id));
-  const paid = await db.select().from(payments).where(eq(payments.sentEstimateId, sent.id)).orderBy(desc(payments.createdAt));
+  const paid = await db
+    .select()
+    .from(payments)
+    .where(eq(payments.sentEstimateId, sent.id))
+    .orderBy(desc(payments.createdAt));
   return { sent, links, decisions, paid };
 }

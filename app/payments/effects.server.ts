@@ -7,7 +7,7 @@ import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
 import type { Tx } from "~/db/client.server";
 import { cases, paymentEvents, payments, type Payment } from "~/db/schema";
-import { formatMoney } from "~/money";
+import { formatMinor } from "~/money";
 
 export type Outcome = "applied" | "ignored" | "unknown_session" | "mismatch";
 export type Effect = { outcome: Outcome; message: string };
@@ -44,7 +44,7 @@ const money = (minor: number | null | undefined, currency: string | null | undef
   minor == null || !currency ? "no amount" : safeMoney(minor, currency);
 function safeMoney(minor: number, currency: string) {
   try {
-    return formatMoney(minor, currency.toUpperCase());
+    return formatMinor(minor, currency.toUpperCase());
   } catch {
     return `${minor} (minor units) ${currency.toUpperCase()}`;
   }

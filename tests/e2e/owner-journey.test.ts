@@ -17,7 +17,9 @@ const CASE = seedId("case:b4"); // 1031: brake pads worn to the backing plate, o
 async function mailTo(to: string, kind: RegExp, ms = 15_000) {
   const until = Date.now() + ms;
   while (Date.now() < until) {
-    const found = (await readInbox(E2E_ENV.FAKE_MAIL_DIR)).find((m) => m.to.includes(to) && kind.test(m.subject));
+    const found = (await readInbox(E2E_ENV.FAKE_MAIL_DIR)).find(
+      (m) => m.to.includes(to) && kind.test(m.subject ?? ""),
+    );
     if (found) return found;
     await new Promise((r) => setTimeout(r, 150));
   }
@@ -47,7 +49,10 @@ describe("telling the owner", () => {
       await page.getByLabel("New item, as the owner will read it").fill(title);
       await page.getByLabel("Priority", { exact: true }).selectOption(priority);
       await page.getByRole("button", { name: "Add the item" }).click();
-      await page.getByRole("status").filter({ hasText: `Item "${title}" added.` }).waitFor();
+      await page
+        .getByRole("status")
+        .filter({ hasText: `Item "${title}" added.` })
+        .waitFor();
     }
     // A price with three decimals is a slip: the message sits at the field and nothing is added.
     await page.getByLabel("Item", { exact: true }).selectOption({ label: "Front discs" });
@@ -65,16 +70,21 @@ describe("telling the owner", () => {
     await page.getByRole("button", { name: "Add the line" }).click();
     await page.getByRole("status").filter({ hasText: "Line added." }).waitFor();
     // By hand: 21.00 + 266.00 + 90.00 + 24.00 = 401.00 net, VAT 80.20, 481.20.
-    await page.getByRole("region", { name: "If the owner approves everything" }).getByText("£481.20").waitFor();
+    await page
+      .getByRole("region", { name: "If the owner approves everything" })
+      .getByText("£481.20")
+      .waitFor();
     expect(await seriousViolations(page)).toEqual([]);
-    await page.getByLabel("A message to the owner (optional)").fill("Call us on the workshop line with any question.");
+    await page
+      .getByLabel("A message to the owner (optional)")
+      .fill("Call us on the workshop line with any question.");
     await page.getByRole("button", { name: "Send to the owner" }).click();
     await page.getByRole("status").filter({ hasText: "Estimate version 1 sent" }).waitFor();
     await page.locator('[data-owner-state="sent"]').waitFor();
 
     // The owner, on a phone, from the e-mail the outbox delivered.
     const mail = await mailTo("mirela.stancu@mail.example", /what we found/);
-    const link = /http:\/\/\S+\/o\/[A-Za-z0-9_-]{43}/.exec(mail.text)?.[0];
+    const link = /http:\/\/\S+\/o\/[A-Za-z0-9_-]{43}/.exec(mail.text ?? "")?.[0];
     expect(link).toBeTruthy();
     expect(link!.startsWith(baseUrl())).toBe(true);
     const owner = (await phone.newPage()).page;
@@ -84,18 +94,36 @@ describe("telling the owner", () => {
     expect(await owner.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
     expect(await seriousViolations(owner)).toEqual([]);
     // Leaving one out is refused beside it.
-    await owner.getByRole("group", { name: /Brake pads worn/ }).getByLabel("Approve").check();
-    await owner.getByRole("group", { name: /Front discs/ }).getByLabel("Approve").check();
+    await owner
+      .getByRole("group", { name: /Brake pads worn/ })
+      .getByLabel("Approve")
+      .check();
+    await owner
+      .getByRole("group", { name: /Front discs/ })
+      .getByLabel("Approve")
+      .check();
     await owner.getByRole("button", { name: /Send my answer/ }).click();
     await owner.getByText("Choose approve or decline.").waitFor();
-    await owner.getByRole("group", { name: /Brake pads worn/ }).getByLabel("Approve").check();
-    await owner.getByRole("group", { name: /Front discs/ }).getByLabel("Approve").check();
-    await owner.getByRole("group", { name: /Wiper blades/ }).getByLabel("Decline").check();
+    await owner
+      .getByRole("group", { name: /Brake pads worn/ })
+      .getByLabel("Approve")
+      .check();
+    await owner
+      .getByRole("group", { name: /Front discs/ })
+      .getByLabel("Approve")
+      .check();
+    await owner
+      .getByRole("group", { name: /Wiper blades/ })
+      .getByLabel("Decline")
+      .check();
     await owner.getByLabel("A note for the workshop (optional)").fill("Wipers next time, thanks.");
     await owner.getByRole("button", { name: /Send my answer/ }).click();
     await owner.getByRole("status").filter({ hasText: "you approved 2 of 3 items" }).waitFor();
     // Approved with what is owed: 21.00 + 266.00 + 90.00 = 377.00, VAT 75.40 → 452.40 (by hand).
-    await owner.getByRole("region", { name: "What you approved, with what is owed" }).getByText("£452.40").waitFor();
+    await owner
+      .getByRole("region", { name: "What you approved, with what is owed" })
+      .getByText("£452.40")
+      .waitFor();
 
     // The paper copy: A4 pages from Chromium's own print.
     const pdf = Buffer.from(await owner.pdf({ preferCSSPageSize: true, printBackground: false }));
@@ -104,7 +132,8 @@ describe("telling the owner", () => {
     expect(pages.length).toBeLessThanOrEqual(3);
     // A4 is 210 × 297 mm = 595.28 × 841.89 pt (ISO 216).
     expect(pdf.toString("latin1")).toMatch(/\/MediaBox\s*\[\s*0 0 595\.\d+ 841\.\d+\s*\]/);
-    if (process.env.RL_KEEP_PDF) await (await import("node:fs/promises")).writeFile(process.env.RL_KEEP_PDF, pdf);
+    if (process.env.RL_KEEP_PDF)
+      await (await import("node:fs/promises")).writeFile(process.env.RL_KEEP_PDF, pdf);
 
     // Paying the diagnostic fee on the payments fake's page, then back on the owner's page.
     await owner.getByRole("button", { name: /Pay the diagnostic fee/ }).click();

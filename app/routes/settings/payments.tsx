@@ -6,7 +6,7 @@ import { FormMessages } from "~/components/ui/form-errors";
 import { formatDate } from "~/domain/format";
 import { dbContext } from "~/http/context";
 import { onForm, readForm } from "~/http/forms.server";
-import { formatMoney } from "~/money";
+import { formatMinor } from "~/money";
 import { refundPayment } from "~/payments/checkout.server";
 import { keptEvents, listPayments } from "~/payments/overview.server";
 import { PAYMENT_PURPOSE_LABEL, PAYMENT_STATUS_LABEL } from "~/domain/owner-side";
@@ -34,7 +34,7 @@ export async function action({ request, context }: Route.ActionArgs) {
   if (!form.ok) return form.answer;
   return onForm(async () => {
     const done = await refundPayment(context.get(dbContext), member, form.value.paymentId);
-    return `Refunded ${formatMoney(done.amountMinor, done.currency)}.`;
+    return `Refunded ${formatMinor(done.amountMinor, done.currency)}.`;
   });
 }
 
@@ -54,7 +54,7 @@ export default function Payments({ loaderData, actionData }: Route.ComponentProp
       {loaderData.payments.length === 0 ? <p>No payments yet.</p> : null}
       <ul className="grid gap-3" aria-label="Payments">
         {loaderData.payments.map((p) => {
-          const amount = formatMoney(p.amountMinor, p.currency);
+          const amount = formatMinor(p.amountMinor, p.currency);
           return (
             <li
               key={p.id}
