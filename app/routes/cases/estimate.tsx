@@ -4,6 +4,7 @@ import { can } from "~/domain/permissions";
 import { CASE_STATE_LABEL } from "~/domain/cases";
 import { estimatePage } from "~/estimates/estimate-page.server";
 import { runEstimateForm } from "~/estimates/estimate-actions.server";
+import { loadEstimateCase } from "~/estimates/estimate-case.server";
 import { dbContext } from "~/http/context";
 import { FormMessages } from "~/components/ui/form-errors";
 import { ItemCard, TotalsTable } from "~/components/estimate/money-lines";
@@ -27,8 +28,11 @@ export async function loader({ params, context }: Route.LoaderArgs) {
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {
+  const db = context.get(dbContext);
+  // Another workshop's case does not exist for this member, whatever their role: 404 before 403.
+  await loadEstimateCase(db, context.get(memberContext).workshopId, params.caseId);
   const member = requirePermission(context.get(memberContext), "estimate:manage");
-  return runEstimateForm(context.get(dbContext), member, params.caseId, await request.formData());
+  return runEstimateForm(db, member, params.caseId, await request.formData());
 }
 
 export function meta({ data }: Route.MetaArgs) {

@@ -133,10 +133,28 @@ export default function OwnerEstimate({ loaderData, actionData }: Route.Componen
             </div>
           )}
         </Form>
-        {deposit > 0 ? (
-          <p className="text-graphite-700">
-            The diagnostic fee of {formatMinor(deposit, doc.currency)} is owed whatever you decide.
+        {payment ? (
+          <p role="status" className="rounded-lg border border-sound bg-card p-3 font-medium">
+            {payment.status === "refunded"
+              ? `Refunded: ${formatMinor(payment.amountMinor, doc.currency)} went back to your card.`
+              : `Paid, thank you: ${formatMinor(payment.amountMinor, doc.currency)} received for the diagnosis.`}
           </p>
+        ) : deposit > 0 ? (
+          <div className="grid gap-2 print:hidden">
+            <p className="text-graphite-700">
+              The diagnostic fee of {formatMinor(deposit, doc.currency)} is owed whatever you decide. You can
+              pay it now, on the payment service&apos;s page, or at the workshop.
+            </p>
+            <Form method="post">
+              <input type="hidden" name="intent" value="pay" />
+              <button
+                type="submit"
+                className="min-h-tap rounded-lg border-2 border-uv-600 px-5 font-semibold text-uv-700 hover:bg-paper"
+              >
+                Pay the diagnostic fee ({formatMinor(deposit, doc.currency)})
+              </button>
+            </Form>
+          </div>
         ) : null}
       </section>
       <footer className="text-sm text-graphite-700">
