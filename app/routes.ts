@@ -25,6 +25,7 @@ export default [
     route("settings", "routes/settings/workshop.tsx"),
     route("settings/members", "routes/settings/members.tsx"),
     route("settings/audit", "routes/settings/audit.tsx"),
+    route("settings/mail", "routes/settings/mail.tsx"),
   ]),
   route("api/search", "routes/api/search.ts"),
   route("api/quick-find", "routes/api/quick-find.ts"),

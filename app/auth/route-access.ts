@@ -73,6 +73,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
     },
   },
   "routes/settings/audit.tsx": { path: "/settings/audit", GET: "audit:read" },
+  "routes/settings/mail.tsx": { path: "/settings/mail", GET: "mail:read", POST: { resend: "mail:read" } },
   "routes/cases/new.tsx": { path: "/cases/new", GET: "case:open", POST: "case:open" },
   "routes/cases/workbench.tsx": {
     path: "/cases/{case}",

@@ -37,6 +37,7 @@ export async function loader({ context }: Route.LoaderArgs) {
     workshop: await getWorkshop(context.get(dbContext), member.workshopId),
     canEdit: can(member.role, "settings:manage"),
     role: member.role,
+    canReadMail: can(member.role, "mail:read"),
   };
 }
 
@@ -80,6 +81,14 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
           to={href("/settings/audit")}
         >
           Audit log
+        </Link>
+      ) : null}
+      {loaderData.canReadMail ? (
+        <Link
+          className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+          to={href("/settings/mail")}
+        >
+          Mail
         </Link>
       ) : null}
       <Form method="post" action={href("/sign-out")} className="ml-auto">
