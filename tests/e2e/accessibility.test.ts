@@ -48,7 +48,7 @@ const VISITS: { login: string | null; paths: string[] }[] = [
     ],
   },
   { login: "dana-reyes", paths: [CASE("b4"), CASE("b5")] },
-  { login: "ines-okafor", paths: ["/settings", "/settings/members", "/settings/audit"] },
+  { login: "ines-okafor", paths: ["/settings", "/settings/members", "/settings/audit", "/settings/mail"] },
 ];
 
 for (const view of [
