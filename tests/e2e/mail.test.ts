@@ -1,9 +1,26 @@
-import { describe, expect, it } from "vitest";
+import { eq } from "drizzle-orm";
+import type { Page } from "playwright-core";
+import { afterAll, describe, expect, inject, it } from "vitest";
+import { createDb } from "~/db/client.server";
+import { mailOutbox, workshops } from "~/db/schema";
 import { seriousViolations } from "./axe";
 import { baseUrl, signInAs, useBrowser } from "./browser";
 
 // 375 px: a common small phone width in CSS pixels (common practice, no published source).
 const browser = useBrowser({ width: 375, height: 812 });
+const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 1 });
+afterAll(() => pool.end());
+
+async function waitForState(page: Page, to: string, state: string) {
+  const item = page.getByRole("listitem").filter({ hasText: `To ${to}` });
+  const until = Date.now() + 15_000;
+  while (!(await item.getByText(state, { exact: true }).isVisible())) {
+    if (Date.now() > until) throw new Error(`still ${await item.innerText()}`);
+    await page.waitForTimeout(300);
+    await page.reload();
+  }
+  return item;
+}
 
 describe("an admin reads the workshop's mail", () => {
   it("sees the invitation e-mail that was queued, then sent, with its text, on a phone", async () => {
@@ -26,12 +43,7 @@ describe("an admin reads the workshop's mail", () => {
         .filter({ hasText: subject });
     await item().waitFor();
     // Delivered by the server's own worker within a few polls; the page shows it on reload.
-    const until = Date.now() + 15_000;
-    while (!(await item().getByText("Sent", { exact: true }).isVisible())) {
-      if (Date.now() > until) throw new Error(`still ${await item().innerText()}`);
-      await page.waitForTimeout(300);
-      await page.reload();
-    }
+    await waitForState(page, "mail.page@mail.example", "Sent");
     await expect(item().getByText("1 attempt").isVisible()).resolves.toBe(true);
     await item().getByText("The text").click();
     await item().getByText("invited you to join Bramblegate Motor Works as technician").waitFor();
@@ -42,6 +54,41 @@ describe("an admin reads the workshop's mail", () => {
     );
     expect(overflow).toBe(0);
     expect(await seriousViolations(page)).toEqual([]);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("sends a message that ran out of tries again, once the admin asks", async () => {
+    const [w] = await db
+      .select({ id: workshops.id })
+      .from(workshops)
+      .where(eq(workshops.slug, "bramblegate"));
+    // A message as the worker leaves it after its last try (the relay was away all along).
+    await db.insert(mailOutbox).values({
+      workshopId: w.id,
+      kind: "test",
+      toAddress: "gave.up@mail.example",
+      subject: "A message that ran out of tries",
+      text: "Hello again",
+      state: "failed",
+      attempts: 6,
+      lastError: "connect ECONNREFUSED 127.0.0.1:25",
+    });
+    await browser.clearCookies();
+    const { page, errors } = await browser.newPage();
+    await signInAs(page, "ines-okafor");
+    await page.goto(`${baseUrl()}/settings/mail`);
+    const item = page.getByRole("listitem").filter({ hasText: "To gave.up@mail.example" });
+    await item.getByText("Not delivered", { exact: true }).waitFor();
+    await item.getByText("Last error: connect ECONNREFUSED 127.0.0.1:25").waitFor();
+    await item.getByRole("button", { name: "Send again" }).click();
+    await page
+      .getByRole("status")
+      .filter({ hasText: "The e-mail to gave.up@mail.example is queued again." })
+      .waitFor();
+    const sent = await waitForState(page, "gave.up@mail.example", "Sent");
+    await sent.getByText("7 attempts").waitFor();
+    await expect(sent.getByRole("button", { name: "Send again" }).count()).resolves.toBe(0);
     expect(errors).toEqual([]);
     await page.close();
   });

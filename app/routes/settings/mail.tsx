@@ -5,7 +5,7 @@ import { RouteErrorPage } from "~/components/error-page";
 import { FormMessages } from "~/components/ui/form-errors";
 import { formatDate } from "~/domain/format";
 import { dbContext } from "~/http/context";
-import { onForm, readForm } from "~/http/forms.server";
+import { invalid, onForm, readForm } from "~/http/forms.server";
 import { listOutbox, resendMail } from "~/mail/outbox.server";
 import type { Route } from "./+types/mail";
 
@@ -22,7 +22,9 @@ export async function loader({ context }: Route.LoaderArgs) {
 export async function action({ request, context }: Route.ActionArgs) {
   const member = requirePermission(context.get(memberContext), "mail:read");
   const form = await readForm(request, ActionSchema);
-  if (!form.ok) return form.answer;
+  // The form's only fields are hidden: say so above the list instead of beside a field nobody sees.
+  if (!form.ok)
+    return invalid({ form: ["Choose a message from the list to send it again. Nothing was changed."] });
   return onForm(() => resendMail(context.get(dbContext), member, form.value.outboxId));
 }
 

@@ -124,6 +124,29 @@ describe("the mail outbox", () => {
     expect(message.messageId).toBe(messageIdFor(id));
   });
 
+  it("lets pg-boss make the row failed on its last try, counting every attempt", async () => {
+    const port = await smtpOn();
+    await smtpDown();
+    process.env.SMTP_URL = `smtp://127.0.0.1:${port}`;
+    // Two tries in all: the first and one retry a second later.
+    await startMailWorker({
+      db: testDb(),
+      connectionString: process.env.DATABASE_URL,
+      policy: { retryLimit: 1, retryDelay: 1, retryBackoff: false, expireInSeconds: 30 },
+      pollingIntervalSeconds: 0.5,
+    });
+    const id = await testDb().transaction((tx) => queueMail(tx, mail("Never reaches the relay")));
+    const failed = await until("the last try", async () => {
+      const r = await row(id);
+      return r.state === "failed" && r;
+    });
+    expect(failed.attempts).toBe(2);
+    expect(failed.lastError).toMatch(/ECONNREFUSED|connect/i);
+    // No third try: the job is spent, the row waits for "Send again".
+    await new Promise((r) => setTimeout(r, 2_000));
+    expect(await row(id)).toMatchObject({ state: "failed", attempts: 2 });
+  });
+
   it("sends a message once when two deliveries of the same job run, together or later", async () => {
     await smtpOn();
     const id = await testDb().transaction((tx) => queueMail(tx, mail("Only once")));
