@@ -22,6 +22,8 @@ export const streamTimeout = 5_000;
 export { requestContext } from "~/http/context";
 // …and closes the database pool on its way out; tests running the build close it the same way.
 export { closeServerDb } from "./db/pool.server";
+// …and runs the outbox's delivery jobs beside the requests, stopping them before the pool closes.
+export { startMailWorker, stopMailWorker } from "./mail/worker.server";
 
 /**
  * Errors the framework reports. A write from another origin that React Router's own check refuses

@@ -29,6 +29,7 @@ export default [
     route("settings/members", "routes/settings/members.tsx"),
     route("settings/audit", "routes/settings/audit.tsx"),
     route("settings/payments", "routes/settings/payments.tsx"),
+    route("settings/mail", "routes/settings/mail.tsx"),
   ]),
   route("api/search", "routes/api/search.ts"),
   route("api/quick-find", "routes/api/quick-find.ts"),

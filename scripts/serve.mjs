@@ -124,15 +124,29 @@ async function serve() {
   server.listen(port, host, () => {
     if (cluster.isPrimary) console.log(`[ramplight] serving on http://${host}:${port}`);
   });
+  // The outbox's deliveries run in every server process (pg-boss shares the jobs out). A worker
+  // that cannot start leaves the pages working and says why; queued mail waits for the next start.
+  const mailWorker = build.entry.module
+    .startMailWorker()
+    .catch((error) => console.error(`[ramplight] mail delivery did not start: ${error.message}`));
 
   let closing = false;
   for (const signal of ["SIGTERM", "SIGINT"]) {
     process.on(signal, () => {
       if (closing) return;
       closing = true;
-      // Finish what is in flight, close the database pool, then leave; a stuck connection does
-      // not hold the exit for long.
-      server.close(() => void build.entry.module.closeServerDb().finally(() => process.exit(0)));
+      // Finish what is in flight, let the mail job in hand finish, close the database pool, then
+      // leave; a stuck connection does not hold the exit for long.
+      server.close(
+        () =>
+          void mailWorker
+            .then(() => build.entry.module.stopMailWorker())
+            .catch((error) =>
+              console.error(`[ramplight] mail delivery did not stop cleanly: ${error.message}`),
+            )
+            .then(() => build.entry.module.closeServerDb())
+            .finally(() => process.exit(0)),
+      );
       server.closeIdleConnections();
       setTimeout(() => process.exit(0), 5_000).unref();
     });

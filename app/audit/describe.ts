@@ -152,6 +152,7 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
   "workshop.create": (a) => `created the workshop ${a.name ?? ""}`.trim(),
   "member.invite": (a, _b, s) =>
     `invited ${s.invitee ?? a.email ?? a.githubLogin ?? "someone"} as ${role(a.role)}`,
+  "mail.resend": (a) => `sent the e-mail “${a.subject}” to ${a.to} again`,
   "member.invite_revoke": (_a, _b, s) => `withdrew the invitation${s.invitee ? ` of ${s.invitee}` : ""}`,
   "member.join": (a) => `joined the workshop as ${role(a.role)}`,
   "member.role": (a, b, s) =>

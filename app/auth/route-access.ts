@@ -87,6 +87,7 @@ export const ROUTE_ACCESS: Record<string, RouteAccess> = {
     GET: "payment:refund",
     POST: { refund: "payment:refund" },
   },
+  "routes/settings/mail.tsx": { path: "/settings/mail", GET: "mail:read", POST: { resend: "mail:read" } },
   "routes/cases/new.tsx": { path: "/cases/new", GET: "case:open", POST: "case:open" },
   "routes/cases/workbench.tsx": {
     path: "/cases/{case}",

@@ -1,5 +1,10 @@
+import { and, desc, eq } from "drizzle-orm";
+import { audit } from "~/audit/write.server";
+import type { CurrentMember } from "~/auth/guards.server";
 import type { Db, Tx } from "~/db/client.server";
 import { mailOutbox } from "~/db/schema";
+import { refuse } from "~/http/errors.server";
+import { enqueueDelivery } from "./queue.server";
 
 export type QueuedMail = {
   workshopId: string | null;
@@ -11,9 +16,9 @@ export type QueuedMail = {
 };
 
 /**
- * Puts a message in the outbox, inside the caller's transaction: it exists exactly when the event
- * it tells of was committed, and the job queue delivers it afterwards (retrying while the mail
- * server is away). Returns the outbox row's id.
+ * Puts a message in the outbox and asks the job queue to deliver it, both inside the caller's
+ * transaction: the message exists exactly when the event it tells of was committed, and pg-boss
+ * delivers it afterwards (retrying while the mail server is away). Returns the outbox row's id.
  */
 export async function queueMail(tx: Db | Tx, mail: QueuedMail): Promise<string> {
   const [row] = await tx
@@ -27,5 +32,71 @@ export async function queueMail(tx: Db | Tx, mail: QueuedMail): Promise<string> 
       text: mail.text,
     })
     .returning({ id: mailOutbox.id });
+  await enqueueDelivery(tx, row.id);
   return row.id;
+}
+
+const SHOWN = 200; // the newest messages; older ones stay in the table
+
+/** The workshop's messages, newest first, for the admin's mail page. */
+export async function listOutbox(db: Db, workshopId: string) {
+  return db
+    .select({
+      id: mailOutbox.id,
+      kind: mailOutbox.kind,
+      to: mailOutbox.toAddress,
+      subject: mailOutbox.subject,
+      text: mailOutbox.text,
+      state: mailOutbox.state,
+      attempts: mailOutbox.attempts,
+      lastError: mailOutbox.lastError,
+      createdAt: mailOutbox.createdAt,
+      sentAt: mailOutbox.sentAt,
+    })
+    .from(mailOutbox)
+    .where(eq(mailOutbox.workshopId, workshopId))
+    .orderBy(desc(mailOutbox.createdAt), desc(mailOutbox.id))
+    .limit(SHOWN);
+}
+
+/**
+ * An admin's "Send again" for a message that ran out of tries: back to `queued` with a fresh job,
+ * in one transaction with its audit row. Only a failed message of the admin's own workshop qualifies;
+ * one already sent is never sent twice.
+ */
+export async function resendMail(db: Db, by: CurrentMember, outboxId: string): Promise<string> {
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(mailOutbox)
+      .set({ state: "queued" })
+      .where(
+        and(
+          eq(mailOutbox.id, outboxId),
+          eq(mailOutbox.workshopId, by.workshopId),
+          eq(mailOutbox.state, "failed"),
+        ),
+      )
+      .returning({ id: mailOutbox.id, to: mailOutbox.toAddress, subject: mailOutbox.subject });
+    if (!row) {
+      const [other] = await tx
+        .select({ state: mailOutbox.state })
+        .from(mailOutbox)
+        .where(and(eq(mailOutbox.id, outboxId), eq(mailOutbox.workshopId, by.workshopId)));
+      if (!other) refuse(404, "That message does not exist.");
+      refuse(
+        409,
+        other.state === "sent" ? "That message was sent already." : "That message is already queued.",
+      );
+    }
+    await enqueueDelivery(tx, row.id);
+    await audit(tx, {
+      workshopId: by.workshopId,
+      actorUserId: by.userId,
+      action: "mail.resend",
+      entity: "mail",
+      entityId: row.id,
+      after: { to: row.to, subject: row.subject },
+    });
+    return `The e-mail to ${row.to} is queued again.`;
+  });
 }

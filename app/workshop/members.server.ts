@@ -7,7 +7,8 @@ import { identities, invitations, members, users } from "~/db/schema";
 import type { Role } from "~/domain/people";
 import { env } from "~/config/env.server";
 import { refuse } from "~/http/errors.server";
-import { sendMail } from "~/mail/mailer.server";
+import { mailConfigured } from "~/mail/mailer.server";
+import { queueMail } from "~/mail/outbox.server";
 import { z } from "zod";
 
 const INVITE_DAYS = 14;
@@ -47,8 +48,10 @@ export async function listPendingInvitations(db: Db, workshopId: string) {
 const LOGIN = /^[A-Za-z0-9](?:[A-Za-z0-9-]{0,38})$/;
 
 /**
- * An invitation by e-mail address or code-hosting login, and its e-mail. The invitation stands
- * even when the mail relay is down; the answer says so. Refusals name the field they concern.
+ * An invitation by e-mail address or code-hosting login. An e-mail invitation's message enters the
+ * outbox in the same transaction, and the job queue delivers it: the invitation stands even when
+ * the mail relay is down, and the answer says the message is on its way rather than that it arrived.
+ * Refusals name the field they concern.
  */
 export async function invite(
   db: Db,
@@ -67,20 +70,19 @@ export async function invite(
   );
   if (!isEmail)
     return `Invitation saved for ${input.target}: they join as ${input.role} when they next sign in.`;
-  const sent = await sendMail({
-    to: input.target,
+  return mailConfigured()
+    ? `Invitation saved; the e-mail to ${input.target} is queued and goes out shortly (Settings → Mail shows when it was sent).`
+    : `Invitation saved for ${input.target}: no mail server is set up, so the e-mail waits in the outbox. Tell them to sign in with that address.`;
+}
+
+function invitationMail(by: CurrentMember, email: string, role: Role) {
+  return {
+    workshopId: by.workshopId,
+    kind: "invitation",
+    to: email,
     subject: `You are invited to ${by.workshopName} on Ramplight`,
-    text: `${by.name} invited you to join ${by.workshopName} as ${input.role}.\n\nSign in at ${env().APP_URL}/sign-in with the GitHub account that uses this e-mail address.\n\nThe invitation is valid for ${INVITE_DAYS} days.`,
-  }).catch((error: Error) => {
-    console.warn("invitation mail not sent:", error.message);
-    return "failed" as const;
-  });
-  // Saved, so not a refusal: the notice says what did not happen and what to do.
-  if (sent === "failed")
-    return `Invitation saved, but the e-mail to ${input.target} could not be sent. Tell them to sign in with that address.`;
-  return sent
-    ? `Invitation e-mailed to ${input.target}.`
-    : `Invitation saved for ${input.target}: they join as ${input.role} when they next sign in.`;
+    text: `${by.name} invited you to join ${by.workshopName} as ${role}.\n\nSign in at ${env().APP_URL}/sign-in with the GitHub account that uses this e-mail address.\n\nThe invitation is valid for ${INVITE_DAYS} days.`,
+  };
 }
 
 export async function inviteMember(
@@ -108,6 +110,7 @@ export async function inviteMember(
       entityId: row.id,
       after: input,
     });
+    if (input.email) await queueMail(tx, invitationMail(by, input.email, input.role));
     return row.id;
   });
 }

@@ -1,10 +1,15 @@
 import { migrate } from "drizzle-orm/node-postgres/migrator";
 import { fileURLToPath } from "node:url";
 import { createDb } from "../../app/db/client.server";
+import { installMailQueue } from "../../app/mail/queue.server";
 import { seedDemo } from "../../seeds/demo";
 import { TEMPLATE_DB, adminUrl, withAdmin } from "./pg-admin";
 
-/** Builds the template database once per run: migrations from drizzle/, then the demo seed. */
+/**
+ * Builds the template database once per run: migrations from drizzle/, pg-boss's schema and the
+ * mail queue (once here, so each test's copy has them instead of every file creating them), then
+ * the demo seed.
+ */
 export async function buildTemplate() {
   await withAdmin(async (c) => {
     await c.query(`drop database if exists "${TEMPLATE_DB}" with (force)`);
@@ -17,4 +22,5 @@ export async function buildTemplate() {
   } finally {
     await pool.end();
   }
+  await installMailQueue(adminUrl(TEMPLATE_DB));
 }

@@ -43,6 +43,7 @@ export async function loader({ context }: Route.LoaderArgs) {
     canEdit: can(member.role, "settings:manage"),
     canRefund: can(member.role, "payment:refund"),
     role: member.role,
+    canReadMail: can(member.role, "mail:read"),
   };
 }
 
@@ -94,6 +95,14 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
           to={href("/settings/audit")}
         >
           Audit log
+        </Link>
+      ) : null}
+      {loaderData.canReadMail ? (
+        <Link
+          className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+          to={href("/settings/mail")}
+        >
+          Mail
         </Link>
       ) : null}
       <Form method="post" action={href("/sign-out")} className="ml-auto">
