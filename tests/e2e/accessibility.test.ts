@@ -48,7 +48,10 @@ const VISITS: { login: string | null; paths: string[] }[] = [
     ],
   },
   { login: "dana-reyes", paths: ["/desk", CASE("b4"), `${CASE("b4")}/estimate`, CASE("b5")] },
-  { login: "ines-okafor", paths: ["/settings", "/settings/members", "/settings/audit", "/settings/mail", "/settings/payments"] },
+  {
+    login: "ines-okafor",
+    paths: ["/settings", "/settings/members", "/settings/audit", "/settings/mail", "/settings/payments"],
+  },
 ];
 
 for (const view of [

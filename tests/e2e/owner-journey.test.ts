@@ -130,14 +130,17 @@ describe("telling the owner", () => {
     const pages = pdf.toString("latin1").match(/\/Type\s*\/Page[^s]/g) ?? [];
     expect(pages.length).toBeGreaterThanOrEqual(1);
     expect(pages.length).toBeLessThanOrEqual(3);
-    // A4 is 210 × 297 mm = 595.28 × 841.89 pt (ISO 216).
-    expect(pdf.toString("latin1")).toMatch(/\/MediaBox\s*\[\s*0 0 595\.\d+ 841\.\d+\s*\]/);
+    // A4 is 210 × 297 mm = 595.28 × 841.89 pt (ISO 216); Chromium rounds to its own units.
+    const box = /\/MediaBox\s*\[\s*0 0 ([\d.]+) ([\d.]+)\s*\]/.exec(pdf.toString("latin1"));
+    expect(Math.abs(Number(box?.[1]) - 595.28)).toBeLessThan(1.5);
+    expect(Math.abs(Number(box?.[2]) - 841.89)).toBeLessThan(1.5);
     if (process.env.RL_KEEP_PDF)
       await (await import("node:fs/promises")).writeFile(process.env.RL_KEEP_PDF, pdf);
 
     // Paying the diagnostic fee on the payments fake's page, then back on the owner's page.
     await owner.getByRole("button", { name: /Pay the diagnostic fee/ }).click();
-    await owner.getByRole("button", { name: "Pay" }).click();
+    await owner.waitForURL((u) => u.pathname.startsWith("/pay/"));
+    await owner.getByRole("button", { name: "Pay", exact: true }).click();
     await owner.waitForURL((u) => u.toString().startsWith(link!));
     await owner.getByText("Paid, thank you").waitFor();
 
@@ -147,6 +150,7 @@ describe("telling the owner", () => {
     await page.getByText("Wiper blades declined").waitFor();
     const notice = await mailTo("priya@bramblegate.example", /the owner answered/);
     expect(notice.text).toContain("approved 2 of 3 items");
-    expect(errors).toEqual([]);
+    // The one refusal on purpose (the three-decimal price) is a 400 the browser logs; nothing else.
+    expect(errors.filter((e) => !/status of 400/.test(e))).toEqual([]);
   });
 });

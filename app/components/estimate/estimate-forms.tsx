@@ -36,8 +36,10 @@ export function AddLineForm({
   return (
     <Form method="post" className="grid gap-3 sm:grid-cols-2" noValidate>
       <input type="hidden" name="intent" value="add-line" />
-      <label className="grid text-sm font-medium" htmlFor="est-itemId">
-        Item
+      <div className="grid">
+        <label className="text-sm font-medium" htmlFor="est-itemId">
+          Item
+        </label>
         <select id="est-itemId" name="itemId" className={field} {...describedBy(errors, "itemId")}>
           {items.map((i) => (
             <option key={i.id} value={i.id}>
@@ -46,9 +48,11 @@ export function AddLineForm({
           ))}
         </select>
         <FieldError errors={errors} name="itemId" />
-      </label>
-      <label className="grid text-sm font-medium" htmlFor="est-kind">
-        What the line is for
+      </div>
+      <div className="grid">
+        <label className="text-sm font-medium" htmlFor="est-kind">
+          What the line is for
+        </label>
         <select id="est-kind" name="kind" className={field} defaultValue="part">
           {ESTIMATE_LINE_KINDS.map((k) => (
             <option key={k} value={k}>
@@ -57,7 +61,7 @@ export function AddLineForm({
           ))}
         </select>
         <FieldError errors={errors} name="kind" />
-      </label>
+      </div>
       <Input name="description" label="Description" errors={errors} />
       <Input name="partNumber" label="Part number (optional)" errors={errors} />
       <Input
@@ -91,8 +95,10 @@ export function AddItemForm({ errors }: { errors?: FormErrors }) {
     <Form method="post" className="grid gap-3 sm:grid-cols-[1fr_auto_auto] sm:items-end" noValidate>
       <input type="hidden" name="intent" value="add-item" />
       <Input name="title" label="New item, as the owner will read it" errors={errors} />
-      <label className="grid text-sm font-medium" htmlFor="est-priority">
-        Priority
+      <div className="grid">
+        <label className="text-sm font-medium" htmlFor="est-priority">
+          Priority
+        </label>
         <select id="est-priority" name="priority" className={field} defaultValue="soon">
           {PRIORITIES.map((p) => (
             <option key={p} value={p}>
@@ -100,7 +106,7 @@ export function AddItemForm({ errors }: { errors?: FormErrors }) {
             </option>
           ))}
         </select>
-      </label>
+      </div>
       <button type="submit" className={plain}>
         Add the item
       </button>

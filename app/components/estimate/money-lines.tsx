@@ -76,6 +76,7 @@ export function TotalsTable({
 }) {
   const row = (label: string, minor: number, strong = false) => (
     <div
+      key={label}
       className={`flex justify-between gap-4 py-1 ${strong ? "border-t border-rule pt-2 text-lg font-semibold" : ""}`}
     >
       <dt>{label}</dt>
@@ -87,11 +88,9 @@ export function TotalsTable({
       <h3 className="font-semibold">{caption}</h3>
       <dl className="mt-2">
         {row("Before VAT", totals.net)}
-        {totals.bands.map((b) => (
-          <div key={b.rateBp}>
-            {row(`VAT at ${rateWords(b.rateBp)} on ${formatMinor(b.net, currency)}`, b.tax)}
-          </div>
-        ))}
+        {totals.bands.map((b) =>
+          row(`VAT at ${rateWords(b.rateBp)} on ${formatMinor(b.net, currency)}`, b.tax),
+        )}
         {row("Total", totals.gross, true)}
       </dl>
       <p className="mt-2 text-sm text-graphite-700">
