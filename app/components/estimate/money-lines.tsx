@@ -18,7 +18,7 @@ export function ItemCard({
   lineAction?: (index: number) => ReactNode;
 }) {
   return (
-    <div className="rounded-card border border-rule bg-card p-4">
+    <div className="break-inside-avoid rounded-card border border-rule bg-card p-4">
       <div className="flex flex-wrap items-start justify-between gap-2">
         <h3 className="text-lg font-semibold">{item.title}</h3>
         {item.required ? (
@@ -55,7 +55,7 @@ export function ItemCard({
         </ul>
       )}
       <p className="mt-2 flex justify-between border-t border-rule pt-2 font-semibold">
-        <span>Item</span>
+        <span>For this item</span>
         <span className="tabular">{formatMinor(item.amountMinor, currency)}</span>
       </p>
       {actions}
@@ -84,7 +84,7 @@ export function TotalsTable({
     </div>
   );
   return (
-    <section aria-label={caption} className="rounded-card border border-rule bg-card p-4">
+    <section aria-label={caption} className="break-inside-avoid rounded-card border border-rule bg-card p-4">
       <h3 className="font-semibold">{caption}</h3>
       <dl className="mt-2">
         {row("Before VAT", totals.net)}
