@@ -38,9 +38,16 @@ export async function queueMail(tx: Db | Tx, mail: QueuedMail): Promise<string> 
 
 const SHOWN = 200; // the newest messages; older ones stay in the table
 
-/** The workshop's messages, newest first, for the admin's mail page. */
+// A link that acts for someone (the owner's estimate link, a sign-in link) is theirs alone: the
+// admin's page shows that a link was sent, never the link itself.
+const PRIVATE_LINK =
+  /(\/(?:o|auth\/[a-z-]+)\/)[A-Za-z0-9_-]{20,}|([?&](?:token|code|magic)[^=&\s]*=)[^&\s]+/g;
+export const maskLinks = (text: string) =>
+  text.replace(PRIVATE_LINK, (_m, path, query) => `${path ?? query}[hidden]`);
+
+/** The workshop's messages, newest first, for the admin's mail page (private links hidden). */
 export async function listOutbox(db: Db, workshopId: string) {
-  return db
+  const rows = await db
     .select({
       id: mailOutbox.id,
       kind: mailOutbox.kind,
@@ -57,6 +64,7 @@ export async function listOutbox(db: Db, workshopId: string) {
     .where(eq(mailOutbox.workshopId, workshopId))
     .orderBy(desc(mailOutbox.createdAt), desc(mailOutbox.id))
     .limit(SHOWN);
+  return rows.map((r) => ({ ...r, text: maskLinks(r.text) }));
 }
 
 /**

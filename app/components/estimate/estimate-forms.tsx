@@ -160,11 +160,13 @@ export function RemoveButton({
   name,
   value,
   label,
+  text = "Remove",
 }: {
   intent: string;
   name: string;
   value: string;
   label: string;
+  text?: string;
 }) {
   return (
     <Form method="post">
@@ -175,7 +177,7 @@ export function RemoveButton({
         className="min-h-tap rounded-lg px-3 text-sm text-stop underline"
         aria-label={label}
       >
-        Remove
+        {text}
       </button>
     </Form>
   );

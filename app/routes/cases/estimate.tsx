@@ -129,7 +129,8 @@ export default function Estimate({ loaderData, actionData }: Route.ComponentProp
                     intent="remove-item"
                     name="itemId"
                     value={item.id}
-                    label={`Remove item ${item.title}`}
+                    label={`Remove the item ${item.title}`}
+                    text="Remove the item"
                   />
                 </div>
               ) : null
