@@ -4,7 +4,7 @@ import type { CurrentMember } from "~/auth/guards.server";
 import type { Db, Tx } from "~/db/client.server";
 import { estimateItems, estimateLines } from "~/db/schema";
 import type { Priority } from "~/domain/knowledge";
-import type { EstimateLineKind } from "~/domain/owner-side";
+import type { SentLine } from "~/domain/estimate-document";
 import { refuse } from "~/http/errors.server";
 import { divRound, toBasisPoints } from "~/money";
 import type { DraftItem } from "./document";
@@ -162,15 +162,8 @@ export async function addItem(
   });
 }
 
-export type LineInput = {
-  itemId: string;
-  kind: EstimateLineKind;
-  description: string;
-  partNumber: string | null;
-  quantityMilli: number;
-  unitMinor: number;
-  taxRateBp: number;
-};
+/** A new line as typed: what a sent line keeps, less the amount worked out from it. */
+export type LineInput = Omit<SentLine, "amountMinor"> & { itemId: string };
 
 export async function addLine(db: Db, who: Who, caseId: string, line: LineInput) {
   await db.transaction(async (tx) => {

@@ -93,29 +93,17 @@ describe("telling the owner", () => {
     await owner.getByText("We measured brake pad friction material thickness: 0.8 mm").waitFor();
     expect(await owner.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
     expect(await seriousViolations(owner)).toEqual([]);
+    const choose = async (choices: [RegExp, "Approve" | "Decline"][]) => {
+      for (const [item, choice] of choices)
+        await owner.getByRole("group", { name: item }).getByLabel(choice).check();
+    };
     // Leaving one out is refused beside it.
-    await owner
-      .getByRole("group", { name: /Brake pads worn/ })
-      .getByLabel("Approve")
-      .check();
-    await owner
-      .getByRole("group", { name: /Front discs/ })
-      .getByLabel("Approve")
-      .check();
+    const pads: [RegExp, "Approve"] = [/Brake pads worn/, "Approve"];
+    const discs: [RegExp, "Approve"] = [/Front discs/, "Approve"];
+    await choose([pads, discs]);
     await owner.getByRole("button", { name: /Send my answer/ }).click();
     await owner.getByText("Choose approve or decline.").waitFor();
-    await owner
-      .getByRole("group", { name: /Brake pads worn/ })
-      .getByLabel("Approve")
-      .check();
-    await owner
-      .getByRole("group", { name: /Front discs/ })
-      .getByLabel("Approve")
-      .check();
-    await owner
-      .getByRole("group", { name: /Wiper blades/ })
-      .getByLabel("Decline")
-      .check();
+    await choose([pads, discs, [/Wiper blades/, "Decline"]]);
     await owner.getByLabel("A note for the workshop (optional)").fill("Wipers next time, thanks.");
     await owner.getByRole("button", { name: /Send my answer/ }).click();
     await owner.getByRole("status").filter({ hasText: "you approved 2 of 3 items" }).waitFor();

@@ -11,6 +11,7 @@ import { seedId } from "../../seeds/ids";
 import { E2E_ENV } from "../setup/e2e-env";
 import { seriousViolations } from "./axe";
 import { baseUrl, signInAs, useBrowser } from "./browser";
+import { SAMPLE_SENT_DOCUMENT } from "../setup/sent-document";
 
 const browser = useBrowser({ width: 375, height: 800 });
 const { db, pool } = createDb(inject("e2eDatabaseUrl"), { max: 2 });
@@ -31,20 +32,7 @@ async function paidPayment(): Promise<string> {
       caseId,
       version: 900,
       toEmail: "owner@mail.example",
-      document: {
-        workshopName: "Bramblegate Motor Works",
-        caseNumber: 1041,
-        vehicle: "Test vehicle",
-        registration: "TEST 01",
-        ownerName: "Test Owner",
-        complaint: "Test complaint.",
-        currency: "GBP",
-        pricesIncludeTax: true,
-        findings: [],
-        items: [],
-        depositMinor: 4500,
-        message: "",
-      },
+      document: SAMPLE_SENT_DOCUMENT,
     })
     .returning({ id: sentEstimates.id });
   const { paymentId, url } = await startCheckout(db, {

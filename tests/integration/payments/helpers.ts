@@ -11,6 +11,7 @@ import { action as webhookAction } from "~/routes/api/payments-webhook";
 import { startFakePayments, type FakePayments } from "../../fakes/payments";
 import { TEST_ENV } from "../../setup/test-env";
 import { APP, BRAMBLEGATE, caseId, contextFor } from "../api/helpers";
+import { SAMPLE_SENT_DOCUMENT } from "../../setup/sent-document";
 
 export const SECRET = TEST_ENV.PAY_WEBHOOK_SECRET;
 export const CASE = caseId("b1");
@@ -71,20 +72,7 @@ export async function sentEstimate(db: Db, version: number): Promise<string> {
       caseId: CASE,
       version,
       toEmail: "owner@mail.example",
-      document: {
-        workshopName: "Bramblegate Motor Works",
-        caseNumber: 1041,
-        vehicle: "Test vehicle",
-        registration: "TEST 01",
-        ownerName: "Test Owner",
-        complaint: "Test complaint.",
-        currency: "GBP",
-        pricesIncludeTax: true,
-        findings: [],
-        items: [],
-        depositMinor: 4500,
-        message: "",
-      },
+      document: SAMPLE_SENT_DOCUMENT,
     })
     .returning({ id: sentEstimates.id });
   return row!.id;
