@@ -7,6 +7,7 @@ const browser = useBrowser();
 const AREA_HEADINGS: Record<string, string> = {
   "/board": "Board",
   "/cases": "Cases",
+  "/desk": "Front desk",
   "/settings": "Workshop settings",
   "/kb": "Knowledge base",
 };
