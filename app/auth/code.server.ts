@@ -43,7 +43,8 @@ export function codeStrategy() {
       secret: codeSecret(),
       cookieOptions: {
         path: "/sign-in",
-        maxAge: e.SIGN_IN_CODE_PERIOD_S,
+        // Outlives the code, so a late try hears "expired" rather than "no code here".
+        maxAge: e.SIGN_IN_CODE_PERIOD_S + 3600,
         ...(isSecure(e) ? { secure: true } : {}),
       },
       // Digits only: typed on a workshop phone with gloves more often than not. The library's own

@@ -18,7 +18,8 @@ export async function loader({ request, context }: Route.LoaderArgs) {
 
 const Schema = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("sign-out-one"), id: z.string().regex(/^[0-9a-f]{64}$/) }),
-  z.object({ intent: z.literal("sign-out-everywhere") }),
+  // Named twice on purpose: a stray post of the intent alone must not sign a person out everywhere.
+  z.object({ intent: z.literal("sign-out-everywhere"), confirm: z.literal("everywhere") }),
 ]);
 
 export async function action({ request, context }: Route.ActionArgs) {
@@ -97,6 +98,7 @@ export default function Sessions({ loaderData, actionData }: Route.ComponentProp
       </ul>
       <Form method="post" className="mt-6">
         <input type="hidden" name="intent" value="sign-out-everywhere" />
+        <input type="hidden" name="confirm" value="everywhere" />
         <button type="submit" className="min-h-tap rounded-lg bg-stop px-4 font-semibold text-white">
           Sign out everywhere
         </button>

@@ -1,6 +1,8 @@
 import { and, desc, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { sendCode, verifyCode } from "~/auth/code-sign-in.server";
+import { countSignIn } from "~/auth/rate-limit.server";
+import { startSignIn } from "~/auth/sign-in.server";
 import { mailOutbox, members, users, workshops } from "~/db/schema";
 import { TEST_ENV } from "../../setup/test-env";
 import { testDb } from "../../setup/integration-worker";
@@ -106,5 +108,22 @@ describe("sign-in code limits", () => {
     const other = await ask("priya@bramblegate.example", "198.51.100.20");
     const fine = await verify(other.code, other.cookie, "198.51.100.20");
     expect(fine).toBeInstanceOf(Response);
+  });
+
+  it("sends the landing page's GitHub button, once the address is over its limit, to a page that says when", async () => {
+    const ip = "198.51.100.77";
+    const now = new Date();
+    // Fill the address's bucket to the server's ceiling (300 per 5 minutes by default).
+    for (let i = 0; i < 300; i++) await countSignIn(testDb(), `ip:${ip}`, 300, 300, now);
+    const req = new Request(`${TEST_ENV.APP_URL}/auth/github`, {
+      method: "POST",
+      body: new URLSearchParams(),
+    });
+    const answer = await startSignIn(testDb(), req, ip).catch((r: unknown) => r);
+    expect(answer).toBeInstanceOf(Response);
+    const location = (answer as Response).headers.get("location")!;
+    expect(location).toMatch(/^\/sign-in\?retry=/);
+    const retry = new Date(new URL(location, TEST_ENV.APP_URL).searchParams.get("retry")!);
+    expect(retry.getTime() - now.getTime()).toBe(300_000);
   });
 });
