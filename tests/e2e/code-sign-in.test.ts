@@ -183,4 +183,19 @@ describe("sign-in with an e-mailed code", () => {
     await page.getByRole("heading", { level: 1, name: "This link did not sign you in" }).waitFor();
     await page.close();
   });
+
+  it("shows a refused sign-in on the page with the time to come back", async () => {
+    await browser.clearCookies();
+    const { page } = await browser.newPage();
+    const retry = new Date(Date.now() + 4 * 60_000).toISOString();
+    const res = await page.goto(`${baseUrl()}/sign-in?retry=${encodeURIComponent(retry)}`);
+    expect(res?.status()).toBe(429);
+    const alert = await page.getByRole("alert").textContent();
+    expect(alert).toMatch(
+      /^Too many sign-ins from this network\. Try again after \d\d:\d\d UTC \(in about [45] minutes\)\.$/,
+    );
+    expect(await seriousViolations(page)).toEqual([]);
+    expect(await noHorizontalScroll(page)).toBe(true);
+    await page.close();
+  });
 });
