@@ -70,11 +70,7 @@ export async function sendCode(db: Db, request: Request, socketAddress: string |
     );
   // The strategy reads the address from the form; hand it the normalised one.
   const body = new URLSearchParams({ email });
-  const answer = await runStrategy(
-    db,
-    new Request(request.url, { method: "POST", headers: request.headers, body }),
-  );
-  return answer;
+  return runStrategy(db, new Request(request.url, { method: "POST", headers: request.headers, body }));
 }
 
 /** Step two: the code typed on the page, or the one the magic link carries (same browser only). */

@@ -78,6 +78,7 @@ export async function revokeAllSessions(db: Db, userId: string) {
   await db.delete(sessions).where(eq(sessions.userId, userId));
 }
 
+// Only the start is shown: last_seen_at is written when a session opens and not on each request.
 /** The person's live sessions, newest first, each marked when it is the one asking. */
 export async function listSessions(db: Db, userId: string, currentToken: string, now = new Date()) {
   const current = hashToken(currentToken);
@@ -85,7 +86,6 @@ export async function listSessions(db: Db, userId: string, currentToken: string,
     .select({
       id: sessions.tokenHash,
       createdAt: sessions.createdAt,
-      lastSeenAt: sessions.lastSeenAt,
       userAgent: sessions.userAgent,
     })
     .from(sessions)

@@ -28,8 +28,12 @@ export function meta() {
 }
 
 const field = "mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base";
-const button =
-  "inline-flex min-h-tap w-full items-center justify-center rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700";
+const shape =
+  "inline-flex min-h-tap w-full items-center justify-center rounded-lg px-5 text-lg font-semibold text-white";
+const button = `${shape} bg-uv-600 hover:bg-uv-700`;
+// Outlined, not filled: readable in both themes.
+const secondary =
+  "inline-flex min-h-tap w-full items-center justify-center rounded-lg border border-rule bg-card px-5 text-lg font-semibold hover:bg-paper";
 
 export default function CodeSignIn({ loaderData, actionData }: Route.ComponentProps) {
   const errors = actionData && "errors" in actionData ? actionData.errors : undefined;
@@ -78,7 +82,7 @@ export default function CodeSignIn({ loaderData, actionData }: Route.ComponentPr
           />
           <FieldError errors={errors} name="email" />
         </label>
-        <button type="submit" className={pending ? button.replace("bg-uv-600", "bg-graphite-700") : button}>
+        <button type="submit" className={pending ? secondary : button}>
           {pending ? "E-mail me a new code" : "E-mail me a code"}
         </button>
       </Form>

@@ -31,7 +31,10 @@ export function SignInPanel({ message, next }: { message?: string; next?: string
       </Form>
       <Form method="post" action={href("/auth/github")}>
         {next ? <input type="hidden" name="next" value={next} /> : null}
-        <button type="submit" className={`${button} bg-graphite-700 hover:bg-graphite-800`}>
+        <button
+          type="submit"
+          className="inline-flex min-h-tap w-full items-center justify-center rounded-lg border border-rule bg-card px-5 text-lg font-semibold hover:bg-paper"
+        >
           Continue with GitHub
         </button>
       </Form>

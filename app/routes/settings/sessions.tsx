@@ -80,9 +80,7 @@ export default function Sessions({ loaderData, actionData }: Route.ComponentProp
               {describeDevice(s.userAgent)}
               {s.current ? " — this device" : ""}
             </p>
-            <p className="text-sm text-graphite-700">
-              Signed in {when(s.createdAt)}; last seen {when(s.lastSeenAt)}
-            </p>
+            <p className="text-sm text-graphite-700">Signed in {when(s.createdAt)}</p>
             <Form method="post" className="mt-2">
               <input type="hidden" name="intent" value="sign-out-one" />
               <input type="hidden" name="id" value={s.id} />
@@ -99,7 +97,10 @@ export default function Sessions({ loaderData, actionData }: Route.ComponentProp
       <Form method="post" className="mt-6">
         <input type="hidden" name="intent" value="sign-out-everywhere" />
         <input type="hidden" name="confirm" value="everywhere" />
-        <button type="submit" className="min-h-tap rounded-lg bg-stop px-4 font-semibold text-white">
+        <button
+          type="submit"
+          className="min-h-tap rounded-lg border-2 border-stop bg-card px-4 font-semibold hover:bg-paper"
+        >
           Sign out everywhere
         </button>
       </Form>
