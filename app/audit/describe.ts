@@ -154,6 +154,8 @@ const SAID: Record<string, (a: Fields, b: Fields, s: AuditSubject) => string> = 
     `invited ${s.invitee ?? a.email ?? a.githubLogin ?? "someone"} as ${role(a.role)}`,
   "mail.resend": (a) => `sent the e-mail “${a.subject}” to ${a.to} again`,
   "member.invite_revoke": (_a, _b, s) => `withdrew the invitation${s.invitee ? ` of ${s.invitee}` : ""}`,
+  "member.invite_expired": (_a, b) =>
+    `found the invitation of ${b.email ?? b.githubLogin ?? "someone"} expired; it is closed`,
   "member.join": (a) => `joined the workshop as ${role(a.role)}`,
   "member.role": (a, b, s) =>
     `changed ${s.personName ?? "a member"}'s role from ${role(b.role)} to ${role(a.role)}`,

@@ -1,6 +1,6 @@
-import { and, eq, gt, isNull, or, sql } from "drizzle-orm";
+import { and, eq, gt, isNull, lte, or, sql } from "drizzle-orm";
 import { audit } from "~/audit/write.server";
-import type { Db } from "~/db/client.server";
+import type { Db, Tx } from "~/db/client.server";
 import { identities, invitations, members, sessions, users, workshops } from "~/db/schema";
 import { hashToken } from "./session.server";
 import type { ProviderProfile } from "./github.server";
@@ -33,45 +33,87 @@ export async function signInFromProfile(db: Db, profile: ProviderProfile, now = 
         .where(and(eq(identities.provider, "github"), eq(identities.providerUserId, profile.providerUserId)));
     }
 
-    const [membership] = await tx
-      .select({ id: members.id, workshopId: members.workshopId })
-      .from(members)
-      .where(eq(members.userId, userId));
-    if (!membership) {
-      const [invite] = await tx
-        .select()
-        .from(invitations)
-        .where(
-          and(
-            isNull(invitations.acceptedAt),
-            gt(invitations.expiresAt, now),
-            or(
-              sql`lower(${invitations.githubLogin}) = lower(${profile.login})`,
-              profile.email ? sql`lower(${invitations.email}) = lower(${profile.email})` : sql`false`,
-            ),
-          ),
-        )
-        .orderBy(invitations.createdAt)
-        .limit(1);
-      if (invite) {
-        await tx.insert(members).values({
-          workshopId: invite.workshopId,
-          userId,
-          role: invite.role,
-          skill: skillForRole(invite.role),
-        });
-        await tx.update(invitations).set({ acceptedAt: now }).where(eq(invitations.id, invite.id));
-        await audit(tx, {
-          workshopId: invite.workshopId,
-          actorUserId: userId,
-          action: "member.join",
-          entity: "member",
-          entityId: userId,
-          after: { role: invite.role },
-        });
-      }
-    }
+    await joinByInvitation(tx, userId, { login: profile.login, email: profile.email }, now);
     return userId;
+  });
+}
+
+/**
+ * The user whose e-mail address a sign-in code has just proven, created on first sign-in (with no
+ * workshop: they land on /welcome unless an invitation for the address is waiting).
+ */
+export async function signInFromEmail(db: Db, email: string, now = new Date()) {
+  return db.transaction(async (tx) => {
+    const [known] = await tx
+      .select({ id: users.id })
+      .from(users)
+      .where(sql`lower(${users.email}) = lower(${email})`)
+      .orderBy(users.createdAt)
+      .limit(1);
+    let userId = known?.id;
+    if (!userId) {
+      const [created] = await tx
+        .insert(users)
+        .values({ name: email.split("@")[0], email })
+        .returning({ id: users.id });
+      userId = created.id;
+    }
+    await joinByInvitation(tx, userId, { email }, now);
+    return userId;
+  });
+}
+
+/**
+ * Accepts the oldest live invitation for this login or address when the user is not yet a member
+ * anywhere. Invitations for them that have run out are closed here, each with its audit row, so the
+ * admin sees why nobody joined.
+ */
+async function joinByInvitation(
+  tx: Tx,
+  userId: string,
+  who: { login?: string; email?: string | null },
+  now: Date,
+) {
+  const [membership] = await tx.select({ id: members.id }).from(members).where(eq(members.userId, userId));
+  if (membership) return;
+  const matches = or(
+    who.login ? sql`lower(${invitations.githubLogin}) = lower(${who.login})` : sql`false`,
+    who.email ? sql`lower(${invitations.email}) = lower(${who.email})` : sql`false`,
+  );
+  const expired = await tx
+    .delete(invitations)
+    .where(and(isNull(invitations.acceptedAt), lte(invitations.expiresAt, now), matches))
+    .returning();
+  for (const old of expired)
+    await audit(tx, {
+      workshopId: old.workshopId,
+      actorUserId: userId,
+      action: "member.invite_expired",
+      entity: "invitation",
+      entityId: old.id,
+      before: { email: old.email, githubLogin: old.githubLogin, role: old.role },
+    });
+  const [invite] = await tx
+    .select()
+    .from(invitations)
+    .where(and(isNull(invitations.acceptedAt), gt(invitations.expiresAt, now), matches))
+    .orderBy(invitations.createdAt)
+    .limit(1);
+  if (!invite) return;
+  await tx.insert(members).values({
+    workshopId: invite.workshopId,
+    userId,
+    role: invite.role,
+    skill: skillForRole(invite.role),
+  });
+  await tx.update(invitations).set({ acceptedAt: now }).where(eq(invitations.id, invite.id));
+  await audit(tx, {
+    workshopId: invite.workshopId,
+    actorUserId: userId,
+    action: "member.join",
+    entity: "member",
+    entityId: userId,
+    after: { role: invite.role, invitation: invite.id },
   });
 }
 

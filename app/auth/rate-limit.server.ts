@@ -1,28 +1,58 @@
 import { isIPv6 } from "node:net";
-import { and, count, eq, gt, lt } from "drizzle-orm";
+import { and, count, eq, gt, lt, min } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { signInAttempts } from "~/db/schema";
 
+// Long enough for every window in use (the longest is the code's 15 minutes), so clearing old rows
+// never shortens another bucket's window.
+const KEEP_MS = 24 * 3600 * 1000;
+
+export type LimitAnswer = { ok: true } | { ok: false; retryAt: Date };
+
 /**
  * Counts sign-in attempts per bucket in a sliding window, in the database so that every app
- * server shares the count. Throws a 429 once the bucket is full; the attempt is not recorded then,
- * so a blocked caller does not extend its own block.
+ * server shares the count. Once the bucket is full the answer says when its oldest attempt leaves
+ * the window; the attempt is not recorded then, so a blocked caller does not extend its own block.
  */
-export async function limitSignIn(db: Db, bucket: string, limit: number, windowS: number, now = new Date()) {
+export async function countSignIn(
+  db: Db,
+  bucket: string,
+  limit: number,
+  windowS: number,
+  now = new Date(),
+): Promise<LimitAnswer> {
   const since = new Date(now.getTime() - windowS * 1000);
-  const [{ n }] = await db
-    .select({ n: count() })
+  const [{ n, oldest }] = await db
+    .select({ n: count(), oldest: min(signInAttempts.at) })
     .from(signInAttempts)
     .where(and(eq(signInAttempts.bucket, bucket), gt(signInAttempts.at, since)));
   if (n >= limit) {
-    throw new Response("Too many sign-in attempts. Wait a few minutes, then try again.", {
-      status: 429,
-      headers: { "Retry-After": String(windowS) },
-    });
+    const first = oldest ? new Date(oldest) : now;
+    return { ok: false, retryAt: new Date(first.getTime() + windowS * 1000) };
   }
   await db.insert(signInAttempts).values({ bucket, at: now });
-  // Old rows are of no use to any window; clear them as we go.
-  if (Math.random() < 0.05) await db.delete(signInAttempts).where(lt(signInAttempts.at, since));
+  if (Math.random() < 0.05)
+    await db.delete(signInAttempts).where(lt(signInAttempts.at, new Date(now.getTime() - KEEP_MS)));
+  return { ok: true };
+}
+
+/** When to try again, in words a person can act on: the clock time (UTC) and the minutes to wait. */
+export function tryAgainAt(retryAt: Date, now = new Date()): string {
+  const minutes = Math.max(1, Math.ceil((retryAt.getTime() - now.getTime()) / 60_000));
+  const clock = retryAt.toISOString().slice(11, 16);
+  return `Try again after ${clock} UTC (in about ${minutes} minute${minutes === 1 ? "" : "s"}).`;
+}
+
+/** countSignIn for callers that answer with a status: a full bucket is a 429 with Retry-After. */
+export async function limitSignIn(db: Db, bucket: string, limit: number, windowS: number, now = new Date()) {
+  const answer = await countSignIn(db, bucket, limit, windowS, now);
+  if (!answer.ok) {
+    const waitS = Math.max(1, Math.ceil((answer.retryAt.getTime() - now.getTime()) / 1000));
+    throw new Response(`Too many sign-in attempts. ${tryAgainAt(answer.retryAt, now)}`, {
+      status: 429,
+      headers: { "Retry-After": String(waitS), "X-Retry-At": answer.retryAt.toISOString() },
+    });
+  }
 }
 
 /**

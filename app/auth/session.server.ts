@@ -1,5 +1,5 @@
 import { createHash, randomBytes } from "node:crypto";
-import { and, eq, gt } from "drizzle-orm";
+import { and, desc, eq, gt } from "drizzle-orm";
 import type { Db } from "~/db/client.server";
 import { sessions } from "~/db/schema";
 
@@ -76,4 +76,30 @@ export async function revokeSession(db: Db, token: string) {
 
 export async function revokeAllSessions(db: Db, userId: string) {
   await db.delete(sessions).where(eq(sessions.userId, userId));
+}
+
+// Only the start is shown: last_seen_at is written when a session opens and not on each request.
+/** The person's live sessions, newest first, each marked when it is the one asking. */
+export async function listSessions(db: Db, userId: string, currentToken: string, now = new Date()) {
+  const current = hashToken(currentToken);
+  const rows = await db
+    .select({
+      id: sessions.tokenHash,
+      createdAt: sessions.createdAt,
+      userAgent: sessions.userAgent,
+    })
+    .from(sessions)
+    .where(and(eq(sessions.userId, userId), gt(sessions.expiresAt, now)))
+    .orderBy(desc(sessions.createdAt));
+  // The stored hash names the row in the form: it cannot be turned back into a token.
+  return rows.map((r) => ({ ...r, current: r.id === current }));
+}
+
+/** Ends one of the person's own sessions by its stored hash; another person's is never touched. */
+export async function revokeSessionById(db: Db, userId: string, id: string) {
+  const gone = await db
+    .delete(sessions)
+    .where(and(eq(sessions.tokenHash, id), eq(sessions.userId, userId)))
+    .returning({ id: sessions.tokenHash });
+  return gone.length > 0;
 }

@@ -39,9 +39,21 @@ const EnvSchema = z.object({
     message: "GITHUB_OAUTH_URL (base of /login/oauth/authorize and /access_token) is required",
   }),
   GITHUB_API_URL: z.url({ message: "GITHUB_API_URL (base of /user) is required" }),
-  SIGN_IN_LIMIT_PER_IP: z.coerce.number().int().positive().default(20),
+  // Per client address only a flood is refused: a workshop signs everyone in from one address.
+  SIGN_IN_LIMIT_PER_IP: z.coerce.number().int().positive().default(300),
   SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().positive().default(10),
   SIGN_IN_WINDOW_S: z.coerce.number().int().positive().default(300),
+  // The e-mailed code: its key (64 hex digits; derived from the OAuth secret when unset), how long a
+  // code lives, how many tries one code gets, and how many codes and tries one address gets per window.
+  SIGN_IN_CODE_SECRET: z
+    .string()
+    .regex(/^[0-9a-fA-F]{64}$/, "SIGN_IN_CODE_SECRET must be 64 hexadecimal digits")
+    .optional(),
+  SIGN_IN_CODE_PERIOD_S: z.coerce.number().int().positive().default(600),
+  SIGN_IN_CODE_TRIES: z.coerce.number().int().positive().default(5),
+  SIGN_IN_CODE_SENDS_PER_ADDRESS: z.coerce.number().int().positive().default(5),
+  SIGN_IN_CODE_TRIES_PER_ADDRESS: z.coerce.number().int().positive().default(10),
+  SIGN_IN_CODE_WINDOW_S: z.coerce.number().int().positive().default(900),
   ...paymentsFields(),
 });
 

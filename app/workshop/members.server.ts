@@ -72,7 +72,7 @@ export async function invite(
     return `Invitation saved for ${input.target}: they join as ${input.role} when they next sign in.`;
   return mailConfigured()
     ? `Invitation saved; the e-mail to ${input.target} is queued and goes out shortly (Settings → Mail shows when it was sent).`
-    : `Invitation saved for ${input.target}: no mail server is set up, so the e-mail waits in the outbox. Tell them to sign in with that address.`;
+    : `Invitation saved for ${input.target}: no mail server is set up, so the e-mail waits in the outbox. Tell them to sign in with a code sent to that address.`;
 }
 
 function invitationMail(by: CurrentMember, email: string, role: Role) {
@@ -81,7 +81,7 @@ function invitationMail(by: CurrentMember, email: string, role: Role) {
     kind: "invitation",
     to: email,
     subject: `You are invited to ${by.workshopName} on Ramplight`,
-    text: `${by.name} invited you to join ${by.workshopName} as ${role}.\n\nSign in at ${env().APP_URL}/sign-in with the GitHub account that uses this e-mail address.\n\nThe invitation is valid for ${INVITE_DAYS} days.`,
+    text: `${by.name} invited you to join ${by.workshopName} as ${role}.\n\nTo accept, open this link and ask for a sign-in code; we e-mail it to this address, and once you type it in you are in the workshop:\n${env().APP_URL}/sign-in/code?email=${encodeURIComponent(email)}\n\nNo other account is needed. The invitation is valid for ${INVITE_DAYS} days.`,
   };
 }
 

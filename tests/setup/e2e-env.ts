@@ -30,4 +30,6 @@ export const E2E_ENV = {
   // Journeys sign in many times in a row; the limiter itself is tested on its own.
   SIGN_IN_LIMIT_PER_IP: "1000",
   SIGN_IN_LIMIT_PER_ACCOUNT: "1000",
+  // Short-lived codes so a journey can watch one expire; the other code limits keep their defaults.
+  SIGN_IN_CODE_PERIOD_S: "30",
 } as const;

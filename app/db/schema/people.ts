@@ -100,6 +100,13 @@ export const signInAttempts = pgTable(
   (t) => [index("sign_in_attempts_bucket_at_idx").on(t.bucket, t.at)],
 );
 
+// E-mailed sign-in codes that have signed someone in. The code's secret travels in the browser's
+// cookie, so only this row makes a code single-use: a copy of the cookie replayed later is refused.
+export const usedSignInCodes = pgTable("used_sign_in_codes", {
+  codeHash: text("code_hash").primaryKey(), // SHA-256 of the encrypted code the cookie carries
+  usedAt: timestamp("used_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
 export type User = typeof users.$inferSelect;
 export type MemberRow = typeof members.$inferSelect;
 export type Session = typeof sessions.$inferSelect;

@@ -8,7 +8,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
   try {
     return await finishSignIn(context.get(dbContext), request, context.get(clientAddressContext));
   } catch (error) {
-    if (error instanceof SignInRefused) return data({ message: error.message }, { status: 400 });
+    if (error instanceof SignInRefused) return data({ message: error.message }, { status: error.status });
     throw error;
   }
 }

@@ -1,9 +1,12 @@
 import { Form, href } from "react-router";
 import { Wordmark } from "~/components/brand";
 
+const button =
+  "inline-flex min-h-tap w-full items-center justify-center rounded-lg px-5 text-lg font-semibold text-white";
+
 export function SignInPanel({ message, next }: { message?: string; next?: string }) {
   return (
-    <main className="mx-auto flex min-h-dvh max-w-md flex-col justify-center gap-6 px-5">
+    <main className="mx-auto flex min-h-dvh max-w-md flex-col justify-center gap-6 px-5 py-10">
       <Wordmark />
       <h1 className="text-2xl font-semibold">Sign in to your workshop</h1>
       {message ? (
@@ -11,11 +14,26 @@ export function SignInPanel({ message, next }: { message?: string; next?: string
           {message}
         </p>
       ) : null}
+      <Form method="post" action={href("/sign-in/code")} className="grid gap-3" noValidate>
+        <input type="hidden" name="intent" value="send" />
+        <label className="font-medium">
+          Your e-mail address
+          <input
+            name="email"
+            type="email"
+            autoComplete="email"
+            className="mt-1 min-h-tap w-full rounded-lg border border-rule bg-card px-3 text-base"
+          />
+        </label>
+        <button type="submit" className={`${button} bg-uv-600 hover:bg-uv-700`}>
+          E-mail me a code
+        </button>
+      </Form>
       <Form method="post" action={href("/auth/github")}>
         {next ? <input type="hidden" name="next" value={next} /> : null}
         <button
           type="submit"
-          className="inline-flex min-h-tap w-full items-center justify-center rounded-lg bg-uv-600 px-5 text-lg font-semibold text-white hover:bg-uv-700"
+          className="inline-flex min-h-tap w-full items-center justify-center rounded-lg border border-rule bg-card px-5 text-lg font-semibold hover:bg-paper"
         >
           Continue with GitHub
         </button>

@@ -66,8 +66,8 @@ export default function Welcome({ loaderData, actionData }: Route.ComponentProps
       <h1 className="text-2xl font-semibold">Welcome, {loaderData.name}</h1>
       <p className="text-graphite-700">
         No workshop has invited you yet. Set up your own and you become its admin; the starter knowledge base
-        comes with it. If you expected an invitation, ask your workshop admin to invite your GitHub login or
-        e-mail.
+        comes with it. If you expected an invitation, ask your workshop admin to invite the e-mail address you
+        signed in with.
       </p>
       <FormMessages errors={errors} />
       <Form method="post" className="grid gap-4" noValidate>

@@ -105,6 +105,12 @@ export default function WorkshopSettings({ loaderData, actionData }: Route.Compo
           Mail
         </Link>
       ) : null}
+      <Link
+        className="inline-flex min-h-tap items-center font-medium text-uv-700 underline"
+        to={href("/settings/sessions")}
+      >
+        Signed-in devices
+      </Link>
       <Form method="post" action={href("/sign-out")} className="ml-auto">
         <input type="hidden" name="scope" value="everywhere" />
         <button
