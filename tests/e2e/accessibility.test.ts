@@ -12,7 +12,7 @@ const SYMPTOM = (key: string) => `/kb/symptoms/${kbId("bramblegate", "symptom", 
 
 // Who sees which pages: every route with a screen appears at least once.
 const VISITS: { login: string | null; paths: string[] }[] = [
-  { login: null, paths: ["/", "/sign-in", "/no-such-page"] },
+  { login: null, paths: ["/", "/sign-in", "/sign-in/code", "/no-such-page"] },
   { login: "sam-newcomer", paths: ["/welcome"] },
   {
     login: "priya-hale",
@@ -50,7 +50,14 @@ const VISITS: { login: string | null; paths: string[] }[] = [
   { login: "dana-reyes", paths: ["/desk", CASE("b4"), `${CASE("b4")}/estimate`, CASE("b5")] },
   {
     login: "ines-okafor",
-    paths: ["/settings", "/settings/members", "/settings/audit", "/settings/mail", "/settings/payments"],
+    paths: [
+      "/settings",
+      "/settings/members",
+      "/settings/audit",
+      "/settings/mail",
+      "/settings/payments",
+      "/settings/sessions",
+    ],
   },
 ];
 
