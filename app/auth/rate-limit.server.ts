@@ -20,6 +20,7 @@ export async function countSignIn(
   limit: number,
   windowS: number,
   now = new Date(),
+  record = true, // false: only ask whether the bucket is full, counting nothing
 ): Promise<LimitAnswer> {
   const since = new Date(now.getTime() - windowS * 1000);
   const [{ n, oldest }] = await db
@@ -30,6 +31,7 @@ export async function countSignIn(
     const first = oldest ? new Date(oldest) : now;
     return { ok: false, retryAt: new Date(first.getTime() + windowS * 1000) };
   }
+  if (!record) return { ok: true };
   await db.insert(signInAttempts).values({ bucket, at: now });
   if (Math.random() < 0.05)
     await db.delete(signInAttempts).where(lt(signInAttempts.at, new Date(now.getTime() - KEEP_MS)));

@@ -1,5 +1,6 @@
 import { Form } from "react-router";
-import { dbContext } from "~/http/context";
+import { clientAddressContext, dbContext } from "~/http/context";
+import { withOwnerLinkLimit } from "~/estimates/owner-link-limit.server";
 import { ownerPage, runOwnerAnswer, startOwnerPayment } from "~/estimates/owner-page.server";
 import { FindingCard, OwnerHeader } from "~/components/estimate/owner-summary";
 import { ItemCard, TotalsTable } from "~/components/estimate/money-lines";
@@ -15,8 +16,11 @@ export function headers() {
   return { "Cache-Control": "no-store", "Referrer-Policy": "no-referrer", "X-Robots-Tag": "noindex" };
 }
 
-export async function loader({ params, context }: Route.LoaderArgs) {
-  const page = await ownerPage(context.get(dbContext), params.token);
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const db = context.get(dbContext);
+  const page = await withOwnerLinkLimit(db, request, context.get(clientAddressContext), () =>
+    ownerPage(db, params.token),
+  );
   const { ids: _ids, ...shown } = page;
   return shown;
 }
@@ -24,8 +28,11 @@ export async function loader({ params, context }: Route.LoaderArgs) {
 export async function action({ request, params, context }: Route.ActionArgs) {
   const db = context.get(dbContext);
   const form = await request.formData();
-  if (form.get("intent") === "pay") return startOwnerPayment(db, params.token);
-  return runOwnerAnswer(db, params.token, form);
+  return withOwnerLinkLimit(db, request, context.get(clientAddressContext), () =>
+    form.get("intent") === "pay"
+      ? startOwnerPayment(db, params.token)
+      : runOwnerAnswer(db, params.token, form),
+  );
 }
 
 export function meta({ data }: Route.MetaArgs) {
