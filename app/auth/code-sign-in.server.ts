@@ -49,14 +49,8 @@ export async function sendCode(db: Db, request: Request, socketAddress: string |
   const parsed = EmailSchema.safeParse(form);
   if (!parsed.success) return refused({ email: [CODE_ERRORS.invalidEmail] }, 400);
   const email = parsed.data.email;
-  const ip = await countSignIn(
-    db,
-    `ip:${clientIp(request, socketAddress)}`,
-    e.SIGN_IN_LIMIT_PER_IP,
-    e.SIGN_IN_WINDOW_S,
-  );
-  if (!ip.ok)
-    return refused({ form: [`Too many sign-ins from this network. ${tryAgainAt(ip.retryAt)}`] }, 429);
+  const network = await networkLimit(db, request, socketAddress);
+  if (network) return network;
   const sends = await countSignIn(
     db,
     `code-send:${email}`,
@@ -73,6 +67,20 @@ export async function sendCode(db: Db, request: Request, socketAddress: string |
   return runStrategy(db, new Request(request.url, { method: "POST", headers: request.headers, body }));
 }
 
+/** The far higher limit per client address; a refusal to return, or null to go on. */
+async function networkLimit(db: Db, request: Request, socketAddress: string | null) {
+  const e = env();
+  const ip = await countSignIn(
+    db,
+    `ip:${clientIp(request, socketAddress)}`,
+    e.SIGN_IN_LIMIT_PER_IP,
+    e.SIGN_IN_WINDOW_S,
+  );
+  return ip.ok
+    ? null
+    : refused({ form: [`Too many sign-ins from this network. ${tryAgainAt(ip.retryAt)}`] }, 429);
+}
+
 /** Step two: the code typed on the page, or the one the magic link carries (same browser only). */
 export async function verifyCode(db: Db, request: Request, socketAddress: string | null) {
   const e = env();
@@ -86,14 +94,8 @@ export async function verifyCode(db: Db, request: Request, socketAddress: string
   if (!email || !jwe) return refused({ code: [CODE_ERRORS.missingSessionEmail] }, 400);
   const key = codeKey(jwe);
 
-  const ip = await countSignIn(
-    db,
-    `ip:${clientIp(request, socketAddress)}`,
-    e.SIGN_IN_LIMIT_PER_IP,
-    e.SIGN_IN_WINDOW_S,
-  );
-  if (!ip.ok)
-    return refused({ form: [`Too many sign-ins from this network. ${tryAgainAt(ip.retryAt)}`] }, 429);
+  const network = await networkLimit(db, request, socketAddress);
+  if (network) return network;
   // Per address first: whoever guesses at one person's codes is stopped long before the network is.
   const perAddress = await countSignIn(
     db,
