@@ -1,7 +1,7 @@
 import { data } from "react-router";
 import { finishSignIn, SignInRefused } from "~/auth/sign-in.server";
 import { clientAddressContext, dbContext } from "~/http/context";
-import { SignInPanel } from "./sign-in-panel";
+import { SignInPanel } from "~/components/sign-in-panel";
 import type { Route } from "./+types/callback";
 
 export async function loader({ request, context }: Route.LoaderArgs) {

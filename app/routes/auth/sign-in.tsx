@@ -3,7 +3,7 @@ import { tryAgainAt } from "~/auth/rate-limit.server";
 import { getAccount } from "~/auth/guards.server";
 import { ROLE_HOME } from "~/domain/permissions";
 import { dbContext } from "~/http/context";
-import { SignInPanel } from "./sign-in-panel";
+import { SignInPanel } from "~/components/sign-in-panel";
 import type { Route } from "./+types/sign-in";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
